@@ -1,5 +1,11 @@
 package org.gatefit.cli;
 
+/** Entry point of {@code java -jar gatefit.jar}. */
 public final class Main {
-    public static void main(String[] args) { System.out.println("gatefit"); }
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.exit(Cli.run(args));
+    }
 }

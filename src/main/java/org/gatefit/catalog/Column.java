@@ -1,0 +1,61 @@
+package org.gatefit.catalog;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.regex.Pattern;
+
+/**
+ * One column of a catalog or stage sheet, as defined by the JSON Schema files in
+ * {@code catalog-schema/}.
+ *
+ * @param name         column name as it appears in CSV headers and JSON keys
+ * @param type         how cells are read
+ * @param unit         unit of a NUMBER column (null when the number has no unit, e.g. price)
+ * @param required     whether every row must fill it
+ * @param choices      allowed words of a CHOICE column, else empty
+ * @param pattern      pattern a TEXT cell must match, or null
+ * @param minimum      lower bound or null
+ * @param minExclusive whether the lower bound itself is excluded
+ * @param maximum      upper bound or null
+ * @param defaultValue value used when the cell is empty, as cell text, or null
+ * @param defaultFrom  name of another column whose value is used when this one is empty, or null
+ * @param description  one line for documentation and help
+ * @param example      an example value for messages, or null
+ */
+public record Column(String name, ColumnType type, Unit unit, boolean required, List<String> choices,
+                     Pattern pattern, Double minimum, boolean minExclusive, Double maximum,
+                     String defaultValue, String defaultFrom, String description, String example) {
+
+    public Column {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(type, "type");
+        choices = List.copyOf(choices);
+        if (type == ColumnType.CHOICE && choices.isEmpty()) {
+            throw new IllegalArgumentException("expected choices for column " + name + ", got none");
+        }
+        if (!name.matches("[a-z][a-z0-9_]*")) {
+            throw new IllegalArgumentException("expected a lower-case column name, got '" + name + "'");
+        }
+    }
+
+    /** Whether values are numbers (NUMBER or INTEGER). */
+    public boolean isNumeric() {
+        return type == ColumnType.NUMBER || type == ColumnType.INTEGER;
+    }
+
+    /** Unit symbol for tables and help, e.g. {@code nC}; empty when none. */
+    public String unitSymbol() {
+        return unit == null ? "" : unit.symbol();
+    }
+
+    /** What a cell must hold, for messages and docs. */
+    public String expectation() {
+        return switch (type) {
+            case TEXT -> pattern == null ? "text" : "text matching " + pattern.pattern();
+            case CHOICE -> "one of " + String.join(", ", choices);
+            case INTEGER -> "a whole number" + (example == null ? "" : ", e.g. " + example);
+            case NUMBER -> unit == null ? "a number" + (example == null ? "" : ", e.g. " + example)
+                    : Units.expectation(unit, example == null ? null : Double.valueOf(example));
+        };
+    }
+}

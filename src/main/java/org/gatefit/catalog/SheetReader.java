@@ -1,0 +1,497 @@
+package org.gatefit.catalog;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.PushbackInputStream;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HexFormat;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+
+/**
+ * Reads a CSV catalog or stage sheet row by row, checks every cell against the schema, and hands
+ * good rows to a {@link Sink}. Memory does not grow with the file: rows stream through; only the
+ * ids seen so far are kept, to find duplicates.
+ *
+ * <p>Accepts UTF-8 with or without a byte-order mark; comma, semicolon or tab separated (detected
+ * from the header line); LF or CRLF line ends; header names matched case-insensitively and
+ * trimmed. Every problem is located by physical line (as an editor numbers it) and column.
+ */
+public final class SheetReader {
+    /** Problems kept per file; the rest are counted. */
+    public static final int PROBLEM_CAP = 200;
+    private static final int SNIFF_LIMIT = 1 << 16;
+
+    /** Receives rows as they are read. */
+    public interface Sink {
+        /** A row that passed every check. */
+        void accept(Row row) throws IOException;
+
+        /** A row with problems, with its cells as read, for a rejects file. */
+        default void reject(List<String> header, long line, List<String> cells, List<Problem> problems)
+                throws IOException {
+        }
+    }
+
+    /**
+     * What reading a file found.
+     *
+     * @param file           file name as shown in messages
+     * @param kind           kind of rows (null when it could not be told)
+     * @param sha256         hex SHA-256 of the file's bytes
+     * @param rows           rows accepted
+     * @param rejected       rows with problems
+     * @param header         header cells as written
+     * @param unknownColumns header names the schema does not define (kept as extra attributes)
+     * @param delimiter      the separator detected
+     * @param problems       problems found, capped at {@link #PROBLEM_CAP}
+     * @param problemCount   all problems found
+     * @param fatal          whether reading stopped early (bad header, not UTF-8, unclosed quote)
+     */
+    public record Summary(String file, Kind kind, String sha256, long rows, long rejected, List<String> header,
+                          List<String> unknownColumns, char delimiter, List<Problem> problems, long problemCount,
+                          boolean fatal) {
+        public Summary {
+            header = List.copyOf(header);
+            unknownColumns = List.copyOf(unknownColumns);
+            problems = List.copyOf(problems);
+        }
+
+        /** Whether the file had no problem at all. */
+        public boolean clean() {
+            return problemCount == 0;
+        }
+    }
+
+    private final String file;
+    private final Kind forced;
+    private final List<Problem> problems = new ArrayList<>();
+    private long problemCount;
+
+    private SheetReader(String file, Kind forced) {
+        this.file = file;
+        this.forced = forced;
+    }
+
+    /**
+     * Reads {@code path}.
+     *
+     * @param displayName name used in messages (usually the path as the user typed it)
+     * @param forced      kind to read as, or null to tell it from the columns
+     */
+    public static Summary read(Path path, String displayName, Kind forced, Sink sink) throws IOException {
+        MessageDigest sha;
+        try {
+            sha = MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 missing from the JVM", e);
+        }
+        try (InputStream raw = Files.newInputStream(path);
+             DigestInputStream in = new DigestInputStream(raw, sha)) {
+            SheetReader r = new SheetReader(displayName, forced);
+            Summary s = r.read(in, sink);
+            in.transferTo(OutputStreamSink.INSTANCE);
+            return new Summary(s.file(), s.kind(), HexFormat.of().formatHex(sha.digest()), s.rows(), s.rejected(),
+                    s.header(), s.unknownColumns(), s.delimiter(), s.problems(), s.problemCount(), s.fatal());
+        }
+    }
+
+    /** Reads from a stream (SHA-256 left empty). */
+    public static Summary read(InputStream in, String displayName, Kind forced, Sink sink) throws IOException {
+        return new SheetReader(displayName, forced).read(in, sink);
+    }
+
+    private Summary read(InputStream in, Sink sink) throws IOException {
+        // The CSV parser closes its reader; the caller owns the stream (and hashes the rest of it).
+        InputStream shielded = new java.io.FilterInputStream(in) {
+            @Override
+            public void close() {
+            }
+        };
+        PushbackInputStream pin = new PushbackInputStream(shielded, 3);
+        byte[] bom = pin.readNBytes(3);
+        int keep = bom.length;
+        if (bom.length == 3 && (bom[0] & 0xff) == 0xEF && (bom[1] & 0xff) == 0xBB && (bom[2] & 0xff) == 0xBF) {
+            keep = 0;
+        } else if (bom.length >= 2 && (((bom[0] & 0xff) == 0xFE && (bom[1] & 0xff) == 0xFF)
+                || ((bom[0] & 0xff) == 0xFF && (bom[1] & 0xff) == 0xFE))) {
+            return fatal(null, List.of(), ',', Problem.ofLine(file, 1,
+                    "the file is UTF-16 text (expected UTF-8; save it as \"CSV UTF-8\")"));
+        }
+        if (bom.length == 0) {
+            return fatal(null, List.of(), ',', Problem.ofLine(file, 0,
+                    "the file is empty (expected a header line naming the columns, then one row per part)"));
+        }
+        pin.unread(bom, 0, keep);
+        CharsetDecoder dec = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        BufferedReader reader = new BufferedReader(new InputStreamReader(pin, dec), 1 << 16);
+        char delimiter;
+        try {
+            delimiter = sniffDelimiter(reader);
+        } catch (CharacterCodingException e) {
+            return fatal(null, List.of(), ',', notUtf8(1));
+        }
+        CSVFormat format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote('"')
+                .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(false).get();
+        try (CSVParser parser = CSVParser.builder().setReader(reader).setFormat(format).get()) {
+            return readRecords(parser, delimiter, sink);
+        }
+    }
+
+    private Summary readRecords(CSVParser parser, char delimiter, Sink sink) throws IOException {
+        Iterator<CSVRecord> it = parser.iterator();
+        long prevEnd = 0;
+        // Header: the first non-blank record.
+        List<String> header = null;
+        long headerLine = 0;
+        try {
+            while (it.hasNext()) {
+                CSVRecord rec = it.next();
+                long start = prevEnd + 1;
+                prevEnd = parser.getCurrentLineNumber();
+                if (!blank(rec)) {
+                    header = rec.toList();
+                    headerLine = start;
+                    break;
+                }
+            }
+        } catch (UncheckedIOException e) {
+            return fatal(null, List.of(), delimiter, readFailure(e, prevEnd + 1));
+        }
+        if (header == null) {
+            return fatal(null, List.of(), delimiter, Problem.ofLine(file, 0,
+                    "the file has no header line (expected a header naming the columns, then one row per part)"));
+        }
+        Layout layout = layout(header, headerLine, delimiter);
+        if (layout == null) {
+            return new Summary(file, kindOrNull(header), "", 0, 0, header, List.of(), delimiter, problems,
+                    problemCount, true);
+        }
+        Schema schema = Schema.of(layout.kind);
+        boolean decimalComma = delimiter != ',';
+        String keyColumn = layout.kind == Kind.STAGE ? "stage" : "part_number";
+        Map<String, Long> seen = new HashMap<>();
+        long rows = 0;
+        long rejected = 0;
+        boolean fatal = false;
+        while (true) {
+            CSVRecord rec;
+            long start = prevEnd + 1;
+            try {
+                if (!it.hasNext()) {
+                    break;
+                }
+                rec = it.next();
+            } catch (UncheckedIOException e) {
+                add(readFailure(e, start));
+                fatal = true;
+                break;
+            }
+            prevEnd = parser.getCurrentLineNumber();
+            if (blank(rec)) {
+                continue;
+            }
+            List<Problem> rowProblems = new ArrayList<>(2);
+            Row row = parseRow(schema, layout, rec, start, decimalComma, keyColumn, rowProblems);
+            if (row != null) {
+                String id = Row.normaliseKey(row.key());
+                Long before = seen.putIfAbsent(id, start);
+                if (before != null) {
+                    rowProblems.add(new Problem(file, start, keyColumn, layout.position(keyColumn), row.key(),
+                            "duplicate " + keyColumn.replace('_', ' ') + " '" + row.key() + "', also on line " + before
+                                    + " (expected each " + (layout.kind == Kind.STAGE ? "stage" : "part") + " once per file)"));
+                }
+            }
+            if (rowProblems.isEmpty()) {
+                sink.accept(row);
+                rows++;
+            } else {
+                rowProblems.forEach(this::add);
+                sink.reject(header, start, rec.toList(), rowProblems);
+                rejected++;
+            }
+        }
+        if (!fatal && rows == 0 && rejected == 0) {
+            add(Problem.ofLine(file, headerLine, "the file has a header but no rows (expected one row per "
+                    + (layout.kind == Kind.STAGE ? "stage" : layout.kind.id()) + " after the header)"));
+            fatal = true;
+        }
+        return new Summary(file, layout.kind, "", rows, rejected, header, layout.unknown, delimiter, problems,
+                problemCount, fatal);
+    }
+
+    /** Where each schema column sits in the header, and which columns are extra. */
+    private static final class Layout {
+        Kind kind;
+        final Map<String, Integer> index = new LinkedHashMap<>();
+        final List<String> unknown = new ArrayList<>();
+        final Map<Integer, String> extraIndex = new LinkedHashMap<>();
+        final List<Integer> unnamed = new ArrayList<>();
+        int width;
+
+        int position(String column) {
+            Integer i = index.get(column);
+            return i == null ? 0 : i + 1;
+        }
+    }
+
+    private Layout layout(List<String> header, long line, char delimiter) {
+        Layout l = new Layout();
+        l.width = header.size();
+        for (String h : header) {
+            for (int i = 0; i < h.length(); i++) {
+                char ch = h.charAt(i);
+                if (ch < 0x20 && ch != '\t' || ch == '\uFFFD') {
+                    add(Problem.ofLine(file, line, "the header holds control characters (expected a text CSV file"
+                            + " whose first line names the columns; is this a binary file?)"));
+                    return null;
+                }
+            }
+        }
+        l.kind = forced != null ? forced : kindOrNull(header);
+        if (l.kind == null) {
+            add(Problem.ofLine(file, line, "cannot tell what the file holds (expected a 'technology' column for"
+                    + " switches, 'topology' for drivers or 'stage' for a stage sheet, or give --kind); found columns: "
+                    + String.join(", ", header)));
+            return null;
+        }
+        Schema schema = Schema.of(l.kind);
+        Map<String, Integer> firstSeen = new HashMap<>();
+        boolean ok = true;
+        for (int i = 0; i < header.size(); i++) {
+            String name = header.get(i).strip().toLowerCase(Locale.ROOT);
+            if (name.isEmpty()) {
+                l.unnamed.add(i);
+                continue;
+            }
+            Integer dup = firstSeen.putIfAbsent(name, i);
+            if (dup != null) {
+                add(new Problem(file, line, name, i + 1, header.get(i), "duplicate column '" + name
+                        + "', also column " + (dup + 1) + " (expected each column once)"));
+                ok = false;
+                continue;
+            }
+            if (schema.column(name).isPresent()) {
+                l.index.put(name, i);
+            } else {
+                l.unknown.add(header.get(i).strip());
+                l.extraIndex.put(i, header.get(i).strip());
+            }
+        }
+        List<String> missing = new ArrayList<>();
+        for (String r : schema.requiredNames()) {
+            if (!l.index.containsKey(r)) {
+                missing.add(r);
+            }
+        }
+        if (!missing.isEmpty()) {
+            add(Problem.ofLine(file, line, "missing required column" + (missing.size() > 1 ? "s " : " ")
+                    + String.join(", ", missing) + " for a " + l.kind.id() + " " + (l.kind == Kind.STAGE ? "sheet" : "catalog")
+                    + " (expected columns: " + String.join(", ", schema.requiredNames()) + "; found: "
+                    + String.join(", ", header) + ")"));
+            ok = false;
+        }
+        return ok ? l : null;
+    }
+
+    private Row parseRow(Schema schema, Layout l, CSVRecord rec, long line, boolean decimalComma, String keyColumn,
+                         List<Problem> out) {
+        if (rec.size() != l.width) {
+            out.add(Problem.ofLine(file, line, "the row has " + rec.size() + " cells but the header has " + l.width
+                    + " (expected one cell per column; a value holding the separator needs double quotes)"));
+            return null;
+        }
+        Map<String, Object> values = new LinkedHashMap<>();
+        for (Column c : schema.columns()) {
+            Integer idx = l.index.get(c.name());
+            String cell = idx == null ? "" : rec.get(idx);
+            Object v;
+            try {
+                v = Cells.parse(c, cell, decimalComma);
+            } catch (BadValueException e) {
+                out.add(new Problem(file, line, c.name(), idx + 1, cell, e.getMessage()));
+                continue;
+            }
+            if (v == null && c.defaultFrom() != null) {
+                v = values.get(c.defaultFrom());
+            }
+            if (v == null && c.defaultValue() != null) {
+                try {
+                    v = Cells.parse(c, c.defaultValue(), false);
+                } catch (BadValueException e) {
+                    throw new IllegalStateException("schema default of " + c.name() + " is invalid", e);
+                }
+            }
+            if (v == null) {
+                if (c.required()) {
+                    out.add(new Problem(file, line, c.name(), idx == null ? 0 : idx + 1, cell,
+                            "required value is empty (expected " + c.expectation() + ")"));
+                }
+                continue;
+            }
+            values.put(c.name(), v);
+        }
+        for (int i : l.unnamed) {
+            if (!rec.get(i).isBlank()) {
+                out.add(new Problem(file, line, null, i + 1, rec.get(i), "value '" + rec.get(i).strip()
+                        + "' in column " + (i + 1) + ", which has no header name (expected a header for every column"
+                        + " that holds values)"));
+            }
+        }
+        Map<String, String> extras = new LinkedHashMap<>();
+        l.extraIndex.forEach((i, name) -> {
+            String v = rec.get(i).strip();
+            if (!v.isEmpty()) {
+                extras.put(name, Cells.restoreText(v));
+            }
+        });
+        if (!out.isEmpty()) {
+            return null;
+        }
+        return new Row(schema.kind(), values.get(keyColumn).toString(), file, line, values, extras);
+    }
+
+    private static Kind kindOrNull(List<String> header) {
+        boolean tech = false;
+        boolean topo = false;
+        boolean stage = false;
+        for (String h : header) {
+            String n = h.strip().toLowerCase(Locale.ROOT);
+            tech |= n.equals("technology");
+            topo |= n.equals("topology");
+            stage |= n.equals("stage");
+        }
+        if (stage && !tech && !topo) {
+            return Kind.STAGE;
+        }
+        if (tech && !topo) {
+            return Kind.SWITCH;
+        }
+        if (topo && !tech) {
+            return Kind.DRIVER;
+        }
+        return null;
+    }
+
+    private static boolean blank(CSVRecord rec) {
+        for (String s : rec) {
+            if (!s.isBlank()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private Problem readFailure(UncheckedIOException e, long line) {
+        Throwable c = e.getCause();
+        while (c != null) {
+            if (c instanceof CharacterCodingException) {
+                return notUtf8(line);
+            }
+            c = c.getCause();
+        }
+        String msg = String.valueOf(e.getCause() == null ? e.getMessage() : e.getCause().getMessage());
+        if (msg.contains("EOF reached before encapsulated token finished")) {
+            return Problem.ofLine(file, line, "a double quote opened in the row starting here is never closed"
+                    + " (expected a closing \" before the end of the file)");
+        }
+        if (msg.contains("invalid char between encapsulated token and delimiter")) {
+            return Problem.ofLine(file, line, "text follows a closing double quote in the row starting here"
+                    + " (expected a separator after a quoted value; write a quote inside a value as \"\")");
+        }
+        return Problem.ofLine(file, line, "cannot read the CSV: " + msg);
+    }
+
+    private Problem notUtf8(long line) {
+        return Problem.ofLine(file, line, "the file is not UTF-8 text from here on (expected a UTF-8 CSV file;"
+                + " is it a binary file, or saved in another encoding?)");
+    }
+
+    private Summary fatal(Kind kind, List<String> header, char delimiter, Problem p) {
+        add(p);
+        return new Summary(file, kind, "", 0, 0, header, List.of(), delimiter, problems, problemCount, true);
+    }
+
+    private void add(Problem p) {
+        problemCount++;
+        if (problems.size() < PROBLEM_CAP) {
+            problems.add(p);
+        }
+    }
+
+    /** Picks the separator that splits the header line into the most cells (quotes respected). */
+    private static char sniffDelimiter(Reader reader) throws IOException {
+        reader.mark(SNIFF_LIMIT);
+        int comma = 0;
+        int semi = 0;
+        int tab = 0;
+        boolean quoted = false;
+        boolean content = false;
+        for (int i = 0; i < SNIFF_LIMIT; i++) {
+            int ch = reader.read();
+            if (ch < 0) {
+                break;
+            }
+            if (ch == '"') {
+                quoted = !quoted;
+            } else if (!quoted) {
+                if (ch == '\n' || ch == '\r') {
+                    if (content) {
+                        break;
+                    }
+                    continue;
+                }
+                content = true;
+                switch (ch) {
+                    case ',' -> comma++;
+                    case ';' -> semi++;
+                    case '\t' -> tab++;
+                    default -> {
+                    }
+                }
+            }
+        }
+        reader.reset();
+        if (semi > comma && semi >= tab) {
+            return ';';
+        }
+        if (tab > comma && tab > semi) {
+            return '\t';
+        }
+        return ',';
+    }
+
+    /** Discards bytes (for hashing the rest of a file after a fatal problem). */
+    private static final class OutputStreamSink extends java.io.OutputStream {
+        static final OutputStreamSink INSTANCE = new OutputStreamSink();
+
+        @Override
+        public void write(int b) {
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) {
+        }
+    }
+}

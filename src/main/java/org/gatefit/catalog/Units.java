@@ -1,0 +1,191 @@
+package org.gatefit.catalog;
+
+import java.math.BigDecimal;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Parses quantities as people write them in catalog cells and on the command line.
+ *
+ * <ul>
+ *   <li>A bare number is in the column's unit: {@code 130} in {@code q_g_nc} is 130 nC.</li>
+ *   <li>A number may carry a unit with an SI prefix, with or without a space: {@code 130nC},
+ *       {@code 0.13 uC}, {@code 4.7µF}, {@code 100kHz}, {@code 50 ns}. The prefix alone also works:
+ *       {@code 130 n} in a charge column is 130 nC.</li>
+ *   <li>Resistance may use the IEC 60062 letter-and-digit code, where the letter marks the decimal
+ *       point and the multiplier: R (×1), K or k (×10³), M (×10⁶), G (×10⁹), T (×10¹²), e.g.
+ *       {@code 4k7} = 4.7 kΩ, {@code 2R2} = 2.2 Ω, {@code R47} = 0.47 Ω, {@code 1M0} = 1 MΩ.
+ *       Capacitance may use the same code with p, n, u/µ, m: {@code 4n7} = 4.7 nF.</li>
+ *   <li>A ratio column accepts a per-cent sign: {@code 95%} = 0.95.</li>
+ *   <li>A unit of another dimension ({@code 12 A} in a volts column) is an error, as are NaN,
+ *       infinities and text that is not a number.</li>
+ * </ul>
+ *
+ * Scaling between prefixes is done in decimal ({@link BigDecimal}), so {@code 0.13 uC} becomes
+ * exactly the double nearest 130 in a nanocoulomb column.
+ */
+public final class Units {
+
+    private static final Pattern NUMBER =
+            Pattern.compile("^([+-]?(?:\\d+(?:[.,]\\d*)?|[.,]\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*)$");
+    private static final Pattern RES_CODE = Pattern.compile("^(\\d*)([RKkMGT])(\\d*)$");
+    private static final Pattern CAP_CODE = Pattern.compile("^(\\d+)([pnuµμm])(\\d+)$");
+
+    private Units() {
+    }
+
+    /**
+     * Parses {@code text} for a column in {@code unit} and returns the value in that unit.
+     *
+     * @param decimalComma whether a comma may stand for the decimal point (files separated by
+     *                     semicolons or tabs, as spreadsheets in many locales write them)
+     */
+    public static double parse(String text, Unit unit, boolean decimalComma) throws BadValueException {
+        String t = text.strip();
+        if (t.isEmpty()) {
+            throw new BadValueException("empty value (expected " + expectation(unit, null) + ")");
+        }
+        BigDecimal code = iecCode(t, unit.dimension());
+        if (code != null) {
+            return finish(code, 0, unit, text);
+        }
+        Matcher m = NUMBER.matcher(t);
+        if (!m.matches()) {
+            throw new BadValueException("'" + text + "' is not a number (expected " + expectation(unit, null) + ")");
+        }
+        String num = m.group(1);
+        if (num.indexOf(',') >= 0) {
+            if (!decimalComma) {
+                throw new BadValueException("'" + text + "' uses a comma as decimal mark; in a comma-separated file"
+                        + " write a point (expected " + expectation(unit, null) + ")");
+            }
+            num = num.replace(',', '.');
+        }
+        BigDecimal value = new BigDecimal(num);
+        String suffix = m.group(2).strip();
+        if (suffix.isEmpty()) {
+            return finish(value, unit.exponent(), unit, text);
+        }
+        if (suffix.equals("%")) {
+            if (unit.dimension() != Dimension.RATIO) {
+                throw new BadValueException("'" + text + "' is a percentage, but this column is in "
+                        + unit.plural() + " (expected " + expectation(unit, null) + ")");
+            }
+            return finish(value.movePointLeft(2), 0, unit, text);
+        }
+        Integer exponent = suffixExponent(suffix, unit.dimension());
+        if (exponent != null) {
+            return finish(value, exponent, unit, text);
+        }
+        for (Dimension other : Dimension.values()) {
+            if (other != unit.dimension() && suffixExponent(suffix, other) != null && !isPrefixOnly(suffix)) {
+                throw new BadValueException("'" + text + "' is a " + other.quantity() + " (" + suffix
+                        + "), but this column is a " + unit.dimension().quantity() + " (expected "
+                        + expectation(unit, null) + ")");
+            }
+        }
+        throw new BadValueException("'" + text + "' has an unknown unit '" + suffix + "' (expected "
+                + expectation(unit, null) + ")");
+    }
+
+    /** Parses a whole non-negative or signed count, e.g. stock; a point with zeros after it is accepted. */
+    public static long parseInteger(String text) throws BadValueException {
+        String t = text.strip();
+        try {
+            BigDecimal d = new BigDecimal(t);
+            return d.longValueExact();
+        } catch (NumberFormatException | ArithmeticException e) {
+            throw new BadValueException("'" + text + "' is not a whole number (expected an integer, e.g. 1200)");
+        }
+    }
+
+    /**
+     * What a column expects, for messages: {@code nanocoulombs, e.g. 130 or 130nC}.
+     *
+     * @param example an example value in the column's unit, or null for a generic one
+     */
+    public static String expectation(Unit unit, Double example) {
+        String ex = example == null ? "1.5" : Numbers.format(example);
+        if (unit.dimension() == Dimension.RATIO) {
+            return "a fraction from 0 to 1, e.g. 0.95 or 95%";
+        }
+        return unit.plural() + ", e.g. " + ex + " or " + ex + unit.symbol();
+    }
+
+    private static boolean isPrefixOnly(String suffix) {
+        return Unit.Prefix.ofSymbol(suffix) != null;
+    }
+
+    /** The total power of ten a suffix stands for in a column of {@code dim}, or null if it is no unit of it. */
+    private static Integer suffixExponent(String suffix, Dimension dim) {
+        if (dim == Dimension.RATIO) {
+            return null;
+        }
+        for (String base : dim.spellings()) {
+            if (suffix.endsWith(base)) {
+                Unit.Prefix p = Unit.Prefix.ofSymbol(suffix.substring(0, suffix.length() - base.length()));
+                if (p != null) {
+                    return p.exponent();
+                }
+            }
+        }
+        if (dim == Dimension.RESISTANCE) {
+            String lower = suffix.toLowerCase(Locale.ROOT);
+            for (String base : new String[] {"ohms", "ohm"}) {
+                if (lower.endsWith(base)) {
+                    String pre = suffix.substring(0, suffix.length() - base.length());
+                    Unit.Prefix p = Unit.Prefix.ofSymbol(pre);
+                    if (p != null) {
+                        return p.exponent();
+                    }
+                }
+            }
+        }
+        Unit.Prefix p = Unit.Prefix.ofSymbol(suffix);
+        if (p != null && p != Unit.Prefix.NONE) {
+            return p.exponent();
+        }
+        return null;
+    }
+
+    /** IEC 60062 letter-and-digit code value in base units (Ω or F scaled by the letter), or null. */
+    private static BigDecimal iecCode(String t, Dimension dim) {
+        Matcher m;
+        int exp;
+        if (dim == Dimension.RESISTANCE) {
+            m = RES_CODE.matcher(t);
+            if (!m.matches() || (m.group(1).isEmpty() && m.group(3).isEmpty())) {
+                return null;
+            }
+            exp = switch (m.group(2)) {
+                case "R" -> 0;
+                case "K", "k" -> 3;
+                case "M" -> 6;
+                case "G" -> 9;
+                case "T" -> 12;
+                default -> throw new IllegalStateException(m.group(2));
+            };
+        } else if (dim == Dimension.CAPACITANCE) {
+            m = CAP_CODE.matcher(t);
+            if (!m.matches()) {
+                return null;
+            }
+            exp = Unit.Prefix.ofSymbol(m.group(2)).exponent();
+        } else {
+            return null;
+        }
+        String digits = (m.group(1).isEmpty() ? "0" : m.group(1)) + "." + (m.group(3).isEmpty() ? "0" : m.group(3));
+        return new BigDecimal(digits).scaleByPowerOfTen(exp);
+    }
+
+    /** {@code value × 10^valueExp} is the SI value; returns it in the column's unit. */
+    private static double finish(BigDecimal value, int valueExp, Unit unit, String text) throws BadValueException {
+        BigDecimal inColumn = value.scaleByPowerOfTen(valueExp - unit.exponent());
+        double d = inColumn.doubleValue();
+        if (!Double.isFinite(d)) {
+            throw new BadValueException("'" + text + "' is out of range (expected " + expectation(unit, null) + ")");
+        }
+        return d == 0 ? 0.0 : d;
+    }
+}

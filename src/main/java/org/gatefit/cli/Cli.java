@@ -1,0 +1,83 @@
+package org.gatefit.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.NoSuchFileException;
+import java.time.Clock;
+import java.util.Map;
+import org.gatefit.catalog.BadValueException;
+import org.gatefit.catalog.CatalogDataException;
+import org.gatefit.index.CatalogBusyException;
+import picocli.CommandLine;
+
+/** Builds the command line; {@code main} and the tests both use {@link #create}. */
+public final class Cli {
+    private Cli() {
+    }
+
+    /** A ready command line writing results to {@code out} and messages to {@code err}. */
+    public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
+        Context ctx = new Context(out, err, env, clock);
+        GatefitCommand top = new GatefitCommand();
+        CommandLine cl = new CommandLine(top);
+        cl.addSubcommand("import", new ImportCommand(ctx));
+        cl.addSubcommand("validate", new ValidateCommand(ctx));
+        cl.addSubcommand("info", new InfoCommand(ctx));
+        cl.addSubcommand("find", new FindCommand(ctx));
+        cl.addSubcommand("show", new ShowCommand(ctx));
+        cl.addSubcommand("export", new ExportCommand(ctx));
+        cl.addSubcommand("demo", new DemoCommand(ctx));
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.setUsageHelpWidth(100);
+        cl.setExecutionExceptionHandler((ex, cmd, parsed) -> handle(ex, cmd, top.verbose));
+        cl.setParameterExceptionHandler((ex, args) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("gatefit: " + ex.getMessage());
+            c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for the options.");
+            c.getErr().flush();
+            return ExitCode.USAGE;
+        });
+        return cl;
+    }
+
+    /** Runs with the real streams and environment. */
+    public static int run(String... args) {
+        PrintWriter out = new PrintWriter(System.out, true);
+        PrintWriter err = new PrintWriter(System.err, true);
+        int code = create(out, err, System.getenv(), Clock.systemUTC()).execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    private static int handle(Exception ex, CommandLine cmd, boolean verbose) {
+        PrintWriter err = cmd.getErr();
+        int code;
+        if (ex instanceof CatalogDataException e) {
+            err.println(e.getMessage());
+            code = ExitCode.BAD_DATA;
+        } else if (ex instanceof UsageException || ex instanceof BadValueException) {
+            err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
+            code = ExitCode.USAGE;
+        } else if (ex instanceof NoSuchFileException e) {
+            err.println("gatefit " + cmd.getCommandName() + ": no such file: " + e.getFile());
+            code = ExitCode.BAD_DATA;
+        } else if (ex instanceof CatalogBusyException) {
+            err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
+            code = ExitCode.ENVIRONMENT;
+        } else if (ex instanceof java.io.IOException) {
+            err.println("gatefit " + cmd.getCommandName() + ": " + ex);
+            code = ExitCode.ENVIRONMENT;
+        } else {
+            err.println("gatefit " + cmd.getCommandName() + ": internal error: " + ex
+                    + (verbose ? "" : " (run with --verbose for the stack trace)"));
+            code = ExitCode.ENVIRONMENT;
+        }
+        if (verbose) {
+            ex.printStackTrace(err);
+        }
+        err.flush();
+        return code;
+    }
+}

@@ -1,0 +1,41 @@
+package org.gatefit.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * What commands need from the world: the two output streams, the environment and a clock. Built
+ * once by {@link Cli}; tests pass their own.
+ */
+final class Context {
+    final PrintWriter out;
+    final PrintWriter err;
+    final Map<String, String> env;
+    final Clock clock;
+
+    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
+        this.out = out;
+        this.err = err;
+        this.env = Map.copyOf(env);
+        this.clock = clock;
+    }
+
+    /** The per-user data directory's catalog: XDG_DATA_HOME, ~/.local/share, or the platform's equivalent. */
+    Path defaultCatalog() {
+        String os = System.getProperty("os.name", "").toLowerCase(Locale.ROOT);
+        String home = env.getOrDefault("HOME", System.getProperty("user.home", "."));
+        if (os.contains("win")) {
+            String local = env.get("LOCALAPPDATA");
+            return Path.of(local != null ? local : home, "gatefit", "catalog");
+        }
+        if (os.contains("mac")) {
+            return Path.of(home, "Library", "Application Support", "gatefit", "catalog");
+        }
+        String xdg = env.get("XDG_DATA_HOME");
+        return (xdg != null && !xdg.isBlank() ? Path.of(xdg) : Path.of(home, ".local", "share")).resolve("gatefit")
+                .resolve("catalog");
+    }
+}

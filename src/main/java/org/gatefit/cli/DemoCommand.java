@@ -1,0 +1,120 @@
+package org.gatefit.cli;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.FileVisitResult;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+@Command(name = "demo", mixinStandardHelpOptions = true,
+        header = "Walk through gatefit on the bundled example catalog (needs no imported catalog).",
+        description = {"Copies the example catalogs that ship inside the jar to a temporary folder, imports them into a temporary catalog, and runs the commands an engineer would, printing each command line and its output. Your own catalog is not touched. The example makers and parts are invented."})
+final class DemoCommand implements Callable<Integer> {
+    static final String EXAMPLES = "/org/gatefit/examples/";
+    static final List<String> FILES = List.of("switches.csv", "drivers.csv", "stages.csv", "bom.csv");
+
+    private final Context ctx;
+
+    DemoCommand(Context ctx) {
+        this.ctx = ctx;
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        Path tmp = Files.createTempDirectory("gatefit-demo");
+        try {
+            Path ex = Files.createDirectories(tmp.resolve("examples"));
+            for (String f : FILES) {
+                try (InputStream in = DemoCommand.class.getResourceAsStream(EXAMPLES + f)) {
+                    if (in == null) {
+                        throw new IllegalStateException("example file " + f + " is missing from the jar");
+                    }
+                    Files.copy(in, ex.resolve(f));
+                }
+            }
+            Path catalog = tmp.resolve("catalog");
+            String sw = ex.resolve("switches.csv").toString();
+            String dr = ex.resolve("drivers.csv").toString();
+            String st = ex.resolve("stages.csv").toString();
+            ctx.out.println("gatefit demo: an invented scenario (invented company, makers and parts).");
+            ctx.out.println("Example files: " + ex + "   temporary catalog: " + catalog);
+            ctx.out.println();
+            int worst = 0;
+            worst = Math.max(worst, step("1. Import the switch and driver catalogs (one commit; every row checked)",
+                    catalog, "import", sw, dr));
+            worst = Math.max(worst, step("2. What the catalog holds and where it came from", catalog, "info"));
+            worst = Math.max(worst, step("3. Find SiC MOSFETs rated 1200 V or more, lowest gate charge first", catalog,
+                    "find", "--kind", "switch", "--where", "technology = sic-mosfet", "--where", "v_block_v >= 1.2kV",
+                    "--sort", "q_g_nc"));
+            worst = Math.max(worst, step("4. Find isolated drivers that sink at least 4 A", catalog,
+                    "find", "--kind", "driver", "--where", "topology = isolated", "--where", "i_sink_a >= 4A",
+                    "--sort", "i_sink_a:desc"));
+            String first = firstPart(ex.resolve("switches.csv"));
+            if (first != null) {
+                worst = Math.max(worst, step("5. Every column of one switch, with units", catalog, "show", first));
+            }
+            worst = Math.max(worst, step("6. Check the design's stage sheet as import would (writes nothing)", catalog,
+                    "validate", st));
+            ctx.out.println("Figures are estimates from datasheet values: verify on the bench and against each part's");
+            ctx.out.println("datasheet. High voltage can kill; follow local codes and licensed practice.");
+            return worst <= ExitCode.FAILED ? ExitCode.OK : worst;
+        } finally {
+            deleteTree(tmp);
+        }
+    }
+
+    private int step(String title, Path catalog, String... args) {
+        ctx.out.println("== " + title);
+        List<String> shown = new ArrayList<>();
+        for (String a : args) {
+            shown.add(a.contains(" ") ? "'" + a + "'" : a);
+        }
+        ctx.out.println("$ gatefit " + String.join(" ", shown));
+        ctx.out.flush();
+        List<String> full = new ArrayList<>(List.of("--catalog", catalog.toString()));
+        full.addAll(List.of(args));
+        CommandLine cl = Cli.create(ctx.out, ctx.err, ctx.env, ctx.clock);
+        int code = cl.execute(full.toArray(String[]::new));
+        ctx.out.println();
+        ctx.out.flush();
+        return code;
+    }
+
+    private static String firstPart(Path csv) throws IOException {
+        List<String> lines = Files.readAllLines(csv);
+        if (lines.size() < 2) {
+            return null;
+        }
+        String row = lines.get(1);
+        int comma = row.indexOf(',');
+        return comma < 0 ? row : row.substring(0, comma);
+    }
+
+    private static void deleteTree(Path root) {
+        try {
+            Files.walkFileTree(root, new SimpleFileVisitor<>() {
+                @Override
+                public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
+                    Files.delete(file);
+                    return FileVisitResult.CONTINUE;
+                }
+
+                @Override
+                public FileVisitResult postVisitDirectory(Path dir, IOException exc) throws IOException {
+                    Files.delete(dir);
+                    return FileVisitResult.CONTINUE;
+                }
+            });
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot remove the demo's temporary folder " + root, e);
+        }
+    }
+}

@@ -1,0 +1,60 @@
+package org.gatefit.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.SheetReader;
+import org.gatefit.index.Importer;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+@Command(name = "import", mixinStandardHelpOptions = true,
+        header = "Import switch and driver catalogs (CSV) into the catalog, in one commit.",
+        description = {"Reads each FILE (UTF-8, comma, semicolon or tab separated; the kind is told from the columns: 'technology' for switches, 'topology' for drivers) and upserts its parts by part number. All files go in one commit: if any row of any file is bad, nothing is written and every problem is listed with file, line and column (exit 3). Columns the schema does not know are kept as extra attributes. See catalog-schema/README.md for the columns and units."})
+final class ImportCommand extends CatalogCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "FILE", arity = "1..*", description = "CSV files to import.")
+    List<Path> files;
+
+    @Option(names = "--kind", paramLabel = "KIND", converter = KindConverter.class,
+            description = "Read every file as switch or driver instead of telling from the columns.")
+    Kind kind;
+
+    @Option(names = "--replace", description = "Drop the imported kinds' previous parts (same commit).")
+    boolean replace;
+
+    @Option(names = "--skip-invalid", paramLabel = "REJECTS.csv",
+            description = "Import the good rows and write the rejected rows, with their reasons, to REJECTS.csv.")
+    Path rejects;
+
+    ImportCommand(Context ctx) {
+        super(ctx);
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        Path dir = catalogDir();
+        List<String> names = new ArrayList<>();
+        for (Path f : files) {
+            names.add(f.toString());
+        }
+        Importer.Result r = new Importer(dir, ctx.clock).run(files, names,
+                new Importer.Options(kind, replace, rejects), n -> { });
+        for (SheetReader.Summary s : r.files()) {
+            if (!s.unknownColumns().isEmpty()) {
+                ctx.err.println("note: " + s.file() + ": columns not in the " + s.kind() + " schema, kept as extra"
+                        + " attributes: " + String.join(", ", s.unknownColumns()));
+            }
+            ctx.out.printf("%s: %d %s rows imported%s (sha256 %s)%n", s.file(), s.rows(), s.kind(),
+                    s.rejected() > 0 ? ", " + s.rejected() + " rejected" : "", s.sha256().substring(0, 12));
+        }
+        if (r.rejected() > 0) {
+            ctx.err.println("note: " + r.rejected() + " rejected rows written to " + rejects + " with their reasons");
+        }
+        ctx.out.println("catalog: " + dir + (replace ? " (replaced the imported kinds)" : ""));
+        ctx.out.flush();
+        return ExitCode.OK;
+    }
+}

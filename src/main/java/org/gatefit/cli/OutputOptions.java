@@ -1,0 +1,43 @@
+package org.gatefit.cli;
+
+import java.io.FilterWriter;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.gatefit.report.Format;
+import picocli.CommandLine.Option;
+
+/** {@code --format} and {@code --output}, shared by every command that prints results. */
+final class OutputOptions {
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "Output format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    Format format = Format.TEXT;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
+            description = "Write results to FILE instead of standard output.")
+    Path output;
+
+    /** Where results go; closing it closes the file but never standard output. */
+    Writer open(Context ctx) throws IOException {
+        return open(ctx, output);
+    }
+
+    /** Standard output when {@code output} is null, else the file (parent folders created). */
+    static Writer open(Context ctx, Path output) throws IOException {
+        if (output == null) {
+            return new FilterWriter(ctx.out) {
+                @Override
+                public void close() throws IOException {
+                    flush();
+                }
+            };
+        }
+        Path parent = output.toAbsolutePath().getParent();
+        if (parent != null) {
+            Files.createDirectories(parent);
+        }
+        return Files.newBufferedWriter(output, StandardCharsets.UTF_8);
+    }
+}

@@ -1,0 +1,168 @@
+package org.gatefit.index;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.index.DirectoryReader;
+import org.apache.lucene.index.IndexNotFoundException;
+import org.apache.lucene.index.Term;
+import org.apache.lucene.search.IndexSearcher;
+import org.apache.lucene.search.MatchNoDocsQuery;
+import org.apache.lucene.search.Query;
+import org.apache.lucene.search.ScoreDoc;
+import org.apache.lucene.search.Sort;
+import org.apache.lucene.search.TermQuery;
+import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
+import org.apache.lucene.index.StoredFields;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Row;
+
+/**
+ * Read side of the catalog: a point-in-time view of the last committed import. Open it in
+ * try-with-resources; an empty or missing directory reads as an empty catalog.
+ */
+public final class Catalog implements AutoCloseable {
+    private final Path dir;
+    private final Directory directory;
+    private final DirectoryReader reader;
+    private final IndexSearcher searcher;
+
+    private Catalog(Path dir, Directory directory, DirectoryReader reader) {
+        this.dir = dir;
+        this.directory = directory;
+        this.reader = reader;
+        this.searcher = reader == null ? null : new IndexSearcher(reader);
+    }
+
+    /** Opens the catalog in {@code dir}; a directory without an index gives an empty catalog. */
+    public static Catalog open(Path dir) throws IOException {
+        if (!Files.isDirectory(dir)) {
+            return new Catalog(dir, null, null);
+        }
+        Directory d = FSDirectory.open(dir);
+        try {
+            if (!DirectoryReader.indexExists(d)) {
+                d.close();
+                return new Catalog(dir, null, null);
+            }
+            return new Catalog(dir, d, DirectoryReader.open(d));
+        } catch (IndexNotFoundException e) {
+            d.close();
+            return new Catalog(dir, null, null);
+        } catch (IOException | RuntimeException e) {
+            d.close();
+            throw e;
+        }
+    }
+
+    /** Where the catalog lives. */
+    public Path directory() {
+        return dir;
+    }
+
+    /** Whether nothing has been imported. */
+    public boolean isEmpty() {
+        return reader == null || reader.numDocs() == 0;
+    }
+
+    /** The searcher, for engines that query the index directly; null when the catalog is empty. */
+    public IndexSearcher searcher() {
+        return searcher;
+    }
+
+    /** Number of parts of a kind. */
+    public int count(Kind kind) throws IOException {
+        if (searcher == null) {
+            return 0;
+        }
+        return searcher.count(new TermQuery(new Term(Fields.KIND, kind.id())));
+    }
+
+    /** Parts per kind (switch, driver). */
+    public Map<Kind, Integer> counts() throws IOException {
+        Map<Kind, Integer> m = new EnumMap<>(Kind.class);
+        for (Kind k : Kind.values()) {
+            if (k.isPart()) {
+                m.put(k, count(k));
+            }
+        }
+        return m;
+    }
+
+    /** A part by kind and part number (matched case-insensitively). */
+    public Optional<Row> get(Kind kind, String partNumber) throws IOException {
+        if (searcher == null) {
+            return Optional.empty();
+        }
+        TopDocs td = searcher.search(new TermQuery(new Term(Fields.ID, Fields.id(kind.id(), partNumber))), 1);
+        if (td.scoreDocs.length == 0) {
+            return Optional.empty();
+        }
+        return Optional.of(Documents.toRow(searcher.storedFields().document(td.scoreDocs[0].doc)));
+    }
+
+    /** Parts with this part number, of any kind. */
+    public List<Row> lookup(String partNumber) throws IOException {
+        List<Row> out = new ArrayList<>();
+        for (Kind k : Kind.values()) {
+            if (k.isPart()) {
+                get(k, partNumber).ifPresent(out::add);
+            }
+        }
+        return out;
+    }
+
+    /** Runs a query and loads the matching parts, in the order of {@code sort} (null: by score). */
+    public List<Row> search(Query query, Sort sort, int limit) throws IOException {
+        if (searcher == null || query instanceof MatchNoDocsQuery) {
+            return List.of();
+        }
+        int n = Math.max(1, Math.min(limit, Math.max(1, reader.maxDoc())));
+        TopDocs td = sort == null ? searcher.search(query, n) : searcher.search(query, n, sort);
+        List<Row> out = new ArrayList<>(td.scoreDocs.length);
+        StoredFields sf = searcher.storedFields();
+        for (ScoreDoc sd : td.scoreDocs) {
+            out.add(Documents.toRow(sf.document(sd.doc)));
+        }
+        return out;
+    }
+
+    /** The import history, oldest first. */
+    public List<ImportRecord> history() throws IOException {
+        if (searcher == null) {
+            return List.of();
+        }
+        List<ImportRecord> out = new ArrayList<>();
+        TopDocs td = searcher.search(new TermQuery(new Term(Fields.KIND, Fields.IMPORT)), Math.max(1, reader.maxDoc()));
+        StoredFields sf = searcher.storedFields();
+        for (ScoreDoc sd : td.scoreDocs) {
+            Document d = sf.document(sd.doc);
+            out.add(new ImportRecord(d.get(Fields.SOURCE_FILE), d.get(Fields.IMPORT_SHA), d.get(Fields.IMPORT_KIND),
+                    d.getField(Fields.IMPORT_ROWS).numericValue().longValue(),
+                    Instant.ofEpochMilli(d.getField(Fields.IMPORT_TIME).numericValue().longValue()),
+                    d.get(Fields.IMPORT_MODE)));
+        }
+        out.sort(Comparator.comparing(ImportRecord::time));
+        return out;
+    }
+
+    @Override
+    public void close() throws IOException {
+        if (reader != null) {
+            reader.close();
+        }
+        if (directory != null) {
+            directory.close();
+        }
+    }
+}
