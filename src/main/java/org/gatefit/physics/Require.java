@@ -14,7 +14,8 @@ final class Require {
     static double finite(String name, String unit, double value) {
         if (!Double.isFinite(value)) {
             throw new IllegalArgumentException(
-                    "expected " + name + " to be a finite number of " + unit + ", got " + value);
+                    "expected " + name + " to be a finite number"
+                            + (unit.isEmpty() ? "" : " of " + unit) + ", got " + value);
         }
         return value;
     }
@@ -24,7 +25,7 @@ final class Require {
         finite(name, unit, value);
         if (value <= 0) {
             throw new IllegalArgumentException(
-                    "expected " + name + " > 0 " + unit + ", got " + value);
+                    "expected " + name + " > 0" + suffix(unit) + ", got " + value);
         }
         return value;
     }
@@ -34,7 +35,7 @@ final class Require {
         finite(name, unit, value);
         if (value < 0) {
             throw new IllegalArgumentException(
-                    "expected " + name + " >= 0 " + unit + ", got " + value);
+                    "expected " + name + " >= 0" + suffix(unit) + ", got " + value);
         }
         return value;
     }
@@ -44,7 +45,7 @@ final class Require {
         finite(name, unit, value);
         if (value > 0) {
             throw new IllegalArgumentException(
-                    "expected " + name + " <= 0 " + unit + ", got " + value);
+                    "expected " + name + " <= 0" + suffix(unit) + ", got " + value);
         }
         return value;
     }
@@ -54,7 +55,8 @@ final class Require {
         finite(name, unit, value);
         if (value < lo || value > hi) {
             throw new IllegalArgumentException(
-                    "expected " + name + " in [" + lo + ", " + hi + "] " + unit + ", got " + value);
+                    "expected " + name + " in [" + lo + ", " + hi + "]" + suffix(unit)
+                            + ", got " + value);
         }
         return value;
     }
@@ -64,6 +66,10 @@ final class Require {
         if (!(a > b)) {
             throw new IllegalArgumentException("expected " + what + ", got " + a + " and " + b);
         }
+    }
+
+    private static String suffix(String unit) {
+        return unit.isEmpty() ? "" : " " + unit;
     }
 
     /** True when an optional catalog input is given (NaN means "not given"). */
