@@ -1,0 +1,106 @@
+package org.gatefit.physics;
+
+/**
+ * Gate-drive current: the average current a transition needs and the peak current a driver
+ * can deliver through the gate resistance.
+ *
+ * <p>Sources: plain circuit theory (I = Q/t, Ohm's law); the peak-current form and the cap at
+ * the rated peak follow the gate-drive chapter of Mohan, Undeland, Robbins, <i>Power
+ * Electronics</i>, 3rd ed. All values are SI: V, A, C, s, Ω.
+ */
+public final class DriveCurrent {
+
+    private DriveCurrent() {
+    }
+
+    /**
+     * Average gate current needed to move a gate charge in a given time: {@code I = Q_g / t}.
+     * The rule of thumb is a driver rated well above this figure (common practice).
+     *
+     * @param gateCharge Q_g over the swing used, C (≥ 0)
+     * @param transitionTime target edge time t, s (&gt; 0)
+     * @return required average gate current, A
+     */
+    public static double required(double gateCharge, double transitionTime) {
+        Require.nonNegative("gate charge Q_g", "C", gateCharge);
+        Require.positive("transition time t", "s", transitionTime);
+        return gateCharge / transitionTime;
+    }
+
+    /**
+     * Peak gate current through the loop resistance, capped at the driver's rated peak:
+     * {@code I_pk = min(I_rated, ΔV / (R_driver + R_g,ext + R_g,int))}. The uncapped value is the
+     * current at the start of the edge, when the gate is still at the opposite level, so ΔV is
+     * the full swing (on level minus off level). Use the source resistance and the turn-on
+     * resistor for the source current, the sink resistance and the turn-off resistor for the
+     * sink current.
+     *
+     * <p>Assumes a resistive driver output stage; a real output also saturates, which the cap
+     * models crudely.
+     *
+     * @param swing ΔV across the gate loop at the start of the edge, V (≥ 0)
+     * @param driverResistance driver output resistance (source or sink), Ω (≥ 0)
+     * @param externalGateResistance external gate resistor, Ω (≥ 0)
+     * @param internalGateResistance switch internal gate resistance, Ω (≥ 0; 0 if not given)
+     * @param ratedPeak the driver's rated peak current, A (&gt; 0)
+     * @return peak gate current, A
+     */
+    public static double peak(double swing, double driverResistance, double externalGateResistance,
+            double internalGateResistance, double ratedPeak) {
+        Require.nonNegative("swing ΔV", "V", swing);
+        Require.positive("rated peak current", "A", ratedPeak);
+        double r = totalResistance(driverResistance, externalGateResistance, internalGateResistance);
+        if (r == 0) {
+            return ratedPeak;
+        }
+        return Math.min(ratedPeak, swing / r);
+    }
+
+    /**
+     * Sum of the gate-loop resistances {@code R_driver + R_g,ext + R_g,int}.
+     *
+     * @return total loop resistance, Ω
+     */
+    public static double totalResistance(double driverResistance, double externalGateResistance,
+            double internalGateResistance) {
+        Require.nonNegative("driver resistance", "Ω", driverResistance);
+        Require.nonNegative("external gate resistance R_g", "Ω", externalGateResistance);
+        Require.nonNegative("internal gate resistance R_g,int", "Ω", internalGateResistance);
+        return driverResistance + externalGateResistance + internalGateResistance;
+    }
+
+    /**
+     * The driver output resistance to use: the catalog value when given, else the estimate
+     * {@code R ≈ V_supply / I_peak}. The estimate assumes the rated peak is the short-circuit
+     * current of a resistive output at the given supply; real outputs are partly current
+     * sources, so the estimate is flagged.
+     *
+     * @param catalogResistance the datasheet output resistance, Ω (≥ 0), or NaN when not given
+     * @param supply the driver output supply, V (&gt; 0)
+     * @param ratedPeak the rated peak current of that output, A (&gt; 0)
+     * @return the resistance and whether it is an estimate
+     */
+    public static DriverResistance outputResistance(double catalogResistance, double supply,
+            double ratedPeak) {
+        if (Require.given(catalogResistance)) {
+            Require.nonNegative("driver output resistance", "Ω", catalogResistance);
+            return new DriverResistance(catalogResistance, false);
+        }
+        Require.positive("driver supply", "V", supply);
+        Require.positive("rated peak current", "A", ratedPeak);
+        return new DriverResistance(supply / ratedPeak, true);
+    }
+
+    /**
+     * A driver output resistance, and whether it was estimated from V / I_peak rather than
+     * taken from the datasheet.
+     *
+     * @param ohms resistance, Ω (finite, ≥ 0)
+     * @param estimated true when derived from supply and rated peak current
+     */
+    public record DriverResistance(double ohms, boolean estimated) {
+        public DriverResistance {
+            Require.nonNegative("driver output resistance", "Ω", ohms);
+        }
+    }
+}

@@ -1,0 +1,80 @@
+package org.gatefit.physics;
+
+/**
+ * Preferred-number series for resistors and capacitors, IEC 60063:2015 ("Preferred number
+ * series for resistors and capacitors"): E6, E12 and E24, two significant figures per decade.
+ *
+ * <p>Rounding works on any positive value in any decade. "Nearest" is nearest on a logarithmic
+ * scale (the series are geometric, so that is the nearest step in ratio); ties go up.
+ */
+public enum ESeries {
+    /** E6 (±20 % tolerance series). */
+    E6(10, 15, 22, 33, 47, 68),
+    /** E12 (±10 % tolerance series). */
+    E12(10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82),
+    /** E24 (±5 % tolerance series). */
+    E24(10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39, 43, 47, 51, 56, 62, 68, 75,
+            82, 91);
+
+    /** Relative tolerance for "already a series value". */
+    private static final double EPS = 1e-9;
+
+    private final int[] mantissas;
+
+    ESeries(int... mantissas) {
+        this.mantissas = mantissas;
+    }
+
+    /** The two-digit values of one decade (10 … 91), in order. */
+    public int[] decade() {
+        return mantissas.clone();
+    }
+
+    /** Round to the nearest series value on a log scale (ties up). */
+    public double roundNearest(double value) {
+        double up = roundUp(value);
+        double down = roundDown(value);
+        return Math.log(up / value) <= Math.log(value / down) ? up : down;
+    }
+
+    /** Round up to the smallest series value ≥ {@code value} (for a minimum capacitance). */
+    public double roundUp(double value) {
+        Require.positive("value to round", "", value);
+        int decade = (int) Math.floor(Math.log10(value));
+        for (int d = decade - 1; d <= decade + 1; d++) {
+            for (int m : mantissas) {
+                double v = scaled(m, d - 1);
+                if (v >= value * (1 - EPS)) {
+                    return v;
+                }
+            }
+        }
+        throw new AssertionError("no series value above " + value);
+    }
+
+    /** Round down to the largest series value ≤ {@code value} (for a maximum resistance). */
+    public double roundDown(double value) {
+        Require.positive("value to round", "", value);
+        int decade = (int) Math.floor(Math.log10(value));
+        for (int d = decade + 1; d >= decade - 1; d--) {
+            for (int k = mantissas.length - 1; k >= 0; k--) {
+                double v = scaled(mantissas[k], d - 1);
+                if (v <= value * (1 + EPS)) {
+                    return v;
+                }
+            }
+        }
+        throw new AssertionError("no series value below " + value);
+    }
+
+    /** True when the value is in the series (to a relative 1e-9). */
+    public boolean contains(double value) {
+        Require.positive("value", "", value);
+        return Math.abs(roundNearest(value) - value) <= EPS * value;
+    }
+
+    /** m·10^e, computed so that exact decimal values round once (10^e is exact for |e| ≤ 22). */
+    private static double scaled(int m, int e) {
+        return e >= 0 ? m * Math.pow(10, e) : m / Math.pow(10, -e);
+    }
+}

@@ -1,0 +1,31 @@
+package org.gatefit.physics;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class DeadTimeTest {
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(textBlock = """
+        # source,                                                    tdoff, tf, tdon, mismatch, expected ns
+        'common practice, no source (REFERENCES §9 budget)',         50,    20, 15,   10,       65
+        'common practice, no source: fast turn-on needs no margin',  10,    5,  40,   0,        0
+        """)
+    void deadTimeCoversTheWorstCaseTurnOff(String source, double tdoff, double tf, double tdon,
+            double mismatch, double expected) {
+        assertEquals(expected,
+                DeadTime.minimum(tdoff * 1e-9, tf * 1e-9, tdon * 1e-9, mismatch * 1e-9) * 1e9,
+                1e-9, source);
+    }
+
+    @Test
+    void rejectsNegativeTimes() {
+        assertEquals("expected delay mismatch >= 0 s, got -1.0E-9",
+                assertThrows(IllegalArgumentException.class,
+                        () -> DeadTime.minimum(1e-9, 1e-9, 1e-9, -1e-9)).getMessage());
+    }
+}

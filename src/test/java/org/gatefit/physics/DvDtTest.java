@@ -1,0 +1,85 @@
+package org.gatefit.physics;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class DvDtTest {
+
+    private static final double PF = 1e-12;
+    private static final double V_PER_NS = 1e9;
+
+    @Test
+    void referenceCheckValues() {
+        // REFERENCES §7 (computed): 10 pF, 50 V/ns, 6 Ω → 3.0 V; C_iss 1 nF, 400 V → 2.21 V;
+        // allowed dv/dt at V_th 1.8 V → 30 V/ns
+        assertEquals(3.0, DvDt.inducedBound(10 * PF, 50 * V_PER_NS, 6), 1e-12);
+        assertEquals(2.21, DvDt.induced(10 * PF, 50 * V_PER_NS, 6, 1e-9, 400), 0.005);
+        assertEquals(30, DvDt.allowedBound(10 * PF, 6, 1.8, 0) / V_PER_NS, 1e-9);
+    }
+
+    @Test
+    void negativeOffLevelRaisesTheAllowedDvDtAndRemovesTheRisk() {
+        // REFERENCES §7: risk if V_pk + V_off ≥ V_th,min; (1.8 + 3) V / (10 pF · 6 Ω) = 80 V/ns
+        assertEquals(80, DvDt.allowedBound(10 * PF, 6, 1.8, -3) / V_PER_NS, 1e-9);
+        assertTrue(DvDt.turnOnRisk(2.21, 0, 1.8));
+        assertFalse(DvDt.turnOnRisk(2.21, -3, 1.8));
+    }
+
+    /**
+     * The RC-limited form against commons-math3 DormandPrince853 on the gate node during the
+     * ramp, C_iss·dv/dt = C_gd·s − v/R from v(0) = 0 to t = ΔV/s; agreement to 1 µV.
+     */
+    @ParameterizedTest(name = "C_gd {0} pF, {1} V/ns, R {2} Ω, C_iss {3} pF, ΔV {4} V")
+    @CsvSource(textBlock = """
+        # cgd pF, slew V/ns, R ohm, ciss pF, swing V   (REFERENCES §7 inputs, then variations)
+          10,     50,        6,     1000,    400
+          10,     50,        6,     1000,    50
+          30,     100,       2,     4000,    800
+          5,      10,        20,    500,     48
+        """)
+    void rcLimitedPeakMatchesNumericalGateNode(double cgd, double slew, double r, double ciss,
+            double swing) {
+        double tEnd = swing / slew;
+        double v = Ode.solve(Ode.millerNode(cgd * 1e-3, slew, r, ciss * 1e-3),
+                new double[] {0}, tEnd)[0];
+        assertEquals(v, DvDt.induced(cgd * PF, slew * V_PER_NS, r, ciss * PF, swing), 1e-6);
+    }
+
+    @Test
+    void rcLimitedPeakTendsToTheCapacitiveDividerForLargeResistance() {
+        // plain circuit theory: with the gate open the step divides as ΔV·C_gd/C_iss = 4 V
+        assertEquals(4.0, DvDt.induced(10 * PF, 50 * V_PER_NS, 1e9, 1e-9, 400), 1e-6);
+    }
+
+    @Test
+    void allowedRcLimitedDvDtAgreesWithBrentRootOfThePeak() {
+        // commons-math3 BrentSolver on V_pk(s) − V_th = 0, as an outside check of the bisection
+        double cgd = 10 * PF;
+        double ciss = 1e-9;
+        double s = DvDt.allowedRcLimited(cgd, 6, ciss, 400, 1.8, 0);
+        double brent = new BrentSolver(1e-6, 1e-12).solve(200,
+                x -> DvDt.induced(cgd, x * V_PER_NS, 6, ciss, 400) - 1.8, 1, 1000) * V_PER_NS;
+        assertEquals(brent, s, 1e-6 * brent);
+        assertTrue(s >= DvDt.allowedBound(cgd, 6, 1.8, 0));
+        // divider below threshold: no dv/dt turns the switch on
+        assertEquals(Double.POSITIVE_INFINITY,
+                DvDt.allowedRcLimited(cgd, 6, ciss, 100, 1.8, 0));
+    }
+
+    @Test
+    void rejectsInvalidInput() {
+        assertEquals("expected slew rate dv/dt > 0 V/s, got 0.0",
+                assertThrows(IllegalArgumentException.class,
+                        () -> DvDt.induced(1e-11, 0, 6, 1e-9, 400)).getMessage());
+        assertEquals("expected turn-off resistance R_off >= 0 Ω, got -6.0",
+                assertThrows(IllegalArgumentException.class,
+                        () -> DvDt.inducedBound(1e-11, 1e10, -6)).getMessage());
+    }
+}

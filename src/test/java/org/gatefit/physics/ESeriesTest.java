@@ -1,0 +1,60 @@
+package org.gatefit.physics;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class ESeriesTest {
+
+    @Test
+    void decadesAreTheIec60063Tables() {
+        // IEC 60063:2015, E6, E12 and E24 (two significant figures)
+        assertArrayEquals(new int[] {10, 15, 22, 33, 47, 68}, ESeries.E6.decade());
+        assertArrayEquals(new int[] {10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82},
+                ESeries.E12.decade());
+        assertArrayEquals(new int[] {10, 11, 12, 13, 15, 16, 18, 20, 22, 24, 27, 30, 33, 36, 39,
+            43, 47, 51, 56, 62, 68, 75, 82, 91}, ESeries.E24.decade());
+    }
+
+    @ParameterizedTest(name = "{0}: {1} {2} -> nearest {3}, up {4}, down {5}")
+    @CsvSource(textBlock = """
+        # source,                                              series, value,     nearest,  up,       down
+        'IEC 60063 E12; REFERENCES §3 critical R 4.53 Ω',       E12,    4.53,      4.7,      4.7,      3.9
+        'IEC 60063 E24; REFERENCES §3 critical R 9.64 Ω',       E24,    9.64,      10,       10,       9.1
+        'IEC 60063 E12; REFERENCES §4 C_boot,min 94.9 nF',      E12,    94.9e-9,   100e-9,   100e-9,   82e-9
+        'IEC 60063 E12; common practice 3 × 94.9 nF',           E12,    284.7e-9,  270e-9,   330e-9,   270e-9
+        'IEC 60063 E24; a series value maps to itself',         E24,    4.7e3,     4.7e3,    4.7e3,    4.7e3
+        'IEC 60063 E12; a series value maps to itself',         E12,    2.2e-12,   2.2e-12,  2.2e-12,  2.2e-12
+        'IEC 60063 E6; across a decade boundary',               E6,     8.5,       10,       10,       6.8
+        'IEC 60063 E24; decade boundary, down',                 E24,    0.099,     0.1,      0.1,      0.091
+        """)
+    void roundsToTheSeries(String source, ESeries series, double value, double nearest,
+            double up, double down) {
+        assertEquals(nearest, series.roundNearest(value), 1e-9 * nearest, source);
+        assertEquals(up, series.roundUp(value), 1e-9 * up, source);
+        assertEquals(down, series.roundDown(value), 1e-9 * down, source);
+    }
+
+    @Test
+    void containsOnlySeriesValues() {
+        assertTrue(ESeries.E12.contains(68e-9));
+        assertFalse(ESeries.E12.contains(75e-9));
+        assertTrue(ESeries.E24.contains(75e-9));
+    }
+
+    @Test
+    void rejectsNonPositiveValues() {
+        assertEquals("expected value to round > 0, got 0.0",
+                assertThrows(IllegalArgumentException.class, () -> ESeries.E12.roundUp(0))
+                        .getMessage());
+        assertThrows(IllegalArgumentException.class, () -> ESeries.E24.roundDown(-1));
+        assertThrows(IllegalArgumentException.class,
+                () -> ESeries.E6.roundNearest(Double.POSITIVE_INFINITY));
+    }
+}
