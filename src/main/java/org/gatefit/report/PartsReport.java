@@ -121,7 +121,7 @@ public final class PartsReport {
                 if (format == Format.MARKDOWN) {
                     out.write("### " + Markdown.escape(head) + "\n\n" + t.markdown());
                 } else {
-                    out.write(head + "\n" + t.render(120));
+                    out.write(head + "\n" + t.render(Integer.MAX_VALUE));
                 }
             }
         }

@@ -32,7 +32,10 @@ public final class TextTable {
         return rows.isEmpty();
     }
 
-    /** Renders with at most {@code width} characters a line, shrinking the widest columns first. */
+    /**
+     * Renders with at most {@code width} characters a line, shrinking the widest columns first
+     * (never the first column, which holds the part number or id, nor below a header's length).
+     */
     public String render(int width) {
         int n = headers.size();
         int[] w = new int[n];
@@ -48,7 +51,7 @@ public final class TextTable {
         }
         while (total > width) {
             int widest = -1;
-            for (int i = 0; i < n; i++) {
+            for (int i = 1; i < n; i++) {
                 if (w[i] > Math.max(6, headers.get(i).length()) && (widest < 0 || w[i] > w[widest])) {
                     widest = i;
                 }
