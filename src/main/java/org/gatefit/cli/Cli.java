@@ -25,6 +25,8 @@ public final class Cli {
         cl.addSubcommand("find", new FindCommand(ctx));
         cl.addSubcommand("show", new ShowCommand(ctx));
         cl.addSubcommand("export", new ExportCommand(ctx));
+        cl.addSubcommand("shortlist", new ShortlistCommand(ctx));
+        cl.addSubcommand("explain", new ExplainCommand(ctx));
         cl.addSubcommand("demo", new DemoCommand(ctx));
         cl.setOut(out);
         cl.setErr(err);

@@ -10,7 +10,21 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.LinkedHashMap;
 import org.apache.lucene.document.Document;
+import org.apache.lucene.index.LeafReader;
+import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.NumericDocValues;
+import org.apache.lucene.index.SortedDocValues;
+import org.apache.lucene.search.BooleanClause;
+import org.apache.lucene.search.BooleanQuery;
+import org.apache.lucene.search.DocIdSetIterator;
+import org.apache.lucene.search.ScoreMode;
+import org.apache.lucene.search.Scorer;
+import org.apache.lucene.search.Weight;
+import org.gatefit.catalog.Column;
+import org.gatefit.catalog.ColumnType;
+import org.gatefit.catalog.Schema;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexNotFoundException;
 import org.apache.lucene.index.Term;
@@ -135,6 +149,73 @@ public final class Catalog implements AutoCloseable {
             out.add(Documents.toRow(sf.document(sd.doc)));
         }
         return out;
+    }
+
+    /**
+     * Streams the parts of a kind that match {@code filter}, built from doc values only (no
+     * stored-field loads), for engines that evaluate every candidate. Extra columns are not
+     * included; source file and line are left empty.
+     */
+    public long scan(Kind kind, Query filter, java.util.function.Consumer<Row> sink) throws IOException {
+        if (searcher == null) {
+            return 0;
+        }
+        BooleanQuery.Builder b = new BooleanQuery.Builder();
+        b.add(new TermQuery(new Term(Fields.KIND, kind.id())), BooleanClause.Occur.FILTER);
+        if (filter != null) {
+            b.add(filter, BooleanClause.Occur.FILTER);
+        }
+        Weight w = searcher.createWeight(searcher.rewrite(b.build()), ScoreMode.COMPLETE_NO_SCORES, 1f);
+        Schema schema = Schema.of(kind);
+        List<Column> cols = schema.columns();
+        long n = 0;
+        for (LeafReaderContext leaf : reader.leaves()) {
+            Scorer sc = w.scorer(leaf);
+            if (sc == null) {
+                continue;
+            }
+            LeafReader lr = leaf.reader();
+            Object[] dv = new Object[cols.size()];
+            for (int i = 0; i < cols.size(); i++) {
+                Column c = cols.get(i);
+                dv[i] = switch (c.type()) {
+                    case NUMBER, INTEGER -> lr.getNumericDocValues(c.name());
+                    case TEXT, CHOICE -> lr.getSortedDocValues(c.name());
+                };
+            }
+            DocIdSetIterator it = sc.iterator();
+            for (int doc = it.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = it.nextDoc()) {
+                Map<String, Object> values = new LinkedHashMap<>();
+                for (int i = 0; i < cols.size(); i++) {
+                    Column c = cols.get(i);
+                    Object o = dv[i];
+                    if (o instanceof NumericDocValues nd) {
+                        if (nd.docID() < doc) {
+                            nd.advance(doc);
+                        }
+                        if (nd.docID() == doc) {
+                            long raw = nd.longValue();
+                            values.put(c.name(), c.type() == ColumnType.NUMBER
+                                    ? (Object) Double.longBitsToDouble(raw) : (Object) raw);
+                        }
+                    } else if (o instanceof SortedDocValues sd) {
+                        if (sd.docID() < doc) {
+                            sd.advance(doc);
+                        }
+                        if (sd.docID() == doc) {
+                            values.put(c.name(), sd.lookupOrd(sd.ordValue()).utf8ToString());
+                        }
+                    }
+                }
+                Object key = values.get(kind == Kind.STAGE ? "stage" : "part_number");
+                if (key == null) {
+                    continue;
+                }
+                sink.accept(new Row(kind, key.toString(), "", 0, values, Map.of()));
+                n++;
+            }
+        }
+        return n;
     }
 
     /** The import history, oldest first. */

@@ -56,7 +56,7 @@ final class Documents {
                     String s = (String) v;
                     String key = s.toLowerCase(Locale.ROOT);
                     d.add(new StringField(n, key, Field.Store.NO));
-                    d.add(new SortedDocValuesField(n, new BytesRef(key)));
+                    d.add(new SortedDocValuesField(n, new BytesRef(s)));
                     d.add(new StoredField(n, s));
                     if (c.type() == org.gatefit.catalog.ColumnType.TEXT) {
                         all.append(s).append(' ');

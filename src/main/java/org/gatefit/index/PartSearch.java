@@ -131,6 +131,19 @@ public final class PartSearch {
         return catalog.search(q.build(), s, limit);
     }
 
+    /** A filter of {@code --where} conditions (all must hold) for {@link Catalog#scan}; null when there are none. */
+    public static Query filter(Kind kind, List<Condition> where) throws BadValueException {
+        if (where.isEmpty()) {
+            return null;
+        }
+        BooleanQuery.Builder q = new BooleanQuery.Builder();
+        for (Condition c : where) {
+            addCondition(q, column(kind, c.column()), c);
+        }
+        q.add(new MatchAllDocsQuery(), Occur.MUST);
+        return q.build();
+    }
+
     /** The column a name refers to for this kind (or either kind); lists the valid names if none. */
     public static Column column(Kind kind, String name) throws BadValueException {
         List<Kind> kinds = kind == null ? List.of(Kind.SWITCH, Kind.DRIVER) : List.of(kind);

@@ -1,0 +1,167 @@
+package org.gatefit.cli;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.gatefit.catalog.BadValueException;
+import org.gatefit.catalog.Cells;
+import org.gatefit.catalog.Column;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Row;
+import org.gatefit.catalog.Schema;
+import org.gatefit.match.Margins;
+import org.gatefit.match.OperatingPoint;
+import picocli.CommandLine.Option;
+
+/**
+ * The operating point shared by {@code shortlist} and {@code explain}. Each option is the stage
+ * sheet's column of the same meaning and reads the same way: a bare number is in that column's
+ * unit (kHz, ns, nH, V, Ω), or give a unit ({@code 100kHz}, {@code 4k7}, {@code 0.05us}).
+ */
+final class OperatingPointOptions {
+    @Option(names = "--side", paramLabel = "low|high", description = "Switch position (default: low).")
+    String side;
+
+    @Option(names = "--bus", paramLabel = "V", description = "DC bus voltage, V (no default: high-side and dv/dt checks need it).")
+    String bus;
+
+    @Option(names = "--freq", paramLabel = "kHz", required = true, description = "Switching frequency; a bare number is kHz.")
+    String freq;
+
+    @Option(names = "--edge", paramLabel = "ns",
+            description = "Target gate transition time; bare number in ns (default per technology: Si 50, SiC 30, GaN 10, IGBT 150 ns).")
+    String edge;
+
+    @Option(names = "--drive", paramLabel = "V", description = "On level, V (default: the switch's recommended level).")
+    String drive;
+
+    @Option(names = "--drive-neg", paramLabel = "V", description = "Off level, ≤ 0 V (default: the switch's recommended level, else 0).")
+    String driveNeg;
+
+    @Option(names = "--logic", paramLabel = "FAMILY",
+            description = "Controller output family: ttl-5v, cmos-5v, lvttl-3v3, lvcmos-3v3, lvcmos-2v5, lvcmos-1v8 (default: lvcmos-3v3).")
+    String logic;
+
+    @Option(names = "--v-oh", paramLabel = "V", description = "Controller output-high minimum, instead of --logic.")
+    String vOh;
+
+    @Option(names = "--v-ol", paramLabel = "V", description = "Controller output-low maximum, instead of --logic.")
+    String vOl;
+
+    @Option(names = "--pwm", paramLabel = "SENSE", description = "active-high (switch on while PWM is high; default) or active-low.")
+    String pwm;
+
+    @Option(names = "--rg", paramLabel = "Ω", description = "External gate resistor per switch, turn-on (default 0 Ω).")
+    String rg;
+
+    @Option(names = "--rg-off", paramLabel = "Ω", description = "External gate resistor per switch, turn-off (default: --rg).")
+    String rgOff;
+
+    @Option(names = "--duty-max", paramLabel = "D", description = "Largest duty cycle, 0 to 1 or a percentage (bootstrap check).")
+    String dutyMax;
+
+    @Option(names = "--parallel", paramLabel = "N", description = "Switches on this driver output (default 1).")
+    String parallel;
+
+    @Option(names = "--loop", paramLabel = "nH", description = "Gate-loop inductance; bare number in nH (default 10 nH).")
+    String loop;
+
+    @Option(names = "--v-f-boot", paramLabel = "V", description = "Bootstrap diode forward drop (default 0.7 V).")
+    String vfBoot;
+
+    @Option(names = "--r-boot", paramLabel = "Ω", description = "Bootstrap charging resistance (default 2.2 Ω).")
+    String rBoot;
+
+    @Option(names = "--dvdt", paramLabel = "V/ns",
+            description = "Switch-node slew rate to check, V/ns (default: estimated as bus / turn-on plateau time).")
+    String dvdt;
+
+    @Option(names = "--margin", paramLabel = "NAME=VALUE",
+            description = "Override a margin (repeatable): drive-current, gate-headroom, uvlo-headroom, logic-noise, offset,"
+                    + " isolation, driver-power, dv-dt. Defaults are printed with every result.")
+    List<String> margins = new ArrayList<>();
+
+    /** The options as a stage-sheet row, parsed exactly as a stage sheet's cells would be. */
+    OperatingPoint.Spec spec() throws BadValueException {
+        Map<String, String> cells = new LinkedHashMap<>();
+        cells.put("side", side);
+        cells.put("bus_v", bus);
+        cells.put("f_sw_khz", freq);
+        cells.put("edge_ns", edge);
+        cells.put("v_drive_v", drive);
+        cells.put("v_drive_neg_v", driveNeg);
+        cells.put("logic", logic);
+        cells.put("v_oh_v", vOh);
+        cells.put("v_ol_v", vOl);
+        cells.put("pwm_sense", pwm);
+        cells.put("r_g_ohm", rg);
+        cells.put("r_g_off_ohm", rgOff);
+        cells.put("duty_max", dutyMax);
+        cells.put("parallel", parallel);
+        cells.put("loop_nh", loop);
+        cells.put("v_f_boot_v", vfBoot);
+        cells.put("r_boot_ohm", rBoot);
+        Schema stage = Schema.of(Kind.STAGE);
+        Map<String, Object> values = new LinkedHashMap<>();
+        for (Map.Entry<String, String> e : cells.entrySet()) {
+            if (e.getValue() == null) {
+                continue;
+            }
+            Column c = stage.column(e.getKey()).orElseThrow();
+            try {
+                Object v = Cells.parse(c, e.getValue(), false);
+                if (v != null) {
+                    values.put(c.name(), v);
+                }
+            } catch (BadValueException ex) {
+                throw new BadValueException("--" + optionName(c.name()) + ": " + ex.getMessage());
+            }
+        }
+        OperatingPoint.Spec s = OperatingPoint.Spec.fromStage(new Row(Kind.STAGE, "command line", "", 0, values, Map.of()));
+        if (dvdt != null) {
+            try {
+                double v = Double.parseDouble(dvdt.strip());
+                if (!(v > 0) || Double.isInfinite(v)) {
+                    throw new NumberFormatException();
+                }
+                s.dvdt = v * 1e9;
+            } catch (NumberFormatException e) {
+                throw new BadValueException("--dvdt: '" + dvdt + "' is not a positive number (expected V/ns, e.g. 50)");
+            }
+        }
+        return s;
+    }
+
+    Margins margins() throws BadValueException {
+        Margins m = Margins.DEFAULT;
+        for (String a : margins) {
+            try {
+                m = m.with(a);
+            } catch (IllegalArgumentException e) {
+                throw new BadValueException("--margin: " + e.getMessage());
+            }
+        }
+        return m;
+    }
+
+    private static String optionName(String column) {
+        return switch (column) {
+            case "bus_v" -> "bus";
+            case "f_sw_khz" -> "freq";
+            case "edge_ns" -> "edge";
+            case "v_drive_v" -> "drive";
+            case "v_drive_neg_v" -> "drive-neg";
+            case "v_oh_v" -> "v-oh";
+            case "v_ol_v" -> "v-ol";
+            case "pwm_sense" -> "pwm";
+            case "r_g_ohm" -> "rg";
+            case "r_g_off_ohm" -> "rg-off";
+            case "duty_max" -> "duty-max";
+            case "loop_nh" -> "loop";
+            case "v_f_boot_v" -> "v-f-boot";
+            case "r_boot_ohm" -> "r-boot";
+            default -> column;
+        };
+    }
+}

@@ -1,0 +1,46 @@
+package org.gatefit.match;
+
+/** The checks of a driver–switch pair, with their DESIGN.md ids and weights in the score. */
+public enum Rule {
+    DRIVE_CURRENT("drive-current", 3, "peak gate current against gate charge and edge time"),
+    GATE_VOLTAGE("gate-voltage", 3, "on level against driver supply range, V_GS limit and full-enhancement level"),
+    NEGATIVE_BIAS("negative-bias", 1, "off level against V_GS,min, the driver's negative rail and the switch's advice"),
+    UVLO("uvlo", 2, "driver undervoltage lockout against the supply and what the switch needs"),
+    LOGIC_LEVEL("logic-level", 1, "controller output levels against the driver's input thresholds and maximum"),
+    POLARITY("polarity", 1, "driver input sense against the PWM sense"),
+    HIGH_SIDE("high-side", 2, "floating offset or isolation rating against the bus"),
+    BOOTSTRAP("bootstrap", 1, "bootstrap capacitor, diode and duty limit"),
+    DRIVER_POWER("driver-power", 1, "driver dissipation against its package limit"),
+    DV_DT("dv-dt", 1, "Miller-induced gate voltage against the threshold"),
+    LIFECYCLE("lifecycle", 0, "production status and stock of both parts"),
+    CATALOG("catalog", 0, "both parts are in the catalog");
+
+    private final String id;
+    private final int weight;
+    private final String covers;
+
+    Rule(String id, int weight, String covers) {
+        this.id = id;
+        this.weight = weight;
+        this.covers = covers;
+    }
+
+    public String id() {
+        return id;
+    }
+
+    /** Weight in the electrical part of the score (0: counted through availability instead). */
+    public int weight() {
+        return weight;
+    }
+
+    /** What the rule covers, for help and reports. */
+    public String covers() {
+        return covers;
+    }
+
+    @Override
+    public String toString() {
+        return id;
+    }
+}

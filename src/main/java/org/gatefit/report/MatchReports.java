@@ -1,0 +1,331 @@
+package org.gatefit.report;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import org.gatefit.match.Check;
+import org.gatefit.match.Eng;
+import org.gatefit.match.Figure;
+import org.gatefit.match.PairResult;
+import org.gatefit.match.Rule;
+import org.gatefit.match.Shortlist;
+import org.gatefit.match.SwitchPart;
+import org.gatefit.match.Verdict;
+
+/** Renders {@code shortlist} and {@code explain} results. */
+public final class MatchReports {
+    private static final int WIDTH = 100;
+
+    private MatchReports() {
+    }
+
+    // ------------------------------------------------------------------ shortlist
+
+    public static void shortlist(Shortlist.Result r, Format format, Writer out) throws IOException {
+        switch (format) {
+            case JSON -> shortlistJson(r, out);
+            case CSV -> shortlistCsv(r, out);
+            case TEXT -> shortlistText(r, out, false);
+            case MARKDOWN -> shortlistText(r, out, true);
+        }
+    }
+
+    private static String switchLine(SwitchPart s) {
+        return s.partNumber() + " (" + s.technology() + ", " + Eng.of(s.vBlock(), "V") + ", Q_g " + Eng.of(s.qG(), "C")
+                + (Double.isNaN(s.qGVgs()) ? "" : " at " + Eng.of(s.qGVgs(), "V")) + ", V_GS " + Eng.of(s.vGsMin(), "V")
+                + " to " + Eng.of(s.vGsMax(), "V") + ")";
+    }
+
+    private static void shortlistText(Shortlist.Result r, Writer out, boolean md) throws IOException {
+        String head = "Drivers for " + switchLine(r.switchPart()) + ": " + r.evaluated() + " evaluated, " + r.passing()
+                + " pass, " + r.warning() + " warn, " + r.failing() + " fail";
+        out.write(md ? "## " + Markdown.escape(head) + "\n\n" : Wrap.wrap(head, WIDTH, 2) + "\n");
+        context(out, md, r.point(), r.margins(), r.prefilter());
+        out.write("\n");
+        if (r.candidates().isEmpty()) {
+            out.write((md ? "_" : "") + "No driver in the catalog works with this switch at this operating point"
+                    + (r.failing() > 0 ? "; run with --all to see why each fails" : "") + (md ? "._\n" : ".\n"));
+        } else {
+            TextTable t = new TextTable(List.of("#", "driver", "verdict", "score", "I_pk/I_req", "NM min", "P_driver", "price",
+                    "deciding"), true, false, false, true, true, true, true, true, false);
+            int i = 1;
+            for (PairResult p : r.candidates()) {
+                t.add(List.of(Integer.toString(i++), p.driver(), p.verdict().id(), Eng.num(p.score()), driveRatio(p),
+                        noiseMin(p), fig(p, "driver-power", "W"), Double.isNaN(p.priceTieBreak()) ? ""
+                                : Eng.num(p.priceTieBreak()), deciding(p)));
+            }
+            out.write(md ? t.markdown() : t.render(WIDTH));
+            // A note every listed pair shares (e.g. the switch is out of stock) is said once.
+            java.util.Map<String, Integer> seen = new java.util.HashMap<>();
+            for (PairResult p : r.candidates()) {
+                for (Check c : p.checks()) {
+                    if (c.verdict() != Verdict.PASS) {
+                        seen.merge(c.rule().id() + " " + c.verdict().id() + ": " + c.message(), 1, Integer::sum);
+                    }
+                }
+            }
+            List<String> why = new ArrayList<>();
+            int n = r.candidates().size();
+            if (n > 1) {
+                seen.forEach((k, v) -> {
+                    if (v == n) {
+                        why.add("all " + k);
+                    }
+                });
+                java.util.Collections.sort(why);
+            }
+            i = 1;
+            for (PairResult p : r.candidates()) {
+                for (Check c : p.checks()) {
+                    String k = c.rule().id() + " " + c.verdict().id() + ": " + c.message();
+                    if (c.verdict() != Verdict.PASS && (n == 1 || seen.get(k) < n)) {
+                        why.add(i + " " + p.driver() + " " + k);
+                    }
+                }
+                i++;
+            }
+            if (!why.isEmpty()) {
+                out.write(md ? "\n**What to look at**\n\n" : "\nWhat to look at:\n");
+                for (String w : why) {
+                    out.write(md ? "- " + Markdown.escape(w) + "\n" : "  " + Wrap.wrap(w, WIDTH - 2, 6) + "\n");
+                }
+            }
+            if (r.failing() > 0 && r.candidates().stream().noneMatch(p -> p.verdict() == Verdict.FAIL)) {
+                out.write((md ? "\n" : "\n") + r.failing() + " failing drivers not shown; --all lists them with their reasons.\n");
+            }
+        }
+        out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
+    }
+
+    private static void context(Writer out, boolean md, org.gatefit.match.OperatingPoint p,
+                                org.gatefit.match.Margins m, List<String> prefilter) throws IOException {
+        List<String[]> lines = new ArrayList<>();
+        lines.add(new String[] {"Operating point", MatchJson.pointLine(p)});
+        for (String a : p.assumed()) {
+            lines.add(new String[] {"Assumed", a});
+        }
+        lines.add(new String[] {"Margins", MatchJson.marginsLine(m)});
+        if (prefilter != null && !prefilter.isEmpty()) {
+            lines.add(new String[] {"Prefilter", String.join("; ", prefilter) + " (drivers outside these must fail)"});
+        }
+        for (String[] l : lines) {
+            if (md) {
+                out.write("- **" + l[0] + ":** " + Markdown.escape(l[1]) + "\n");
+            } else {
+                out.write(Wrap.wrap(l[0] + ": " + l[1], WIDTH, 4) + "\n");
+            }
+        }
+    }
+
+    private static String driveRatio(PairResult p) {
+        double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
+        double src = p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN);
+        double snk = p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN);
+        double ratio = Math.min(src, snk) / req;
+        return Double.isNaN(ratio) ? "" : Eng.num(ratio) + "×";
+    }
+
+    private static String noiseMin(PairResult p) {
+        double h = p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN);
+        double l = p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN);
+        double m = Math.min(h, l);
+        return Double.isNaN(m) ? "" : Eng.of(m, "V");
+    }
+
+    private static String fig(PairResult p, String name, String unit) {
+        return p.figure(name).map(f -> Eng.of(f.value(), unit)).orElse("");
+    }
+
+    /** The rule that decides the verdict: the worst check, heaviest rule first on ties. */
+    static Check decidingCheck(PairResult p) {
+        Check worst = null;
+        for (Check c : p.checks()) {
+            if (worst == null || c.verdict().ordinal() > worst.verdict().ordinal()
+                    || (c.verdict() == worst.verdict() && c.score() < worst.score())) {
+                worst = c;
+            }
+        }
+        return worst;
+    }
+
+    private static String deciding(PairResult p) {
+        Check c = decidingCheck(p);
+        return c == null || c.verdict() == Verdict.PASS ? "" : c.rule().id() + " " + c.verdict().id();
+    }
+
+    private static void shortlistJson(Shortlist.Result r, Writer out) throws IOException {
+        try (JsonGenerator g = PartsReport.generator(out)) {
+            g.writeStartObject();
+            g.writeStringField("switch", r.switchPart().partNumber());
+            g.writeNumberField("evaluated", r.evaluated());
+            g.writeNumberField("passing", r.passing());
+            g.writeNumberField("warning", r.warning());
+            g.writeNumberField("failing", r.failing());
+            MatchJson.point(g, r.point());
+            MatchJson.margins(g, r.margins());
+            g.writeArrayFieldStart("prefilter");
+            for (String p : r.prefilter()) {
+                g.writeString(p);
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("candidates");
+            int rank = 1;
+            for (PairResult p : r.candidates()) {
+                g.writeStartObject();
+                g.writeNumberField("rank", rank++);
+                g.writeStringField("driver", p.driver());
+                g.writeStringField("verdict", p.verdict().id());
+                g.writeNumberField("score", MatchJson.round(p.score()));
+                MatchJson.number(g, "unit_price", p.priceTieBreak());
+                MatchJson.checks(g, p);
+                MatchJson.figures(g, p);
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+            g.writeStringField("caution", Caution.TEXT);
+            g.writeEndObject();
+        }
+        out.write('\n');
+    }
+
+    private static void shortlistCsv(Shortlist.Result r, Writer out) throws IOException {
+        out.write("rank,driver,switch,verdict,score,drive_current_ratio,noise_margin_min_v,driver_power_w,unit_price,"
+                + "deciding_rule,deciding_verdict,deciding_message\n");
+        int rank = 1;
+        for (PairResult p : r.candidates()) {
+            Check c = decidingCheck(p);
+            double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
+            double pk = Math.min(p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN),
+                    p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN));
+            double nm = Math.min(p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN),
+                    p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN));
+            out.write(Csv.line(Integer.toString(rank++), p.driver(), p.switchPart(), p.verdict().id(),
+                    num(MatchJson.round(p.score())), num(pk / req), num(nm),
+                    num(p.figure("driver-power").map(Figure::value).orElse(Double.NaN)), num(p.priceTieBreak()),
+                    c == null ? "" : c.rule().id(), c == null ? "" : c.verdict().id(), c == null ? "" : c.message()));
+        }
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+
+    // ------------------------------------------------------------------ explain
+
+    public static void explain(PairResult p, Format format, Writer out) throws IOException {
+        switch (format) {
+            case JSON -> {
+                try (JsonGenerator g = PartsReport.generator(out)) {
+                    g.writeStartObject();
+                    g.writeStringField("driver", p.driver());
+                    g.writeStringField("switch", p.switchPart());
+                    g.writeStringField("verdict", p.verdict().id());
+                    g.writeNumberField("score", MatchJson.round(p.score()));
+                    MatchJson.checks(g, p);
+                    MatchJson.figures(g, p);
+                    MatchJson.point(g, p.point());
+                    MatchJson.margins(g, p.margins());
+                    g.writeStringField("caution", Caution.TEXT);
+                    g.writeEndObject();
+                }
+                out.write('\n');
+            }
+            case CSV -> {
+                out.write("section,name,verdict_or_value,unit,detail\n");
+                for (Check c : p.checks()) {
+                    out.write(Csv.line("check", c.rule().id(), c.verdict().id(), "", c.message()));
+                }
+                for (Figure f : p.figures()) {
+                    out.write(Csv.line("figure", f.name(), Double.toString(f.value()), f.unit(),
+                            f.label() + (f.estimated() ? " (estimate)" : "")));
+                }
+            }
+            case TEXT -> explainText(p, out);
+            case MARKDOWN -> explainMarkdown(p, out);
+        }
+    }
+
+    private static void explainText(PairResult p, Writer out) throws IOException {
+        out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": " + p.verdict().id().toUpperCase(java.util.Locale.ROOT)
+                + " (score " + Eng.num(p.score()) + ")\n");
+        context(out, false, p.point(), p.margins(), null);
+        out.write("\nChecks\n");
+        for (Check c : p.checks()) {
+            String head = String.format("  %-8s %-14s", "[" + c.verdict().id() + "]", c.rule().id());
+            out.write(head + Wrap.wrap(c.message(), WIDTH - head.length(), head.length()) + "\n");
+        }
+        out.write("\nFigures\n");
+        TextTable t = new TextTable(List.of("figure", "value", "how"), false, true, false);
+        for (Figure f : p.figures()) {
+            t.add(List.of(f.name(), Eng.of(f.value(), f.unit().equals("1") ? "" : f.unit()),
+                    f.label() + (f.estimated() ? " (estimate)" : "")));
+        }
+        out.write(t.render(Integer.MAX_VALUE));
+        out.write("\n" + recommendations(p) + "\n");
+        out.write(Wrap.wrap(Caution.TEXT, WIDTH, 0) + "\n");
+    }
+
+    private static void explainMarkdown(PairResult p, Writer out) throws IOException {
+        out.write("## Driver " + Markdown.escape(p.driver()) + " with switch " + Markdown.escape(p.switchPart()) + ": **"
+                + p.verdict().id() + "** (score " + Eng.num(p.score()) + ")\n\n");
+        context(out, true, p.point(), p.margins(), null);
+        TextTable c = new TextTable(List.of("rule", "verdict", "why"));
+        for (Check x : p.checks()) {
+            c.add(List.of(x.rule().id(), x.verdict().id(), x.message()));
+        }
+        out.write("\n### Checks\n\n" + c.markdown());
+        TextTable t = new TextTable(List.of("figure", "value", "how"), false, true, false);
+        for (Figure f : p.figures()) {
+            t.add(List.of(f.name(), Eng.of(f.value(), f.unit().equals("1") ? "" : f.unit()),
+                    f.label() + (f.estimated() ? " (estimate)" : "")));
+        }
+        out.write("\n### Figures\n\n" + t.markdown());
+        out.write("\n### Recommendations\n\n" + Markdown.escape(recommendations(p)).replace("\n", "\n\n") + "\n\n> "
+                + Caution.TEXT + "\n");
+    }
+
+    /** Gate resistor, bootstrap and timing advice from the figures. */
+    static String recommendations(PairResult p) {
+        StringBuilder sb = new StringBuilder("Recommendations\n");
+        double min = p.figure("gate-resistor-min").map(Figure::value).orElse(Double.NaN);
+        double max = p.figure("gate-resistor-max").map(Figure::value).orElse(Double.NaN);
+        double rec = p.figure("gate-resistor-recommended").map(Figure::value).orElse(Double.NaN);
+        if (!Double.isNaN(min) && !Double.isNaN(max)) {
+            if (max < min || max <= 0) {
+                sb.append("  Gate resistor: no external value meets both the damping target (≥ ").append(Eng.of(min, "Ω"))
+                        .append(") and the edge (≤ ").append(Eng.of(Math.max(max, 0), "Ω"))
+                        .append("); shorten the gate loop or pick a stronger driver.\n");
+            } else {
+                sb.append("  Gate resistor: ").append(Eng.of(min, "Ω")).append(" to ").append(Eng.of(max, "Ω"))
+                        .append(" per switch");
+                if (!Double.isNaN(rec)) {
+                    sb.append("; ").append(Eng.of(rec, "Ω")).append(" (IEC 60063 E24)");
+                }
+                sb.append(" damps the gate loop and still meets the edge.\n");
+            }
+        } else {
+            sb.append("  Gate resistor: give the switch's C_iss to size it against ringing.\n");
+        }
+        p.figure("bootstrap-capacitance-recommended").ifPresent(f -> sb.append("  Bootstrap: ")
+                .append(Eng.of(f.value(), "F")).append(" capacitor (minimum ")
+                .append(Eng.of(p.figure("bootstrap-capacitance-min").map(Figure::value).orElse(Double.NaN), "F"))
+                .append("), V_DD decoupling about ten times that, diode rated above the bus.\n"));
+        double ton = p.figure("delay-time-on").map(Figure::value).orElse(Double.NaN)
+                + p.figure("plateau-time-on").map(Figure::value).orElse(Double.NaN);
+        double toff = p.figure("delay-time-off").map(Figure::value).orElse(Double.NaN)
+                + p.figure("plateau-time-off").map(Figure::value).orElse(Double.NaN);
+        if (!Double.isNaN(ton) && !Double.isNaN(toff)) {
+            sb.append("  Switching: about ").append(Eng.of(ton, "s")).append(" to the end of the turn-on plateau, ")
+                    .append(Eng.of(toff, "s")).append(" to the end of turn-off");
+            if (toff > ton) {
+                sb.append(" (turn-off is the slower edge; size dead time from it)");
+            }
+            sb.append(".\n");
+        }
+        p.check(Rule.DRIVER_POWER).ifPresent(c -> p.figure("driver-power").ifPresent(f -> sb.append("  Driver loss: ")
+                .append(Eng.of(f.value(), "W")).append(" (").append(c.verdict().id()).append(").\n")));
+        return sb.toString().stripTrailing();
+    }
+}
