@@ -13,6 +13,7 @@ import java.util.List;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
+import net.jqwik.api.EdgeCasesMode;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
@@ -44,12 +45,12 @@ class ImportPropertiesTest {
         assertEquals(List.of(2L, 3L, 5L), rows.stream().map(Row::line).toList(), "physical start lines");
     }
 
-    @Property(tries = 300)
+    @Property(tries = 300, edgeCases = EdgeCasesMode.MIXIN)
     void randomBytesGiveACleanReadOrLocatedProblems(@ForAll @Size(max = 400) byte[] bytes) throws IOException {
         check(bytes);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 300, edgeCases = EdgeCasesMode.MIXIN)
     void randomBytesAfterAValidHeaderGiveACleanReadOrLocatedProblems(@ForAll @Size(max = 300) byte[] bytes)
             throws IOException {
         byte[] header = VALID.substring(0, VALID.indexOf('\n') + 1).getBytes(StandardCharsets.UTF_8);
@@ -58,7 +59,7 @@ class ImportPropertiesTest {
         check(all);
     }
 
-    @Property(tries = 300)
+    @Property(tries = 300, edgeCases = EdgeCasesMode.MIXIN)
     void editedCatalogsGiveACleanReadOrLocatedProblems(@ForAll("edits") List<Edit> edits) throws IOException {
         String text = VALID;
         for (Edit e : edits) {

@@ -215,7 +215,8 @@ class CatalogCliTest {
         Path csv = tmp.resolve("formula.csv");
         Files.writeString(csv, "part_number,technology,v_block_v,v_gs_max_v,v_gs_min_v,q_g_nc,description,note\n"
                 + "TST-001,si-mosfet,100,20,-20,50,=1+2,@SUM(A1)\n"
-                + "TST-002,si-mosfet,100,20,-20,50,+3 dB,plain\n");
+                + "TST-002,si-mosfet,100,20,-20,50,+3 dB,plain\n"
+                + "TST-003,si-mosfet,100,20,-20,50,'=already neutralised,-5 V\n");
         Path one = tmp.resolve("formula-catalog");
         assertEquals(ExitCode.OK, CliRun.on(one, "import", csv.toString()).exit());
         CliRun export = CliRun.on(one, "export", "--kind", "switch");
@@ -226,6 +227,7 @@ class CatalogCliTest {
         assertEquals("'=1+2", rows.get(0).get("description"));
         assertEquals("'@SUM(A1)", rows.get(0).get("note"));
         assertEquals("'+3 dB", rows.get(1).get("description"));
+        assertEquals("'-5 V", rows.get(2).get("note"));
 
         Path exported = tmp.resolve("formula-export.csv");
         Files.writeString(exported, export.out());
@@ -234,6 +236,11 @@ class CatalogCliTest {
         JsonNode part = json(CliRun.on(two, "show", "TST-001", "--format", "json"));
         assertEquals("=1+2", part.get("description").asText());
         assertEquals("@SUM(A1)", part.get("note").asText());
+        JsonNode third = json(CliRun.on(two, "show", "TST-003", "--format", "json"));
+        // export --help: the leading apostrophe before a formula character is removed by import,
+        // also in a file that a spreadsheet neutralised the same way.
+        assertEquals("=already neutralised", third.get("description").asText());
+        assertEquals("-5 V", third.get("note").asText());
         assertEquals(export.out(), CliRun.on(two, "export", "--kind", "switch").out());
     }
 
