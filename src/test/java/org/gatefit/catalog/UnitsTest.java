@@ -119,7 +119,7 @@ class UnitsTest {
 
     @ParameterizedTest(name = "''{0}'' is not a quantity")
     @ValueSource(strings = {"NaN", "nan", "Infinity", "-Infinity", "inf", "13O", "1.2.3", "abc", "12 volts!",
-        "0x1F", "--5", "1e999"})
+        "0x1F", "--5", "1e999", "1e99999999999", "1e2147483647 uC", "1e-2147483648"})
     void nonNumbersAreErrorsThatSayWhatWasExpected(String cell) {
         BadValueException e = assertThrows(BadValueException.class, () -> Units.parse(cell, unit("nC"), false));
         assertTrue(e.getMessage().contains("'" + cell + "'"), e.getMessage());

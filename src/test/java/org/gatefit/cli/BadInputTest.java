@@ -96,6 +96,8 @@ class BadInputTest {
                         + "TST-001,Testmaker,si-mosfet,100,20,5,50,x\n"), "line 2, column v_gs_min_v", "at most 0"),
                 Arguments.of("NaN", utf8(h + row("TST-001", "NaN") + "\n"), "line 2, column q_g_nc",
                         "not a number"),
+                Arguments.of("exponent beyond any range", utf8(h + row("TST-001", "1e99999999999") + "\n"),
+                        "line 2, column q_g_nc", "out of range"),
                 Arguments.of("Infinity", utf8(h + row("TST-001", "Infinity") + "\n"), "line 2, column q_g_nc",
                         "not a number"),
                 Arguments.of("required value empty", utf8(h + row("TST-001", "") + "\n"), "line 2, column q_g_nc",
