@@ -68,6 +68,34 @@ class ImportPropertiesTest {
         check(text.getBytes(StandardCharsets.UTF_8));
     }
 
+    /** Any number-like cell text gives a finite value or a {@link BadValueException}, in every column unit. */
+    @Property(tries = 300, edgeCases = EdgeCasesMode.MIXIN)
+    void numberLikeCellsGiveAFiniteValueOrABadValue(@ForAll("numberLike") String cell) {
+        for (Kind kind : new Kind[] {Kind.SWITCH, Kind.DRIVER}) {
+            for (Column c : Schema.of(kind).columns()) {
+                for (boolean comma : new boolean[] {false, true}) {
+                    try {
+                        Object v = Cells.parse(c, cell, comma);
+                        if (v instanceof Double d) {
+                            assertTrue(Double.isFinite(d), c.name() + " <- '" + cell + "' gave " + d);
+                        }
+                    } catch (BadValueException e) {
+                        assertTrue(e.getMessage().contains("expected"), e.getMessage());
+                    }
+                }
+            }
+        }
+    }
+
+    @Provide
+    Arbitrary<String> numberLike() {
+        Arbitrary<String> digits = Arbitraries.strings().withChars("0123456789").ofMinLength(1).ofMaxLength(14);
+        Arbitrary<String> bits = Arbitraries.oneOf(digits, Arbitraries.of(".", ",", "e", "E", "e-", "e+", "-", "+", " ",
+                "n", "u", "\u00B5", "k", "K", "M", "G", "T", "R", "m", "p", "V", "A", "C", "s", "Hz", "F", "W", "%",
+                "Ohm", "\u03A9", "NaN", "Infinity"));
+        return bits.list().ofMinSize(1).ofMaxSize(6).map(l -> String.join("", l));
+    }
+
     /** One edit of the text; positions are taken modulo its length. */
     record Edit(int op, int a, int b, char c) {
         String apply(String t) {
