@@ -3,12 +3,14 @@ package org.gatefit.catalog;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
 import java.io.PushbackInputStream;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
 import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -143,9 +145,7 @@ public final class SheetReader {
                     "the file is empty (expected a header line naming the columns, then one row per part)"));
         }
         pin.unread(bom, 0, keep);
-        CharsetDecoder dec = StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
-        BufferedReader reader = new BufferedReader(new InputStreamReader(pin, dec), 1 << 16);
+        BufferedReader reader = new BufferedReader(new StrictUtf8Reader(pin), 1 << 16);
         char delimiter;
         try {
             delimiter = sniffDelimiter(reader);
@@ -480,6 +480,68 @@ public final class SheetReader {
             return '\t';
         }
         return ',';
+    }
+
+    /**
+     * Decodes UTF-8 strictly like an {@code InputStreamReader} with {@link CodingErrorAction#REPORT},
+     * but first hands out every character before a malformed byte and fails only on the read that
+     * reaches it. ({@code InputStreamReader} fails the whole read, which drops up to a buffer of
+     * good lines and makes the error look as if it were on the first line.)
+     */
+    private static final class StrictUtf8Reader extends Reader {
+        private final InputStream in;
+        private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        private final ByteBuffer bytes = ByteBuffer.allocate(8192).flip();
+        private boolean eof;
+        private boolean flushed;
+
+        StrictUtf8Reader(InputStream in) {
+            this.in = in;
+        }
+
+        @Override
+        public int read(char[] cbuf, int off, int len) throws IOException {
+            if (len == 0) {
+                return 0;
+            }
+            if (flushed) {
+                return -1;
+            }
+            CharBuffer out = CharBuffer.wrap(cbuf, off, len);
+            while (true) {
+                CoderResult cr = decoder.decode(bytes, out, eof);
+                int n = out.position() - off;
+                if (cr.isError()) {
+                    if (n > 0) {
+                        return n;
+                    }
+                    cr.throwException();
+                }
+                if (cr.isOverflow() || n > 0) {
+                    return n;
+                }
+                if (eof) {
+                    decoder.flush(out);
+                    flushed = true;
+                    n = out.position() - off;
+                    return n == 0 ? -1 : n;
+                }
+                bytes.compact();
+                int got = in.read(bytes.array(), bytes.arrayOffset() + bytes.position(), bytes.remaining());
+                if (got < 0) {
+                    eof = true;
+                } else {
+                    bytes.position(bytes.position() + got);
+                }
+                bytes.flip();
+            }
+        }
+
+        @Override
+        public void close() throws IOException {
+            in.close();
+        }
     }
 
     /** Discards bytes (for hashing the rest of a file after a fatal problem). */

@@ -42,6 +42,15 @@ public final class Units {
      *                     semicolons or tabs, as spreadsheets in many locales write them)
      */
     public static double parse(String text, Unit unit, boolean decimalComma) throws BadValueException {
+        try {
+            return parseNumber(text, unit, decimalComma);
+        } catch (NumberFormatException | ArithmeticException e) {
+            // BigDecimal refuses exponents beyond int range ("1e99999999999") and scale overflow.
+            throw new BadValueException("'" + text + "' is out of range (expected " + expectation(unit, null) + ")");
+        }
+    }
+
+    private static double parseNumber(String text, Unit unit, boolean decimalComma) throws BadValueException {
         String t = text.strip();
         if (t.isEmpty()) {
             throw new BadValueException("empty value (expected " + expectation(unit, null) + ")");

@@ -1,0 +1,49 @@
+package org.gatefit.cli;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Runs gatefit through {@link Cli#create} as {@code main} does, with captured streams, an empty
+ * environment and a fixed clock.
+ *
+ * @param exit exit code
+ * @param out  standard output
+ * @param err  standard error
+ */
+record CliRun(int exit, String out, String err) {
+    /** The fixed time every import in the tests is recorded at. */
+    static final Instant NOW = Instant.parse("2030-01-02T03:04:05Z");
+    static final Clock CLOCK = Clock.fixed(NOW, ZoneOffset.UTC);
+
+    /** {@code gatefit --catalog CATALOG ARGS...} */
+    static CliRun on(Path catalog, String... args) {
+        List<String> all = new ArrayList<>(List.of("--catalog", catalog.toString()));
+        all.addAll(List.of(args));
+        return raw(Map.of(), all.toArray(String[]::new));
+    }
+
+    /** {@code gatefit ARGS...} with the given environment. */
+    static CliRun raw(Map<String, String> env, String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        PrintWriter o = new PrintWriter(out, true);
+        PrintWriter e = new PrintWriter(err, true);
+        int code = Cli.create(o, e, env, CLOCK).execute(args);
+        o.flush();
+        e.flush();
+        return new CliRun(code, out.toString(), err.toString());
+    }
+
+    /** A readable dump for assertion messages. */
+    String dump() {
+        return "exit " + exit + "\n--- stdout\n" + out + "\n--- stderr\n" + err;
+    }
+}
