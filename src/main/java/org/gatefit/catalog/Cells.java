@@ -9,6 +9,8 @@ import java.util.Locale;
 public final class Cells {
     /** Characters that make a spreadsheet run a cell as a formula (OWASP CSV injection guidance). */
     static final String FORMULA_START = "=+-@\t\r";
+    private static final java.util.regex.Pattern SPACE = java.util.regex.Pattern.compile("\\s+");
+    private static final java.util.regex.Pattern PLAIN = java.util.regex.Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
 
     private Cells() {
     }
@@ -58,7 +60,7 @@ public final class Cells {
     private static String text(Column c, String t) throws BadValueException {
         String v = restoreText(t);
         if (c.pattern() != null) {
-            v = v.toLowerCase(Locale.ROOT).replaceAll("\\s+", "");
+            v = SPACE.matcher(v.toLowerCase(Locale.ROOT)).replaceAll("");
             if (!c.pattern().matcher(v).matches()) {
                 throw new BadValueException("'" + t + "' is not valid (expected " + c.description()
                         .replaceAll("\\.$", "").toLowerCase(Locale.ROOT) + ")");
@@ -86,7 +88,7 @@ public final class Cells {
     private static double plainNumber(Column c, String t, boolean decimalComma) throws BadValueException {
         String s = decimalComma ? t.replace(',', '.') : t;
         try {
-            if (!s.matches("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?")) {
+            if (!PLAIN.matcher(s).matches()) {
                 throw new NumberFormatException();
             }
             double d = Double.parseDouble(s);

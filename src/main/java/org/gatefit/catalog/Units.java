@@ -52,6 +52,11 @@ public final class Units {
 
     private static double parseNumber(String text, Unit unit, boolean decimalComma) throws BadValueException {
         String t = text.strip();
+        if (plainDecimal(t)) {
+            // A bare number is already in the column's unit; parseDouble rounds correctly, as BigDecimal would.
+            double d = Double.parseDouble(t);
+            return d == 0 ? 0.0 : d;
+        }
         if (t.isEmpty()) {
             throw new BadValueException("empty value (expected " + expectation(unit, null) + ")");
         }
@@ -96,6 +101,28 @@ public final class Units {
         }
         throw new BadValueException("'" + text + "' has an unknown unit '" + suffix + "' (expected "
                 + expectation(unit, null) + ")");
+    }
+
+    /** Digits with an optional sign and one decimal point, nothing else (the common case, parsed fast). */
+    private static boolean plainDecimal(String t) {
+        int n = t.length();
+        if (n == 0 || n > 18) {
+            return false;
+        }
+        int i = t.charAt(0) == '-' || t.charAt(0) == '+' ? 1 : 0;
+        boolean digit = false;
+        boolean point = false;
+        for (; i < n; i++) {
+            char c = t.charAt(i);
+            if (c >= '0' && c <= '9') {
+                digit = true;
+            } else if (c == '.' && !point) {
+                point = true;
+            } else {
+                return false;
+            }
+        }
+        return digit;
     }
 
     /** Parses a whole non-negative or signed count, e.g. stock; a point with zeros after it is accepted. */

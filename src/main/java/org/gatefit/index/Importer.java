@@ -19,6 +19,7 @@ import org.apache.lucene.document.Document;
 import org.apache.lucene.document.Field;
 import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
+import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.Term;
@@ -137,8 +138,12 @@ public final class Importer {
         List<SheetReader.Summary> summaries = new ArrayList<>();
         List<Problem> problems = new ArrayList<>();
         long[] problemTotal = {0};
-        long[] written = {0};
         long rejected = 0;
+        long written;
+        int threads = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+        DirectoryReader committed = DirectoryReader.indexExists(writer.getDirectory())
+                ? DirectoryReader.open(writer.getDirectory()) : null;
+        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, listener, threads)) {
         for (int i = 0; i < files.size(); i++) {
             String name = names.get(i);
             boolean[] stop = {false};
@@ -150,11 +155,9 @@ public final class Importer {
                     }
                     if (options.replace() && cleared.add(row.kind())) {
                         writer.deleteDocuments(new Term(Fields.KIND, row.kind().id()));
+                        pipeline.cleared(row.kind().id());
                     }
-                    Document doc = Documents.toDocument(row);
-                    writer.updateDocument(new Term(Fields.ID, Fields.id(row.kind().id(), row.key())), doc);
-                    written[0]++;
-                    listener.rowWritten(written[0]);
+                    pipeline.submit(row);
                 }
 
                 @Override
@@ -182,8 +185,12 @@ public final class Importer {
             if (s.kind() != null && (s.rows() > 0 || options.replace())) {
                 if (options.replace() && cleared.add(s.kind())) {
                     writer.deleteDocuments(new Term(Fields.KIND, s.kind().id()));
+                    pipeline.cleared(s.kind().id());
                 }
             }
+        }
+        pipeline.finish();
+        written = pipeline.written();
         }
         if (problemTotal[0] > 0) {
             throw new CatalogDataException(problems, problemTotal[0]);
@@ -200,7 +207,7 @@ public final class Importer {
             d.add(new StoredField(Fields.IMPORT_MODE, options.replace() ? "replace" : skip ? "skip-invalid" : "upsert"));
             writer.addDocument(d);
         }
-        return new Result(summaries, written[0], rejected);
+        return new Result(summaries, written, rejected);
     }
 
     /**

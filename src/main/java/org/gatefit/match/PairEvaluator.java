@@ -694,11 +694,17 @@ public final class PairEvaluator {
                 rgMin = Math.max(0, n * (DAMPING_TARGET * rCrit - fixed));
                 rgMax = n * (swing * op.edge() / (Margins.DEFAULT.driveCurrent() * qTotal) - fixed);
                 if (rgMax >= rgMin && rgMax > 0) {
-                    double pick = ESeries.E24.roundUp(Math.max(rgMin, 1e-3));
-                    rgRecommended = pick <= rgMax ? pick : ESeries.E24.roundDown(rgMax);
-                    if (rgRecommended < rgMin) {
-                        rgRecommended = Double.NaN;
+                    // Aim at half the edge-limited maximum (margin on the edge, damping to spare; common
+                    // practice, no source), but never below the damping minimum.
+                    double aim = Math.max(rgMin, rgMax / 2);
+                    double pick = ESeries.E24.roundNearest(aim);
+                    if (pick < rgMin) {
+                        pick = ESeries.E24.roundUp(rgMin);
                     }
+                    if (pick > rgMax) {
+                        pick = ESeries.E24.roundDown(rgMax);
+                    }
+                    rgRecommended = pick >= rgMin && pick <= rgMax ? pick : Double.NaN;
                 }
             }
             if (op.highSide() && d.topology().bootstrapped()) {
@@ -772,7 +778,7 @@ public final class PairEvaluator {
             add(f, "bootstrap-inrush", bootInrush, "A", "(V_drive − V_F) / R_boot at first charge", false);
             add(f, "noise-margin-high", nmHigh, "V", "V_OH − V_IH", false);
             add(f, "noise-margin-low", nmLow, "V", "V_IL − V_OL", false);
-            add(f, "dv-dt", slew, "V/s", Double.isNaN(op.dvdt()) ? "bus / plateau-time-on (estimate)" : "as given", Double.isNaN(op.dvdt()));
+            add(f, "dv-dt", slew, "V/s", Double.isNaN(op.dvdt()) ? "bus / plateau-time-on" : "as given", Double.isNaN(op.dvdt()));
             add(f, "miller-induced-voltage", vInduced, "V", "C_gd·dv/dt·R_off·(1 − e^(−T/(R·C_iss)))", Double.isNaN(op.dvdt()));
             add(f, "dv-dt-allowed", dvdtAllowed, "V/s", "slew at which the induced voltage reaches V_th,min", false);
             return f;

@@ -254,7 +254,7 @@ public final class MatchReports {
         out.write("\nChecks\n");
         for (Check c : p.checks()) {
             String head = String.format("  %-8s %-14s", "[" + c.verdict().id() + "]", c.rule().id());
-            out.write(head + Wrap.wrap(c.message(), WIDTH - head.length(), head.length()) + "\n");
+            out.write(head + Wrap.wrap(c.message(), WIDTH, head.length(), head.length()) + "\n");
         }
         out.write("\nFigures\n");
         TextTable t = new TextTable(List.of("figure", "value", "how"), false, true, false);
