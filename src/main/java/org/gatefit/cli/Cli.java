@@ -27,6 +27,7 @@ public final class Cli {
         cl.addSubcommand("export", new ExportCommand(ctx));
         cl.addSubcommand("shortlist", new ShortlistCommand(ctx));
         cl.addSubcommand("explain", new ExplainCommand(ctx));
+        cl.addSubcommand("check", new CheckCommand(ctx));
         cl.addSubcommand("demo", new DemoCommand(ctx));
         cl.setOut(out);
         cl.setErr(err);

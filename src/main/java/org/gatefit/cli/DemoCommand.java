@@ -61,10 +61,20 @@ final class DemoCommand implements Callable<Integer> {
             if (first != null) {
                 worst = Math.max(worst, step("5. Every column of one switch, with units", catalog, "show", first));
             }
-            worst = Math.max(worst, step("6. Check the design's stage sheet as import would (writes nothing)", catalog,
-                    "validate", st));
-            ctx.out.println("Figures are estimates from datasheet values: verify on the bench and against each part's");
-            ctx.out.println("datasheet. High voltage can kill; follow local codes and licensed practice.");
+            worst = Math.max(worst, step("6. Validate the design's stage sheet (writes nothing)", catalog, "validate", st));
+            worst = Math.max(worst, step("7. Shortlist drivers for the 1200 V SiC switch of the traction inverter's high side",
+                    catalog, "shortlist", "--switch", "OBP-12M016K4", "--side", "high", "--bus", "800", "--freq", "10",
+                    "--edge", "120", "--drive", "18", "--drive-neg", "-4", "--rg", "2", "--rg-off", "1", "--loop", "10",
+                    "--logic", "lvcmos-3v3", "--top", "5"));
+            worst = Math.max(worst, step("8. The full calculation sheet of the first choice", catalog, "explain",
+                    "--driver", "ISY-5710S", "--switch", "OBP-12M016K4", "--side", "high", "--bus", "800", "--freq", "10",
+                    "--edge", "120", "--drive", "18", "--drive-neg", "-4", "--rg", "2", "--rg-off", "1", "--loop", "10",
+                    "--logic", "lvcmos-3v3"));
+            worst = Math.max(worst, step("9. Check the whole design: every stage, resolved through the BOM"
+                    + " (it has instructive mistakes, so this step reports failures)", catalog, "check", st, "--bom",
+                    ex.resolve("bom.csv").toString()));
+            ctx.out.println("That was the demo: the failures in step 9 are the scenario's deliberate mistakes,"
+                    + " described in examples/README.md.");
             return worst <= ExitCode.FAILED ? ExitCode.OK : worst;
         } finally {
             deleteTree(tmp);

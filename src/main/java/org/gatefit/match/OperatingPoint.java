@@ -27,12 +27,13 @@ import org.gatefit.physics.LogicFamily;
  * @param diodeDrop  bootstrap diode forward drop, V
  * @param rBoot      bootstrap charging resistance, Ω
  * @param dvdt       switch-node slew rate to check against, V/s (NaN: estimate from the pair)
+ * @param bootAssumed whether the bootstrap diode drop or resistance was assumed (said by the bootstrap check)
  * @param assumed    what was assumed, one line each
  */
 public record OperatingPoint(boolean highSide, double bus, double fSw, double edge, double vDrive, double vDriveNeg,
                              LogicFamily logic, double vOh, double vOl, double vOhMax, boolean activeHigh, double rG,
                              double rGOff, double dutyMax, int parallel, double loop, double diodeDrop, double rBoot,
-                             double dvdt, List<String> assumed) {
+                             double dvdt, boolean bootAssumed, List<String> assumed) {
 
     /** Gate-loop inductance assumed when none is given (REFERENCES.md §3: 10–20 nH leaded, from memory). */
     public static final double DEFAULT_LOOP = 10e-9;
@@ -229,15 +230,13 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             }
             double vf = diodeDrop != null ? diodeDrop : DEFAULT_DIODE_DROP;
             double rb = rBoot != null ? rBoot : DEFAULT_R_BOOT;
-            if (hs && (diodeDrop == null || rBoot == null)) {
-                a.add("bootstrap: diode drop " + Eng.of(vf, "V") + ", charging resistance " + Eng.of(rb, "Ω") + " assumed");
-            }
             if (sw.rGInt() != sw.rGInt()) {
                 a.add("internal gate resistance of " + sw.partNumber() + " unknown: 0 Ω used (currents are upper bounds)");
             }
             return new OperatingPoint(hs, bus == null ? Double.NaN : bus, fSw, e, on, off, fam, oh, ol, ohMax,
                     activeHigh == null || activeHigh, rg, rgOff, dutyMax == null ? Double.NaN : dutyMax,
-                    parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt, a);
+                    parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt,
+                    diodeDrop == null || rBoot == null, a);
         }
     }
 }

@@ -430,7 +430,8 @@ public final class PairEvaluator {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "low side: no bootstrap supply needed", List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(Rule.BOOTSTRAP, "a low-side driver has no floating supply to bootstrap", List.of());
+            return fail(Rule.BOOTSTRAP, "no bootstrap is possible: a low-side driver has no floating supply (see high-side)",
+                    List.of());
         }
         if (!d.topology().bootstrapped()) {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "isolated output: it needs its own isolated supply of "
@@ -447,7 +448,9 @@ public final class PairEvaluator {
                     + " — raise V_drive or pick a driver with a lower UVLO", cmp);
         }
         String sizing = "C_boot ≥ " + Eng.of(c.bootCMin, "F") + " for " + Eng.of(c.bootCharge, "C") + " per cycle at "
-                + Eng.of(c.bootDroop, "V") + " droop; use " + Eng.of(c.bootCRec, "F");
+                + Eng.of(c.bootDroop, "V") + " droop; use " + Eng.of(c.bootCRec, "F")
+                + (op.bootAssumed() ? " (V_F " + Eng.of(op.diodeDrop(), "V") + ", R_boot " + Eng.of(op.rBoot(), "Ω")
+                + " assumed)" : "");
         String diode = Boolean.FALSE.equals(d.bootstrapDiode()) ? ", with an external fast diode rated ≥ "
                 + Eng.of(Double.isNaN(op.bus()) ? Double.NaN : op.bus() * 1.2, "V") : "";
         cmp.add(new Comparison("duty cycle", op.dutyMax(), "≤", c.bootDutyMax, "1"));
@@ -640,11 +643,24 @@ public final class PairEvaluator {
             this.rInt = s.rGIntOrZero();
             double swing = op.swing();
             try {
-                Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG(), s.qGs(), s.qGd(), s.qGVgs(), s.vPlateau(),
-                        s.cIss(), op.vDrive(), op.vDriveNeg());
+                // q_g_vgs_v is the swing Q_g is specified over. When it equals the switch's recommended
+                // bipolar swing (e.g. −5 V to +18 V for SiC), the datasheet curve starts at the negative
+                // level: extrapolate from the recommended on level and take the negative part's charge,
+                // C_iss·|V_off,spec|, back out (REFERENCES.md §1 gate-charge curve; an estimate).
+                double vSpec = s.qGVgs();
+                double specNegCharge = 0;
+                if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
+                        && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5) {
+                    vSpec = s.vGateOn();
+                    double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
+                            : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
+                    specNegCharge = cEq * -s.vGateOff();
+                }
+                Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG() - specNegCharge, s.qGs(), s.qGd(), vSpec,
+                        s.vPlateau(), s.cIss(), op.vDrive(), op.vDriveNeg());
                 if (q.isPresent()) {
                     qSwing = q.get().coulombs();
-                    qEstimated = q.get().estimated();
+                    qEstimated = q.get().estimated() || specNegCharge > 0;
                 } else {
                     qSwing = s.qG();
                     qEstimated = true;

@@ -18,39 +18,47 @@ final class MatchJson {
     static void checks(JsonGenerator g, PairResult r) throws IOException {
         g.writeArrayFieldStart("checks");
         for (Check c : r.checks()) {
+            check(g, c);
+        }
+        g.writeEndArray();
+    }
+
+    static void check(JsonGenerator g, Check c) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("rule", c.rule().id());
+        g.writeStringField("verdict", c.verdict().id());
+        g.writeStringField("message", c.message());
+        g.writeNumberField("score", round(c.score()));
+        g.writeArrayFieldStart("compared");
+        for (Check.Comparison x : c.compared()) {
             g.writeStartObject();
-            g.writeStringField("rule", c.rule().id());
-            g.writeStringField("verdict", c.verdict().id());
-            g.writeStringField("message", c.message());
-            g.writeNumberField("score", round(c.score()));
-            g.writeArrayFieldStart("compared");
-            for (Check.Comparison x : c.compared()) {
-                g.writeStartObject();
-                g.writeStringField("quantity", x.quantity());
-                number(g, "value", x.value());
-                g.writeStringField("relation", x.relation());
-                number(g, "limit", x.limit());
-                g.writeStringField("unit", x.unit());
-                g.writeEndObject();
-            }
-            g.writeEndArray();
+            g.writeStringField("quantity", x.quantity());
+            number(g, "value", x.value());
+            g.writeStringField("relation", x.relation());
+            number(g, "limit", x.limit());
+            g.writeStringField("unit", x.unit());
             g.writeEndObject();
         }
         g.writeEndArray();
+        g.writeEndObject();
     }
 
     static void figures(JsonGenerator g, PairResult r) throws IOException {
         g.writeArrayFieldStart("figures");
         for (Figure f : r.figures()) {
-            g.writeStartObject();
-            g.writeStringField("name", f.name());
-            number(g, "value", f.value());
-            g.writeStringField("unit", f.unit());
-            g.writeStringField("label", f.label());
-            g.writeBooleanField("estimated", f.estimated());
-            g.writeEndObject();
+            figure(g, f);
         }
         g.writeEndArray();
+    }
+
+    static void figure(JsonGenerator g, Figure f) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("name", f.name());
+        number(g, "value", f.value());
+        g.writeStringField("unit", f.unit());
+        g.writeStringField("label", f.label());
+        g.writeBooleanField("estimated", f.estimated());
+        g.writeEndObject();
     }
 
     static void point(JsonGenerator g, OperatingPoint p) throws IOException {

@@ -1,0 +1,130 @@
+package org.gatefit.cli;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.gatefit.catalog.Bom;
+import org.gatefit.catalog.CatalogDataException;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Row;
+import org.gatefit.catalog.SheetReader;
+import org.gatefit.index.Catalog;
+import org.gatefit.match.Margins;
+import org.gatefit.match.StageCheck;
+import org.gatefit.report.CheckReports;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+@Command(name = "check", mixinStandardHelpOptions = true,
+        header = "Check every driver–switch pair of a design (stage sheet, optionally a BOM).",
+        description = {"Reads the stage sheet (one row per driver output and the switch it drives; columns in"
+            + " catalog-schema/README.md), resolves designators through --bom, and runs every rule on each stage."
+            + " Prints a summary and, per stage, the failing and warning rules with what would fix them; half-bridges"
+            + " (two stages sharing a driver designator, one high and one low) also get a dead-time note.",
+            "",
+            "Exit 0 when no stage fails, 1 when one does (so it can gate a CI build), 3 when an input file is bad."})
+final class CheckCommand extends CatalogCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "STAGES.csv", description = "The stage sheet.")
+    Path stages;
+
+    @Option(names = "--bom", paramLabel = "BOM.csv",
+            description = "BOM to resolve designators (designator and part-number columns; DNP and quantity optional).")
+    Path bom;
+
+    @Option(names = "--junit", paramLabel = "FILE", description = "Also write a JUnit-XML report (one test case per stage and rule).")
+    Path junit;
+
+    @Option(names = "--margin", paramLabel = "NAME=VALUE", description = "Override a margin (repeatable); see 'shortlist --help'.")
+    List<String> margins = new ArrayList<>();
+
+    @Mixin
+    OutputOptions output;
+
+    CheckCommand(Context ctx) {
+        super(ctx);
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        Margins m = Margins.DEFAULT;
+        for (String a : margins) {
+            try {
+                m = m.with(a);
+            } catch (IllegalArgumentException e) {
+                throw new UsageException("--margin: " + e.getMessage());
+            }
+        }
+        StageCheck.Report report = run(stages, bom, m);
+        for (String n : report.bomNotes()) {
+            ctx.err.println("warning: " + n);
+        }
+        try (Writer w = output.open(ctx)) {
+            CheckReports.render(report, output.format, w);
+        }
+        if (junit != null) {
+            Path parent = junit.toAbsolutePath().getParent();
+            if (parent != null) {
+                Files.createDirectories(parent);
+            }
+            try (Writer w = Files.newBufferedWriter(junit, StandardCharsets.UTF_8)) {
+                CheckReports.junit(report, w);
+            }
+        }
+        return report.failed() ? ExitCode.FAILED : ExitCode.OK;
+    }
+
+    /** Reads the stage sheet and BOM and checks every stage against the catalog. */
+    StageCheck.Report run(Path stagesFile, Path bomFile, Margins m) throws IOException, CatalogDataException {
+        if (!Files.isRegularFile(stagesFile)) {
+            throw new NoSuchFileException(stagesFile.toString());
+        }
+        List<Row> rows = readStages(stagesFile);
+        Bom b = null;
+        if (bomFile != null) {
+            if (!Files.isRegularFile(bomFile)) {
+                throw new NoSuchFileException(bomFile.toString());
+            }
+            b = Bom.read(bomFile, bomFile.toString());
+        }
+        try (Catalog c = Catalog.open(catalogDir())) {
+            if (c.isEmpty()) {
+                ctx.err.println("note: the catalog in " + c.directory() + " is empty; every stage will fail the catalog rule");
+            }
+            return StageCheck.run(stagesFile.toString(), rows, b, pn -> lookup(c, Kind.DRIVER, pn),
+                    pn -> lookup(c, Kind.SWITCH, pn), m);
+        }
+    }
+
+    /** The stage sheet's rows; any problem is bad input (exit 3). */
+    static List<Row> readStages(Path file) throws IOException, CatalogDataException {
+        List<Row> rows = new ArrayList<>();
+        SheetReader.Summary s = SheetReader.read(file, file.toString(), Kind.STAGE, new SheetReader.Sink() {
+            @Override
+            public void accept(Row row) {
+                rows.add(row);
+            }
+        });
+        if (!s.clean()) {
+            throw new CatalogDataException(s.problems(), s.problemCount());
+        }
+        return rows;
+    }
+
+    private static Optional<Row> lookup(Catalog c, Kind k, String pn) {
+        try {
+            return c.get(k, pn);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
