@@ -28,6 +28,7 @@ public final class Cli {
         cl.addSubcommand("shortlist", new ShortlistCommand(ctx));
         cl.addSubcommand("explain", new ExplainCommand(ctx));
         cl.addSubcommand("check", new CheckCommand(ctx));
+        cl.addSubcommand("replace", new ReplaceCommand(ctx));
         cl.addSubcommand("demo", new DemoCommand(ctx));
         cl.setOut(out);
         cl.setErr(err);

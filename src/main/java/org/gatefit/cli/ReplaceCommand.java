@@ -1,0 +1,126 @@
+package org.gatefit.cli;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.gatefit.catalog.Bom;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Row;
+import org.gatefit.index.Catalog;
+import org.gatefit.index.PartSearch;
+import org.gatefit.match.Margins;
+import org.gatefit.match.Replacement;
+import org.gatefit.report.ReplaceReports;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+@Command(name = "replace", mixinStandardHelpOptions = true,
+        header = "Rank substitutes for a switch or driver: drop-in, pin-compatible or functional.",
+        description = {"Compares every catalog part of the same kind with PART, parameter by parameter (the README"
+            + " lists which must be equal, which may be better and which need re-verification outside a window),"
+            + " and grades it: drop-in (same pinout, nothing worse, nothing to re-verify, every pairing still passes),"
+            + " pin-compatible (same pinout, something to re-verify) or functional (other pinout, electrically fit)."
+            + " A part with a worse essential rating (blocking voltage, gate window, offset or isolation rating,"
+            + " technology, channel type, topology, channel count, input polarity) is not offered.",
+            "",
+            "With --stages, the candidate takes PART's place in every stage that uses it and all rules run with"
+            + " that stage's counterpart and operating point. Obsolete parts are left out unless asked for."})
+final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "PART", description = "The part to replace.")
+    String part;
+
+    @Option(names = "--kind", paramLabel = "KIND", converter = KindConverter.class,
+            description = "switch or driver, when both kinds have this part number.")
+    Kind kind;
+
+    @Option(names = "--stages", paramLabel = "STAGES.csv", description = "Re-check the stages that use PART.")
+    Path stages;
+
+    @Option(names = "--bom", paramLabel = "BOM.csv", description = "BOM to resolve the stage sheet's designators.")
+    Path bom;
+
+    @Option(names = "--top", paramLabel = "N", defaultValue = "10", description = "How many substitutes to list (default: ${DEFAULT-VALUE}).")
+    int top;
+
+    @Option(names = "--include-obsolete", description = "Also consider obsolete parts.")
+    boolean includeObsolete;
+
+    @Option(names = "--margin", paramLabel = "NAME=VALUE", description = "Override a margin (repeatable); see 'shortlist --help'.")
+    List<String> margins = new ArrayList<>();
+
+    @Mixin
+    OutputOptions output;
+
+    ReplaceCommand(Context ctx) {
+        super(ctx);
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        if (top < 1) {
+            throw new UsageException("--top: expected at least 1, got " + top);
+        }
+        if (bom != null && stages == null) {
+            throw new UsageException("--bom needs --stages (the BOM resolves the stage sheet's designators)");
+        }
+        Margins m = Margins.DEFAULT;
+        for (String a : margins) {
+            try {
+                m = m.with(a);
+            } catch (IllegalArgumentException e) {
+                throw new UsageException("--margin: " + e.getMessage());
+            }
+        }
+        List<Row> stageRows = List.of();
+        Bom b = null;
+        if (stages != null) {
+            stageRows = CheckCommand.readStages(stages);
+            if (bom != null) {
+                if (!Files.isRegularFile(bom)) {
+                    throw new NoSuchFileException(bom.toString());
+                }
+                b = Bom.read(bom, bom.toString());
+            }
+        }
+        Replacement.Result r;
+        try (Catalog c = Catalog.open(catalogDir())) {
+            List<Row> found = kind == null ? c.lookup(part) : c.get(kind, part).map(List::of).orElse(List.of());
+            if (found.isEmpty()) {
+                throw new UsageException("no part '" + part + "' in the catalog " + c.directory());
+            }
+            if (found.size() > 1) {
+                throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");
+            }
+            Row original = found.get(0);
+            List<PartSearch.Condition> pre = new ArrayList<>();
+            for (String s : Replacement.prefilter(original, includeObsolete)) {
+                pre.add(PartSearch.Condition.parse(s));
+            }
+            List<Row> candidates = new ArrayList<>();
+            c.scan(original.kind(), PartSearch.filter(original.kind(), pre), candidates::add);
+            r = Replacement.run(original, candidates, c.count(original.kind()), top, includeObsolete, stages == null ? "" : stages.toString(),
+                    stageRows, b, pn -> lookup(c, Kind.DRIVER, pn), pn -> lookup(c, Kind.SWITCH, pn), m);
+        }
+        try (Writer w = output.open(ctx)) {
+            ReplaceReports.render(r, output.format, w);
+        }
+        return ExitCode.OK;
+    }
+
+    private static Optional<Row> lookup(Catalog c, Kind k, String pn) {
+        try {
+            return c.get(k, pn);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

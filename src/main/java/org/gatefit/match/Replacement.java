@@ -1,0 +1,405 @@
+package org.gatefit.match;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Function;
+import org.gatefit.catalog.Bom;
+import org.gatefit.catalog.Column;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Numbers;
+import org.gatefit.catalog.Row;
+import org.gatefit.catalog.Schema;
+
+/**
+ * {@code replace}: ranks substitutes for a part as drop-in, pin-compatible or functional.
+ *
+ * <p>Each parameter has a sense (the README's table lists them):
+ * <ul>
+ *   <li><b>essential</b>: must be equal (technology, channel type, topology, input polarity,
+ *       channel count) or at least as good (blocking voltage, gate-voltage window, offset and
+ *       isolation ratings); a candidate that is worse is not offered at all;</li>
+ *   <li><b>rating</b>: may be better; worse rules out drop-in (current rating, R_on, V_CE(sat),
+ *       supply range, input limits, negative rail, package power, Miller clamp, bootstrap diode,
+ *       input thresholds);</li>
+ *   <li><b>window</b>: changes how the circuit behaves, so outside a window around the original
+ *       it needs re-verification even when "better" (threshold voltages, gate charges and
+ *       capacitances, plateau, internal gate resistance, recommended drive levels, UVLO, peak
+ *       current and output resistance, propagation delay).</li>
+ * </ul>
+ * Grades: drop-in = same pinout, no worse rating, every window parameter inside its window, not
+ * obsolete, and (with stages) no pairing fails or gets a worse verdict on any rule; pin-compatible
+ * = same pinout otherwise; functional = other pinout, no worse rating and no failing pairing (parts
+ * with another pinout and a worse rating are not offered).
+ */
+public final class Replacement {
+
+    /** How a parameter is compared. */
+    enum Sense { SAME, HIGHER, LOWER, YES, WINDOW_REL, WINDOW_ABS }
+
+    /**
+     * @param column    catalog column
+     * @param label     name for people
+     * @param sense     comparison
+     * @param essential whether worse means "not offered"
+     * @param window    half-width of the window: a fraction for WINDOW_REL, volts for WINDOW_ABS
+     */
+    record Param(String column, String label, Sense sense, boolean essential, double window) {
+    }
+
+    /** Window for gate charges, capacitances, peak currents, output resistances (common practice, no source). */
+    public static final double CHARGE_WINDOW = 0.20;
+    /** Window for threshold, plateau, recommended drive and UVLO levels, in volts (common practice, no source). */
+    public static final double LEVEL_WINDOW = 0.5;
+
+    static final List<Param> SWITCH = List.of(
+            new Param("technology", "technology", Sense.SAME, true, 0),
+            new Param("channel", "channel type", Sense.SAME, true, 0),
+            new Param("v_block_v", "blocking voltage", Sense.HIGHER, true, 0),
+            new Param("v_gs_max_v", "V_GS max", Sense.HIGHER, true, 0),
+            new Param("v_gs_min_v", "V_GS min", Sense.LOWER, true, 0),
+            new Param("i_cont_a", "continuous current", Sense.HIGHER, false, 0),
+            new Param("r_on_mohm", "R_DS(on)", Sense.LOWER, false, 0),
+            new Param("v_ce_sat_v", "V_CE(sat)", Sense.LOWER, false, 0),
+            new Param("r_on_vgs_v", "full-enhancement V_GS", Sense.LOWER, false, 0),
+            new Param("v_th_min_v", "V_th min", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("v_th_max_v", "V_th max", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("v_gate_on_v", "recommended on level", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("v_gate_off_v", "recommended off level", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("q_g_nc", "gate charge Q_g", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("q_gs_nc", "Q_gs", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("q_gd_nc", "Q_gd", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("v_plateau_v", "plateau voltage", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("c_iss_pf", "C_iss", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("c_rss_pf", "C_rss", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("r_g_int_ohm", "internal gate resistance", Sense.WINDOW_REL, false, 0.5));
+
+    static final List<Param> DRIVER = List.of(
+            new Param("topology", "topology", Sense.SAME, true, 0),
+            new Param("input_polarity", "input polarity", Sense.SAME, true, 0),
+            new Param("channels", "channels", Sense.SAME, true, 0),
+            new Param("v_offset_max_v", "offset rating", Sense.HIGHER, true, 0),
+            new Param("isolation_vrms", "isolation rating", Sense.HIGHER, true, 0),
+            new Param("v_supply_min_v", "minimum supply", Sense.LOWER, false, 0),
+            new Param("v_supply_max_v", "maximum supply", Sense.HIGHER, false, 0),
+            new Param("v_in_max_v", "input maximum", Sense.HIGHER, false, 0),
+            new Param("v_ih_v", "V_IH", Sense.LOWER, false, 0),
+            new Param("v_il_v", "V_IL", Sense.HIGHER, false, 0),
+            new Param("v_neg_min_v", "negative rail", Sense.LOWER, false, 0),
+            new Param("p_max_w", "package power", Sense.HIGHER, false, 0),
+            new Param("bootstrap_diode", "bootstrap diode", Sense.YES, false, 0),
+            new Param("miller_clamp", "Miller clamp", Sense.YES, false, 0),
+            new Param("t_match_ns", "delay matching", Sense.LOWER, false, 0),
+            new Param("i_qbs_ua", "high-side quiescent", Sense.LOWER, false, 0),
+            new Param("uvlo_on_v", "UVLO rising", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("uvlo_off_v", "UVLO falling", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
+            new Param("i_source_a", "peak source current", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("i_sink_a", "peak sink current", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("r_source_ohm", "source resistance", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("r_sink_ohm", "sink resistance", Sense.WINDOW_REL, false, CHARGE_WINDOW),
+            new Param("t_prop_ns", "propagation delay", Sense.WINDOW_REL, false, CHARGE_WINDOW));
+
+    /** Grades, best first. */
+    public enum Grade {
+        DROP_IN("drop-in"), PIN_COMPATIBLE("pin-compatible"), FUNCTIONAL("functional");
+
+        private final String id;
+
+        Grade(String id) {
+            this.id = id;
+        }
+
+        public String id() {
+            return id;
+        }
+    }
+
+    /**
+     * One parameter compared.
+     *
+     * @param parameter  column name
+     * @param label      for people
+     * @param original   original's value as text (unit in {@code unit}), or "unknown"
+     * @param candidate  candidate's value as text, or "unknown"
+     * @param unit       unit symbol
+     * @param assessment {@code equal}, {@code better}, {@code worse}, {@code within-window}, {@code re-verify}
+     */
+    public record Difference(String parameter, String label, String original, String candidate, String unit,
+                             String assessment) {
+    }
+
+    /**
+     * A stage re-checked with the candidate in place.
+     *
+     * @param stage   stage id
+     * @param rule    rule id
+     * @param verdict with the candidate
+     * @param was     with the original
+     * @param message the check's sentence
+     */
+    public record StageNote(String stage, String rule, Verdict verdict, Verdict was, String message) {
+    }
+
+    /** A ranked substitute. */
+    public record Candidate(String partNumber, String maker, String pinout, String lifecycle, long stock, double price,
+                            Grade grade, double score, List<Difference> differences, List<StageNote> checks,
+                            List<String> reasons) {
+        public Candidate {
+            differences = List.copyOf(differences);
+            checks = List.copyOf(checks);
+            reasons = List.copyOf(reasons);
+        }
+    }
+
+    /**
+     * @param part        the original part number
+     * @param kind        switch or driver
+     * @param original    the original's row
+     * @param candidates  best first
+     * @param considered  catalog parts of the kind other than the original
+     * @param notOffered  of those, how many are not offered (worse essential rating, obsolete, or
+     *                    another pinout with a worse rating or a failing pairing)
+     * @param stagesUsing stage ids the part sits in (empty without --stages)
+     */
+    public record Result(String part, Kind kind, Row original, List<Candidate> candidates, int considered,
+                         int notOffered, List<String> stagesUsing, Margins margins) {
+        public Result {
+            candidates = List.copyOf(candidates);
+            stagesUsing = List.copyOf(stagesUsing);
+        }
+    }
+
+    /** Best first: grade, score, price (unknown last), part number. */
+    static final Comparator<Candidate> RANKING = Comparator.comparing((Candidate c) -> c.grade().ordinal())
+            .thenComparing(Comparator.comparingDouble(Candidate::score).reversed())
+            .thenComparingDouble(c -> Double.isNaN(c.price()) ? Double.MAX_VALUE : c.price())
+            .thenComparing(Candidate::partNumber);
+
+    private Replacement() {
+    }
+
+    /**
+     * Catalog conditions ({@code find --where} syntax) that only skip parts certain to be left
+     * out: an essential parameter that is required (so always known) and worse, and obsolete
+     * parts unless asked for.
+     */
+    public static List<String> prefilter(Row original, boolean includeObsolete) {
+        List<String> c = new ArrayList<>();
+        if (original.kind() == Kind.SWITCH) {
+            c.add("technology = " + original.text("technology"));
+            c.add("v_block_v >= " + Numbers.format(original.number("v_block_v")));
+            c.add("v_gs_max_v >= " + Numbers.format(original.number("v_gs_max_v")));
+            c.add("v_gs_min_v <= " + Numbers.format(original.number("v_gs_min_v")));
+        } else {
+            c.add("topology = " + original.text("topology"));
+            c.add("input_polarity = " + original.text("input_polarity"));
+        }
+        if (!includeObsolete) {
+            c.add("lifecycle != obsolete");
+        }
+        return c;
+    }
+
+    /**
+     * Compares every candidate with the original and, when stages are given, re-checks every stage
+     * the original sits in with the candidate in its place.
+     *
+     * @param ofKind   parts of the original's kind in the catalog (for the "not offered" count)
+     * @param stages   stage-sheet rows (empty for none)
+     * @param bom      BOM for the stages' designators, or null
+     * @param drivers  catalog lookup of drivers by part number
+     * @param switches catalog lookup of switches by part number
+     */
+    public static Result run(Row original, Iterable<Row> candidates, int ofKind, int top, boolean includeObsolete,
+                             String stageFile,
+                             List<Row> stages, Bom bom, Function<String, Optional<Row>> drivers,
+                             Function<String, Optional<Row>> switches, Margins m) {
+        Kind kind = original.kind();
+        List<Param> params = kind == Kind.SWITCH ? SWITCH : DRIVER;
+        String pn = original.key();
+        // Stages that use the part, with the original in place.
+        List<Row> using = new ArrayList<>();
+        List<StageCheck.StageResult> baseline = new ArrayList<>();
+        if (!stages.isEmpty()) {
+            StageCheck.Report all = StageCheck.run(stageFile, stages, bom, drivers, switches, m);
+            for (int i = 0; i < stages.size(); i++) {
+                StageCheck.StageResult r = all.results().get(i);
+                String used = kind == Kind.DRIVER ? r.driver() : r.switchPart();
+                if (used != null && used.equalsIgnoreCase(pn)) {
+                    using.add(stages.get(i));
+                    baseline.add(r);
+                }
+            }
+        }
+        List<Candidate> out = new ArrayList<>();
+        for (Row cand : candidates) {
+            if (cand.key().equalsIgnoreCase(pn) || (!includeObsolete && "obsolete".equals(cand.text("lifecycle")))) {
+                continue;
+            }
+            evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m).ifPresent(out::add);
+        }
+        int considered = Math.max(0, ofKind - 1);
+        int notOffered = Math.max(0, considered - out.size());
+        out.sort(RANKING);
+        List<String> ids = using.stream().map(Row::key).toList();
+        return new Result(pn, kind, original, out.size() > top ? out.subList(0, top) : out, considered, notOffered, ids, m);
+    }
+
+    private static Optional<Candidate> evaluate(Row orig, Row cand, List<Param> params, List<Row> using,
+                                                List<StageCheck.StageResult> baseline, String stageFile, Bom bom,
+                                                Function<String, Optional<Row>> drivers,
+                                                Function<String, Optional<Row>> switches, Margins m) {
+        Schema schema = Schema.of(orig.kind());
+        List<Difference> diffs = new ArrayList<>();
+        List<String> reasons = new ArrayList<>();
+        int worse = 0;
+        int reverify = 0;
+        for (Param p : params) {
+            Column col = schema.column(p.column()).orElseThrow();
+            Object a = orig.values().get(p.column());
+            Object b = cand.values().get(p.column());
+            if (a == null) {
+                continue;
+            }
+            String unit = col.unitSymbol();
+            String as = show(a);
+            String bs = b == null ? "unknown" : show(b);
+            String assessment = assess(p, a, b);
+            if (p.essential() && assessment.equals("worse")) {
+                return Optional.empty();
+            }
+            switch (assessment) {
+                case "worse" -> worse++;
+                case "re-verify" -> reverify++;
+                default -> {
+                }
+            }
+            diffs.add(new Difference(p.column(), p.label(), as, bs, unit, assessment));
+        }
+        boolean samePinout = orig.text("pinout") != null && cand.text("pinout") != null
+                && orig.text("pinout").equalsIgnoreCase(cand.text("pinout"));
+        diffs.add(0, new Difference("pinout", "pinout", String.valueOf(orig.text("pinout")),
+                String.valueOf(cand.text("pinout")), "", samePinout ? "equal" : "re-verify"));
+        // Re-check every stage the original sits in, with the candidate in its place.
+        List<StageNote> notes = new ArrayList<>();
+        boolean stageFail = false;
+        boolean stageWorse = false;
+        double stageScore = 1;
+        if (!using.isEmpty()) {
+            String pn = orig.key();
+            Function<String, Optional<Row>> d = orig.kind() == Kind.DRIVER
+                    ? x -> x.equalsIgnoreCase(pn) ? Optional.of(cand) : drivers.apply(x) : drivers;
+            Function<String, Optional<Row>> s = orig.kind() == Kind.SWITCH
+                    ? x -> x.equalsIgnoreCase(pn) ? Optional.of(cand) : switches.apply(x) : switches;
+            StageCheck.Report rep = StageCheck.run(stageFile, using, bom, d, s, m);
+            double sum = 0;
+            for (int i = 0; i < rep.results().size(); i++) {
+                StageCheck.StageResult now = rep.results().get(i);
+                StageCheck.StageResult was = baseline.get(i);
+                sum += now.score();
+                for (Check c : now.checks()) {
+                    Verdict before = was.checks().stream().filter(x -> x.rule() == c.rule()).map(Check::verdict)
+                            .findFirst().orElse(Verdict.UNKNOWN);
+                    boolean got = c.verdict().ordinal() > before.ordinal() && c.rule() != Rule.LIFECYCLE;
+                    if (c.verdict() == Verdict.FAIL && before != Verdict.FAIL) {
+                        stageFail = true; // a failure the original did not have
+                    }
+                    stageWorse |= got;
+                    if (c.verdict() != Verdict.PASS || got) {
+                        notes.add(new StageNote(now.stage(), c.rule().id(), c.verdict(), before, c.message()));
+                    }
+                }
+            }
+            stageScore = sum / rep.results().size();
+        }
+        boolean obsolete = "obsolete".equals(cand.text("lifecycle"));
+        Grade grade;
+        if (samePinout && worse == 0 && reverify == 0 && !stageFail && !stageWorse && !obsolete) {
+            grade = Grade.DROP_IN;
+        } else if (samePinout) {
+            grade = Grade.PIN_COMPATIBLE;
+            if (worse > 0) {
+                reasons.add(worse + " rating" + (worse == 1 ? " is" : "s are") + " worse than the original's");
+            }
+            if (reverify > 0) {
+                reasons.add(reverify + " parameter" + (reverify == 1 ? "" : "s") + " outside the re-verify window");
+            }
+            if (stageFail) {
+                reasons.add("a stage fails with it in place");
+            } else if (stageWorse) {
+                reasons.add("a stage check gets a worse verdict with it in place");
+            }
+            if (obsolete) {
+                reasons.add("it is obsolete");
+            }
+        } else {
+            // Functional means electrically fit: no worse rating and no failing pairing.
+            if (stageFail || worse > 0 || obsolete) {
+                return Optional.empty();
+            }
+            grade = Grade.FUNCTIONAL;
+            reasons.add("other pinout (" + cand.text("pinout") + "): new footprint or layout");
+        }
+        long stock = Double.isNaN(cand.number("stock")) ? -1 : (long) cand.number("stock");
+        String life = cand.text("lifecycle") == null ? "unknown" : cand.text("lifecycle");
+        double score = Score.availability(life, stock) * Math.max(0.2, 1 - 0.05 * reverify - 0.1 * worse)
+                * Math.max(0, Math.min(1, stageScore));
+        return Optional.of(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life, stock,
+                cand.number("unit_price"), grade, Math.max(0, Math.min(1, score)), diffs, notes, reasons));
+    }
+
+    /** equal / better / worse / within-window / re-verify for one parameter (original known). */
+    static String assess(Param p, Object a, Object b) {
+        if (b == null) {
+            return "re-verify";
+        }
+        switch (p.sense()) {
+            case SAME -> {
+                return a.toString().equalsIgnoreCase(b.toString()) ? "equal" : "worse";
+            }
+            case YES -> {
+                if (a.equals(b)) {
+                    return "equal";
+                }
+                return "yes".equals(b) ? "better" : "worse";
+            }
+            default -> {
+            }
+        }
+        double x = ((Number) a).doubleValue();
+        double y = ((Number) b).doubleValue();
+        if (x == y) {
+            return "equal";
+        }
+        return switch (p.sense()) {
+            case HIGHER -> y > x ? "better" : "worse";
+            case LOWER -> y < x ? "better" : "worse";
+            case WINDOW_REL -> Math.abs(y - x) <= p.window() * Math.abs(x) ? "within-window" : "re-verify";
+            case WINDOW_ABS -> Math.abs(y - x) <= p.window() ? "within-window" : "re-verify";
+            case SAME, YES -> throw new IllegalStateException();
+        };
+    }
+
+    private static String show(Object v) {
+        return v instanceof Double d ? Numbers.format(d) : v.toString();
+    }
+
+    /** The parameter table for documentation: column, sense, window. */
+    public static List<Map.Entry<String, String>> parameterTable(Kind kind) {
+        List<Map.Entry<String, String>> out = new ArrayList<>();
+        for (Param p : kind == Kind.SWITCH ? SWITCH : DRIVER) {
+            String how = switch (p.sense()) {
+                case SAME -> "must be equal";
+                case HIGHER -> p.essential() ? "must be equal or higher" : "higher is better";
+                case LOWER -> p.essential() ? "must be equal or lower" : "lower is better";
+                case YES -> "yes is better";
+                case WINDOW_REL -> "re-verify outside ±" + Eng.pct(p.window());
+                case WINDOW_ABS -> "re-verify outside ±" + Eng.num(p.window()) + " V";
+            };
+            out.add(Map.entry(p.column(), how));
+        }
+        return out;
+    }
+}

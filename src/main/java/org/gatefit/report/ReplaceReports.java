@@ -1,0 +1,162 @@
+package org.gatefit.report;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import org.gatefit.match.Eng;
+import org.gatefit.match.Replacement;
+import org.gatefit.match.Verdict;
+
+/** Renders {@code replace} results. */
+public final class ReplaceReports {
+    private static final int WIDTH = 100;
+
+    private ReplaceReports() {
+    }
+
+    public static void render(Replacement.Result r, Format format, Writer out) throws IOException {
+        switch (format) {
+            case JSON -> json(r, out);
+            case CSV -> csv(r, out);
+            case TEXT -> text(r, out, false);
+            case MARKDOWN -> text(r, out, true);
+        }
+    }
+
+    private static String head(Replacement.Result r) {
+        String life = r.original().text("lifecycle");
+        double stock = r.original().number("stock");
+        return "Substitutes for " + r.kind() + " " + r.part() + " (" + r.original().text("pinout") + ", " + life
+                + (Double.isNaN(stock) ? "" : ", stock " + (long) stock) + "): " + r.considered() + " compared, "
+                + r.notOffered() + " not offered, " + r.candidates().size() + " listed";
+    }
+
+    private static void text(Replacement.Result r, Writer out, boolean md) throws IOException {
+        out.write(md ? "## " + Markdown.escape(head(r)) + "\n\n" : Wrap.wrap(head(r), WIDTH, 2) + "\n");
+        String stages = r.stagesUsing().isEmpty() ? "no stage sheet given: pairings not re-checked (use --stages)"
+                : "re-checked in stages " + String.join(", ", r.stagesUsing());
+        out.write(md ? "- " + Markdown.escape(stages) + "\n\n" : stages + "\n\n");
+        if (r.candidates().isEmpty()) {
+            out.write("No substitute in the catalog meets the essential ratings.\n");
+        } else {
+            TextTable t = new TextTable(List.of("#", "part", "grade", "score", "maker", "pinout", "lifecycle", "stock",
+                    "price", "worse/re-verify"), true, false, false, true, false, false, false, true, true, false);
+            int i = 1;
+            for (Replacement.Candidate c : r.candidates()) {
+                t.add(List.of(Integer.toString(i++), c.partNumber(), c.grade().id(), Eng.num(c.score()),
+                        c.maker() == null ? "" : c.maker(), String.valueOf(c.pinout()), c.lifecycle(),
+                        c.stock() < 0 ? "" : Long.toString(c.stock()), Double.isNaN(c.price()) ? "" : Eng.num(c.price()),
+                        count(c, "worse") + "/" + count(c, "re-verify")));
+            }
+            out.write(md ? t.markdown() : t.render(WIDTH));
+            out.write(md ? "\n### Differences\n" : "\nDifferences (equal parameters not shown):\n");
+            i = 1;
+            for (Replacement.Candidate c : r.candidates()) {
+                List<String> lines = new ArrayList<>();
+                for (Replacement.Difference d : c.differences()) {
+                    if (!d.assessment().equals("equal")) {
+                        lines.add(d.assessment() + ": " + d.label() + " " + d.original() + " → " + d.candidate()
+                                + (d.unit().isEmpty() ? "" : " " + d.unit()));
+                    }
+                }
+                for (Replacement.StageNote n : c.checks()) {
+                    lines.add("stage " + n.stage() + " " + n.rule() + " " + n.verdict().id()
+                            + (n.verdict() != n.was() ? " (was " + n.was().id() + ")" : "") + ": " + n.message());
+                }
+                for (String reason : c.reasons()) {
+                    lines.add("why " + c.grade().id() + ": " + reason);
+                }
+                out.write(md ? "\n**" + i + ". " + Markdown.escape(c.partNumber()) + "** (" + c.grade().id() + ")\n\n"
+                        : "\n" + i + ". " + c.partNumber() + " (" + c.grade().id() + ")\n");
+                if (lines.isEmpty()) {
+                    lines.add("every compared parameter is equal");
+                }
+                for (String l : lines) {
+                    out.write(md ? "- " + Markdown.escape(l) + "\n" : "   " + Wrap.wrap(l, WIDTH, 7, 3) + "\n");
+                }
+                i++;
+            }
+        }
+        out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
+    }
+
+    private static int count(Replacement.Candidate c, String assessment) {
+        return (int) c.differences().stream().filter(d -> d.assessment().equals(assessment)).count();
+    }
+
+    private static void json(Replacement.Result r, Writer out) throws IOException {
+        try (JsonGenerator g = PartsReport.generator(out)) {
+            g.writeStartObject();
+            g.writeStringField("part", r.part());
+            g.writeStringField("kind", r.kind().id());
+            g.writeNumberField("considered", r.considered());
+            g.writeNumberField("not_offered", r.notOffered());
+            g.writeArrayFieldStart("stages");
+            for (String s : r.stagesUsing()) {
+                g.writeString(s);
+            }
+            g.writeEndArray();
+            MatchJson.margins(g, r.margins());
+            g.writeArrayFieldStart("candidates");
+            for (Replacement.Candidate c : r.candidates()) {
+                g.writeStartObject();
+                g.writeStringField("part_number", c.partNumber());
+                g.writeStringField("grade", c.grade().id());
+                g.writeNumberField("score", MatchJson.round(c.score()));
+                g.writeStringField("maker", c.maker());
+                g.writeStringField("pinout", c.pinout());
+                g.writeStringField("lifecycle", c.lifecycle());
+                if (c.stock() >= 0) {
+                    g.writeNumberField("stock", c.stock());
+                }
+                MatchJson.number(g, "unit_price", c.price());
+                g.writeArrayFieldStart("differences");
+                for (Replacement.Difference d : c.differences()) {
+                    g.writeStartObject();
+                    g.writeStringField("parameter", d.parameter());
+                    g.writeStringField("original", d.original());
+                    g.writeStringField("candidate", d.candidate());
+                    g.writeStringField("unit", d.unit());
+                    g.writeStringField("assessment", d.assessment());
+                    g.writeEndObject();
+                }
+                g.writeEndArray();
+                g.writeArrayFieldStart("checks");
+                for (Replacement.StageNote n : c.checks()) {
+                    g.writeStartObject();
+                    g.writeStringField("stage", n.stage());
+                    g.writeStringField("rule", n.rule());
+                    g.writeStringField("verdict", n.verdict().id());
+                    g.writeStringField("was", n.was().id());
+                    g.writeStringField("message", n.message());
+                    g.writeEndObject();
+                }
+                g.writeEndArray();
+                g.writeArrayFieldStart("reasons");
+                for (String s : c.reasons()) {
+                    g.writeString(s);
+                }
+                g.writeEndArray();
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+            g.writeStringField("caution", Caution.TEXT);
+            g.writeEndObject();
+        }
+        out.write('\n');
+    }
+
+    private static void csv(Replacement.Result r, Writer out) throws IOException {
+        out.write("rank,part_number,grade,score,pinout,lifecycle,stock,unit_price,worse,re_verify,stage_failures\n");
+        int i = 1;
+        for (Replacement.Candidate c : r.candidates()) {
+            long fails = c.checks().stream().filter(n -> n.verdict() == Verdict.FAIL).count();
+            out.write(Csv.line(Integer.toString(i++), c.partNumber(), c.grade().id(), Double.toString(MatchJson.round(c.score())),
+                    String.valueOf(c.pinout()), c.lifecycle(), c.stock() < 0 ? "" : Long.toString(c.stock()),
+                    Double.isNaN(c.price()) ? "" : Double.toString(c.price()), Integer.toString(count(c, "worse")),
+                    Integer.toString(count(c, "re-verify")), Long.toString(fails)));
+        }
+    }
+}
