@@ -73,6 +73,9 @@ final class DemoCommand implements Callable<Integer> {
             worst = Math.max(worst, step("9. Check the whole design: every stage, resolved through the BOM"
                     + " (it has instructive mistakes, so this step reports failures)", catalog, "check", st, "--bom",
                     ex.resolve("bom.csv").toString()));
+            worst = Math.max(worst, step("10. CVL-1025TL, the motor controller's MOSFET, is out of stock: rank substitutes,"
+                    + " re-checked in every stage it sits in", catalog, "replace", "CVL-1025TL", "--stages", st, "--bom",
+                    ex.resolve("bom.csv").toString(), "--top", "4"));
             ctx.out.println("That was the demo: the failures in step 9 are the scenario's deliberate mistakes,"
                     + " described in examples/README.md.");
             return worst <= ExitCode.FAILED ? ExitCode.OK : worst;

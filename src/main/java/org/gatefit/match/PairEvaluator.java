@@ -291,7 +291,7 @@ public final class PairEvaluator {
     static Check logicLevel(Calc c, Margins m) {
         DriverPart d = c.d;
         OperatingPoint op = c.op;
-        String from = op.logic() == null ? "the controller" : "a " + op.logic().id() + " controller";
+        String from = op.logic() == null ? "the controller" : "the " + op.logic().id() + " controller";
         if (Double.isNaN(d.vIh()) || Double.isNaN(d.vIl())) {
             return unknown(Rule.LOGIC_LEVEL, "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");

@@ -386,6 +386,27 @@ public final class Replacement {
         return v instanceof Double d ? Numbers.format(d) : v.toString();
     }
 
+    /** The parameter tables of both kinds as Markdown, for the README (a test keeps the two in step). */
+    public static String parameterMarkdown() {
+        StringBuilder sb = new StringBuilder();
+        for (Kind k : List.of(Kind.SWITCH, Kind.DRIVER)) {
+            sb.append("| ").append(k.id()).append(" parameter | class | rule |\n| --- | --- | --- |\n");
+            List<Param> ps = k == Kind.SWITCH ? SWITCH : DRIVER;
+            List<Map.Entry<String, String>> how = parameterTable(k);
+            for (int i = 0; i < ps.size(); i++) {
+                Param p = ps.get(i);
+                String cls = p.essential() ? "essential" : switch (p.sense()) {
+                    case WINDOW_REL, WINDOW_ABS -> "window";
+                    default -> "rating";
+                };
+                sb.append("| `").append(p.column()).append("` | ").append(cls).append(" | ").append(how.get(i).getValue())
+                        .append(" |\n");
+            }
+            sb.append('\n');
+        }
+        return sb.toString();
+    }
+
     /** The parameter table for documentation: column, sense, window. */
     public static List<Map.Entry<String, String>> parameterTable(Kind kind) {
         List<Map.Entry<String, String>> out = new ArrayList<>();
