@@ -17,7 +17,7 @@ abstract class CatalogCommand {
     /** --catalog, else $GATEFIT_CATALOG, else the per-user data directory. */
     Path catalogDir() {
         if (top != null && top.catalog != null) {
-            return top.catalog;
+            return ctx.path(top.catalog);
         }
         String env = ctx.env.get("GATEFIT_CATALOG");
         if (env != null && !env.isBlank()) {

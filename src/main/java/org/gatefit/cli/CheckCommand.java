@@ -72,11 +72,11 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             CheckReports.render(report, output.format, w);
         }
         if (junit != null) {
-            Path parent = junit.toAbsolutePath().getParent();
+            Path parent = ctx.path(junit).toAbsolutePath().getParent();
             if (parent != null) {
                 Files.createDirectories(parent);
             }
-            try (Writer w = Files.newBufferedWriter(junit, StandardCharsets.UTF_8)) {
+            try (Writer w = Files.newBufferedWriter(ctx.path(junit), StandardCharsets.UTF_8)) {
                 CheckReports.junit(report, w);
             }
         }
@@ -85,16 +85,16 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
 
     /** Reads the stage sheet and BOM and checks every stage against the catalog. */
     StageCheck.Report run(Path stagesFile, Path bomFile, Margins m) throws IOException, CatalogDataException {
-        if (!Files.isRegularFile(stagesFile)) {
+        if (!Files.isRegularFile(ctx.path(stagesFile))) {
             throw new NoSuchFileException(stagesFile.toString());
         }
-        List<Row> rows = readStages(stagesFile);
+        List<Row> rows = readStages(ctx.path(stagesFile), stagesFile.toString());
         Bom b = null;
         if (bomFile != null) {
-            if (!Files.isRegularFile(bomFile)) {
+            if (!Files.isRegularFile(ctx.path(bomFile))) {
                 throw new NoSuchFileException(bomFile.toString());
             }
-            b = Bom.read(bomFile, bomFile.toString());
+            b = Bom.read(ctx.path(bomFile), bomFile.toString());
         }
         try (Catalog c = Catalog.open(catalogDir())) {
             if (c.isEmpty()) {
@@ -106,9 +106,12 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     }
 
     /** The stage sheet's rows; any problem is bad input (exit 3). */
-    static List<Row> readStages(Path file) throws IOException, CatalogDataException {
+    static List<Row> readStages(Path file, String name) throws IOException, CatalogDataException {
+        if (!Files.isRegularFile(file)) {
+            throw new NoSuchFileException(name);
+        }
         List<Row> rows = new ArrayList<>();
-        SheetReader.Summary s = SheetReader.read(file, file.toString(), Kind.STAGE, new SheetReader.Sink() {
+        SheetReader.Summary s = SheetReader.read(file, name, Kind.STAGE, new SheetReader.Sink() {
             @Override
             public void accept(Row row) {
                 rows.add(row);

@@ -1,6 +1,7 @@
 package org.gatefit.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.nio.file.NoSuchFileException;
 import java.time.Clock;
 import java.util.Map;
@@ -16,7 +17,12 @@ public final class Cli {
 
     /** A ready command line writing results to {@code out} and messages to {@code err}. */
     public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
-        Context ctx = new Context(out, err, env, clock);
+        return create(out, err, env, clock, null);
+    }
+
+    /** As {@link #create(PrintWriter, PrintWriter, Map, Clock)}, with relative paths resolved against {@code workDir}. */
+    static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, Path workDir) {
+        Context ctx = new Context(out, err, env, clock, workDir);
         GatefitCommand top = new GatefitCommand();
         CommandLine cl = new CommandLine(top);
         cl.addSubcommand("import", new ImportCommand(ctx));

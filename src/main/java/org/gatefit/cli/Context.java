@@ -15,12 +15,20 @@ final class Context {
     final PrintWriter err;
     final Map<String, String> env;
     final Clock clock;
+    /** Folder that relative paths are resolved against; null for the process's working directory. */
+    final Path workDir;
 
-    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
+    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, Path workDir) {
         this.out = out;
         this.err = err;
         this.env = Map.copyOf(env);
         this.clock = clock;
+        this.workDir = workDir;
+    }
+
+    /** A path as typed, resolved against {@link #workDir} when that is set and the path is relative. */
+    Path path(Path p) {
+        return p == null || workDir == null || p.isAbsolute() ? p : workDir.resolve(p);
     }
 
     /** The per-user data directory's catalog: XDG_DATA_HOME, ~/.local/share, or the platform's equivalent. */

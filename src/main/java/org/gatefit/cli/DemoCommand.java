@@ -41,11 +41,13 @@ final class DemoCommand implements Callable<Integer> {
                 }
             }
             Path catalog = tmp.resolve("catalog");
-            String sw = ex.resolve("switches.csv").toString();
-            String dr = ex.resolve("drivers.csv").toString();
-            String st = ex.resolve("stages.csv").toString();
+            String sw = "examples/switches.csv";
+            String dr = "examples/drivers.csv";
+            String st = "examples/stages.csv";
+            String bom = "examples/bom.csv";
             ctx.out.println("gatefit demo: an invented scenario (invented company, makers and parts).");
-            ctx.out.println("Example files: " + ex + "   temporary catalog: " + catalog);
+            ctx.out.println("Working in a temporary folder " + tmp + " (removed afterwards): the example files are in"
+                    + " examples/, the catalog in catalog/.");
             ctx.out.println();
             int worst = 0;
             worst = Math.max(worst, step("1. Import the switch and driver catalogs (one commit; every row checked)",
@@ -72,10 +74,10 @@ final class DemoCommand implements Callable<Integer> {
                     "--logic", "lvcmos-3v3"));
             worst = Math.max(worst, step("9. Check the whole design: every stage, resolved through the BOM"
                     + " (it has instructive mistakes, so this step reports failures)", catalog, "check", st, "--bom",
-                    ex.resolve("bom.csv").toString()));
+                    bom));
             worst = Math.max(worst, step("10. CVL-1025TL, the motor controller's MOSFET, is out of stock: rank substitutes,"
                     + " re-checked in every stage it sits in", catalog, "replace", "CVL-1025TL", "--stages", st, "--bom",
-                    ex.resolve("bom.csv").toString(), "--top", "4"));
+                    bom, "--top", "4"));
             ctx.out.println("That was the demo: the failures in step 9 are the scenario's deliberate mistakes,"
                     + " described in examples/README.md.");
             return worst <= ExitCode.FAILED ? ExitCode.OK : worst;
@@ -84,6 +86,7 @@ final class DemoCommand implements Callable<Integer> {
         }
     }
 
+    /** Runs one command line as a user would type it from the temporary folder (relative paths resolve there). */
     private int step(String title, Path catalog, String... args) {
         ctx.out.println("== " + title);
         List<String> shown = new ArrayList<>();
@@ -92,9 +95,9 @@ final class DemoCommand implements Callable<Integer> {
         }
         ctx.out.println("$ gatefit " + String.join(" ", shown));
         ctx.out.flush();
-        List<String> full = new ArrayList<>(List.of("--catalog", catalog.toString()));
+        List<String> full = new ArrayList<>(List.of("--catalog", catalog.getFileName().toString()));
         full.addAll(List.of(args));
-        CommandLine cl = Cli.create(ctx.out, ctx.err, ctx.env, ctx.clock);
+        CommandLine cl = Cli.create(ctx.out, ctx.err, ctx.env, ctx.clock, catalog.getParent());
         int code = cl.execute(full.toArray(String[]::new));
         ctx.out.println();
         ctx.out.flush();

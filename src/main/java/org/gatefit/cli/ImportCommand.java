@@ -37,11 +37,13 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         Path dir = catalogDir();
         List<String> names = new ArrayList<>();
+        List<Path> paths = new ArrayList<>();
         for (Path f : files) {
             names.add(f.toString());
+            paths.add(ctx.path(f));
         }
-        Importer.Result r = new Importer(dir, ctx.clock).run(files, names,
-                new Importer.Options(kind, replace, rejects), n -> { });
+        Importer.Result r = new Importer(dir, ctx.clock).run(paths, names,
+                new Importer.Options(kind, replace, ctx.path(rejects)), n -> { });
         for (SheetReader.Summary s : r.files()) {
             if (!s.unknownColumns().isEmpty()) {
                 ctx.err.println("note: " + s.file() + ": columns not in the " + s.kind() + " schema, kept as extra"

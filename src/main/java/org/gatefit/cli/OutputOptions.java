@@ -25,7 +25,8 @@ final class OutputOptions {
     }
 
     /** Standard output when {@code output} is null, else the file (parent folders created). */
-    static Writer open(Context ctx, Path output) throws IOException {
+    static Writer open(Context ctx, Path given) throws IOException {
+        Path output = ctx.path(given);
         if (output == null) {
             return new FilterWriter(ctx.out) {
                 @Override

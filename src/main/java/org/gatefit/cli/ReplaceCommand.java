@@ -83,12 +83,12 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         List<Row> stageRows = List.of();
         Bom b = null;
         if (stages != null) {
-            stageRows = CheckCommand.readStages(stages);
+            stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString());
             if (bom != null) {
-                if (!Files.isRegularFile(bom)) {
+                if (!Files.isRegularFile(ctx.path(bom))) {
                     throw new NoSuchFileException(bom.toString());
                 }
-                b = Bom.read(bom, bom.toString());
+                b = Bom.read(ctx.path(bom), bom.toString());
             }
         }
         Replacement.Result r;

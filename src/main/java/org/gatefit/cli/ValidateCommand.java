@@ -46,10 +46,10 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
         }
         List<SheetReader.Summary> results = new ArrayList<>();
         for (Path f : files) {
-            if (!Files.isRegularFile(f)) {
+            if (!Files.isRegularFile(ctx.path(f))) {
                 throw new NoSuchFileException(f.toString());
             }
-            results.add(SheetReader.read(f, f.toString(), k, new SheetReader.Sink() {
+            results.add(SheetReader.read(ctx.path(f), f.toString(), k, new SheetReader.Sink() {
                 @Override
                 public void accept(Row row) {
                 }

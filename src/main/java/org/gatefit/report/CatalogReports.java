@@ -151,7 +151,7 @@ public final class CatalogReports {
                     t.add(List.of(r.time().toString().replace('T', ' ').replaceAll("\\.\\d+Z$", "Z"), r.file(), r.kind(),
                             Long.toString(r.rows()), r.mode(), r.sha256().substring(0, Math.min(16, r.sha256().length()))));
                 }
-                out.write(md ? t.markdown() : t.render(100));
+                out.write(md ? t.markdown() : t.render(Integer.MAX_VALUE));
             }
         }
     }
