@@ -31,6 +31,9 @@ public final class PairEvaluator {
 
     /** All checks and figures of a pair. */
     public static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        if (!s.nChannel()) {
+            return pChannel(d, s, op, m);
+        }
         Calc c = new Calc(d, s, op);
         List<Check> checks = new ArrayList<>(11);
         checks.add(guard(Rule.DRIVE_CURRENT, () -> driveCurrent(c, m)));
@@ -50,6 +53,28 @@ public final class PairEvaluator {
         }
         v = v.forPair();
         return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks, c.figures(), op, m,
+                Double.NaN);
+    }
+
+    /**
+     * The rules model an n-type gate (on level positive against the source). A p-channel switch's
+     * gate drive is the mirror image and is not modelled: every electrical check says so.
+     */
+    private static PairResult pChannel(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        List<Check> checks = new ArrayList<>();
+        for (Rule r : Rule.values()) {
+            if (r != Rule.LIFECYCLE && r != Rule.CATALOG) {
+                checks.add(unknown(r, s.partNumber() + " is a p-channel switch; gatefit's rules model n-channel gate"
+                        + " drive only — check this pair by hand against both datasheets"));
+            }
+        }
+        checks.add(lifecycle(d, s));
+        Verdict v = Verdict.PASS;
+        for (Check ch : checks) {
+            v = v.and(ch.verdict());
+        }
+        v = v.forPair();
+        return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks, List.of(), op, m,
                 Double.NaN);
     }
 
