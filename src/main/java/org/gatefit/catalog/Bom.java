@@ -4,6 +4,7 @@ import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.UncheckedIOException;
+import java.math.BigInteger;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -95,18 +96,23 @@ public final class Bom {
                     throw new BadValueException("range '" + p + "' mixes prefixes " + prefix + " and " + m.group(3)
                             + " (expected e.g. Q3-Q6)");
                 }
-                long a = Long.parseLong(m.group(2));
-                long b = Long.parseLong(m.group(4));
-                if (b < a) {
+                // BigInteger: the digits may be longer than a long holds ("R1-R99999999999999999999")
+                BigInteger a = new BigInteger(m.group(2));
+                BigInteger b = new BigInteger(m.group(4));
+                if (b.compareTo(a) < 0) {
                     throw new BadValueException("range '" + p + "' runs backwards (expected the lower number first)");
                 }
-                if (b - a + 1 > RANGE_LIMIT) {
-                    throw new BadValueException("range '" + p + "' expands to " + (b - a + 1) + " designators (at most "
+                BigInteger count = b.subtract(a).add(BigInteger.ONE);
+                if (count.compareTo(BigInteger.valueOf(RANGE_LIMIT)) > 0) {
+                    throw new BadValueException("range '" + p + "' expands to " + count + " designators (at most "
                             + RANGE_LIMIT + ")");
                 }
                 int width = m.group(2).length() > 1 && m.group(2).startsWith("0") ? m.group(2).length() : 0;
-                for (long i = a; i <= b; i++) {
-                    String num = width > 0 ? String.format(Locale.ROOT, "%0" + width + "d", i) : Long.toString(i);
+                for (BigInteger i = a; i.compareTo(b) <= 0; i = i.add(BigInteger.ONE)) {
+                    String num = i.toString();
+                    if (num.length() < width) {
+                        num = "0".repeat(width - num.length()) + num;
+                    }
                     out.add((prefix + num).toUpperCase(Locale.ROOT));
                 }
             } else if (SINGLE.matcher(p).matches()) {

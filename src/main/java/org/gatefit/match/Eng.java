@@ -1,5 +1,7 @@
 package org.gatefit.match;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.Locale;
 
 /** Engineering notation for messages: 3.9 A, 50 ns, 94.9 nF, 11.3 mW (three significant digits). */
@@ -46,9 +48,19 @@ public final class Eng {
         if (a < 0.01) {
             return String.format(Locale.ROOT, "%.3g", v);
         }
-        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        // Half-up on the decimal digits of Double.toString, which is what Formatter's %.Nf does,
+        // without building a format string and two regular expressions per call (the hot spot of
+        // check: every message holds several numbers).
+        String s = new BigDecimal(Double.toString(v)).setScale(digits, RoundingMode.HALF_UP).toPlainString();
+        if (s.indexOf('.') >= 0) {
+            int end = s.length();
+            while (s.charAt(end - 1) == '0') {
+                end--;
+            }
+            if (s.charAt(end - 1) == '.') {
+                end--;
+            }
+            s = s.substring(0, end);
         }
         return s.equals("-0") ? "0" : s;
     }

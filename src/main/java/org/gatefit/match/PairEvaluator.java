@@ -825,8 +825,13 @@ public final class PairEvaluator {
             return f;
         }
 
+        /**
+         * Adds a figure when it is a number: NaN (unknown) and ±∞ (unbounded, e.g. the allowed dv/dt
+         * when even a step cannot lift the gate to V_th,min) are left out, so every figure's value
+         * is a finite number (JSON has no infinity).
+         */
         private static void add(List<Figure> f, String name, double v, String unit, String label, boolean est) {
-            if (!Double.isNaN(v)) {
+            if (Double.isFinite(v)) {
                 f.add(new Figure(name, v, unit, label, est));
             }
         }
