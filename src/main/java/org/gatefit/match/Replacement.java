@@ -258,8 +258,8 @@ public final class Replacement {
         int reverify = 0;
         for (Param p : params) {
             Column col = schema.column(p.column()).orElseThrow();
-            Object a = orig.values().get(p.column());
-            Object b = cand.values().get(p.column());
+            Object a = value(orig, p);
+            Object b = value(cand, p);
             if (a == null) {
                 continue;
             }
@@ -348,6 +348,15 @@ public final class Replacement {
                 * Math.max(0, Math.min(1, stageScore));
         return Optional.of(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life, stock,
                 cand.number("unit_price"), grade, Math.max(0, Math.min(1, score)), diffs, notes, reasons));
+    }
+
+    /**
+     * A row's value of a parameter. An empty {@code v_neg_min_v} means the driver has no negative
+     * rail (DESIGN.md: "empty or 0 = none"), so it compares as 0 V, not as unknown.
+     */
+    private static Object value(Row row, Param p) {
+        Object v = row.values().get(p.column());
+        return v == null && p.column().equals("v_neg_min_v") ? (Object) 0.0 : v;
     }
 
     /** equal / better / worse / within-window / re-verify for one parameter (original known). */
