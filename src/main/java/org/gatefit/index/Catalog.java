@@ -13,6 +13,11 @@ import java.util.Optional;
 import java.util.LinkedHashMap;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.index.LeafReader;
+import org.apache.lucene.index.PostingsEnum;
+import org.apache.lucene.index.Terms;
+import org.apache.lucene.index.TermsEnum;
+import org.apache.lucene.util.Bits;
+import org.apache.lucene.util.BytesRef;
 import org.apache.lucene.index.LeafReaderContext;
 import org.apache.lucene.index.NumericDocValues;
 import org.apache.lucene.index.SortedDocValues;
@@ -113,16 +118,33 @@ public final class Catalog implements AutoCloseable {
         return m;
     }
 
-    /** A part by kind and part number (matched case-insensitively). */
+    /**
+     * A part by kind and part number (matched case-insensitively): a direct term lookup on each
+     * segment, then one stored-fields load.
+     */
     public Optional<Row> get(Kind kind, String partNumber) throws IOException {
-        if (searcher == null) {
+        if (reader == null) {
             return Optional.empty();
         }
-        TopDocs td = searcher.search(new TermQuery(new Term(Fields.ID, Fields.id(kind.id(), partNumber))), 1);
-        if (td.scoreDocs.length == 0) {
-            return Optional.empty();
+        BytesRef id = new BytesRef(Fields.id(kind.id(), partNumber));
+        for (LeafReaderContext leaf : reader.leaves()) {
+            Terms terms = leaf.reader().terms(Fields.ID);
+            if (terms == null) {
+                continue;
+            }
+            TermsEnum te = terms.iterator();
+            if (!te.seekExact(id)) {
+                continue;
+            }
+            PostingsEnum pe = te.postings(null, PostingsEnum.NONE);
+            Bits live = leaf.reader().getLiveDocs();
+            for (int doc = pe.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = pe.nextDoc()) {
+                if (live == null || live.get(doc)) {
+                    return Optional.of(Documents.toRow(leaf.reader().storedFields().document(doc)));
+                }
+            }
         }
-        return Optional.of(Documents.toRow(searcher.storedFields().document(td.scoreDocs[0].doc)));
+        return Optional.empty();
     }
 
     /** Parts with this part number, of any kind. */
