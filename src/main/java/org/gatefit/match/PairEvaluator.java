@@ -662,7 +662,10 @@ public final class PairEvaluator {
             rSnkEstimated = snk.estimated();
             rOnTot = rSrc + (op.rG() + rInt) / n;
             rOffTot = rSnk + (op.rGOff() + rInt) / n;
-            iReq = DriveCurrent.required(qTotal, op.edge());
+            // Q_g is a required column, but a part built elsewhere may lack it: every figure that
+            // needs it stays unknown (NaN) and the rules that use them say unknown.
+            boolean qKnown = !Double.isNaN(qTotal);
+            iReq = qKnown ? DriveCurrent.required(qTotal, op.edge()) : Double.NaN;
             iPkSrc = rOnTot > 0 ? Math.min(d.iSource(), swing / rOnTot) : d.iSource();
             iPkSnk = rOffTot > 0 ? Math.min(d.iSink(), swing / rOffTot) : d.iSink();
             boolean plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
@@ -675,7 +678,7 @@ public final class PairEvaluator {
                     delayOff = SwitchingTimes.delayOff(rOffTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
                 }
             }
-            if (rOnTot > 0 && rOffTot > 0) {
+            if (qKnown && rOnTot > 0 && rOffTot > 0) {
                 pGate = GatePower.total(qTotal, swing, op.fSw());
                 GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
                         rInt / n);
@@ -711,7 +714,7 @@ public final class PairEvaluator {
                 double uv = Double.isNaN(d.uvloOff()) ? d.uvloOn() : d.uvloOff();
                 double full = fullEnhancement(s);
                 bootFloor = Math.max(Double.isNaN(uv) ? 0 : uv, Double.isNaN(full) ? 0 : full);
-                if (!Double.isNaN(uv) || !Double.isNaN(full)) {
+                if (qKnown && (!Double.isNaN(uv) || !Double.isNaN(full))) {
                     double tOn = (Double.isNaN(op.dutyMax()) ? 1 : op.dutyMax()) / op.fSw();
                     bootCharge = Bootstrap.chargePerCycle(qTotal, Double.isNaN(d.iQbs()) ? 0 : d.iQbs(), tOn, 0, 0);
                     bootDroop = op.vDrive() - op.diodeDrop() - bootFloor;
