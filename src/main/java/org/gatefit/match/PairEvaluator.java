@@ -119,6 +119,10 @@ public final class PairEvaluator {
         OperatingPoint op = c.op;
         double on = op.vDrive();
         double swing = op.swing();
+        if (Double.isNaN(s.vGsMax())) {
+            return unknown(Rule.GATE_VOLTAGE, "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
+                    + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
+        }
         List<Comparison> cmp = new ArrayList<>();
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", c.d.vSupplyMin(), "V"));
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", c.d.vSupplyMax(), "V"));
@@ -190,6 +194,10 @@ public final class PairEvaluator {
         SwitchPart s = c.s;
         DriverPart d = c.d;
         double off = c.op.vDriveNeg();
+        if (Double.isNaN(s.vGsMin())) {
+            return unknown(Rule.NEGATIVE_BIAS, "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
+                    + " off level cannot be checked against it — look up the negative gate limit in the datasheet");
+        }
         List<Comparison> cmp = new ArrayList<>();
         double limit = s.vGsMin() * (1 - m.gateHeadroom());
         cmp.add(new Comparison("off level", off, "≥", limit, "V"));
