@@ -438,7 +438,8 @@ public final class PairEvaluator {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "low side: no bootstrap supply needed", List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(Rule.BOOTSTRAP, "a low-side driver has no floating supply to bootstrap", List.of());
+            return fail(Rule.BOOTSTRAP, "a low-side driver has no floating supply to bootstrap — pick a high-side,"
+                    + " half-bridge or isolated driver", List.of());
         }
         if (!d.topology().bootstrapped()) {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "isolated output: it needs its own isolated supply of "
@@ -471,6 +472,14 @@ public final class PairEvaluator {
         if (Double.isNaN(op.dutyMax())) {
             return new Check(Rule.BOOTSTRAP, Verdict.UNKNOWN, sizing + diode + "; duty not given — the bootstrap allows at most "
                     + Eng.pct(c.bootDutyMax) + " (give --duty-max or duty_max)", cmp, Score.UNKNOWN);
+        }
+        if (c.bootBelowFull) {
+            double full = fullEnhancement(c.s);
+            return new Check(Rule.BOOTSTRAP, Verdict.WARN, "the bootstrap gives the high side at most "
+                    + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F), below the " + Eng.of(full, "V")
+                    + " full-enhancement level, so its conduction loss is higher than the low side's; " + sizing
+                    + " against UVLO,off " + Eng.of(c.bootFloor, "V") + diode + " — raise V_drive to ≥ "
+                    + Eng.of(full + op.diodeDrop(), "V") + " or use an isolated supply", cmp, Score.warn(0.5));
         }
         if (Boolean.FALSE.equals(d.bootstrapDiode()) && Double.isNaN(op.bus())) {
             return new Check(Rule.BOOTSTRAP, Verdict.WARN, sizing + ", with an external fast diode rated above the bus"
@@ -629,6 +638,7 @@ public final class PairEvaluator {
         double bootCharge = Double.NaN;
         double bootDroop = Double.NaN;
         double bootFloor = Double.NaN;
+        boolean bootBelowFull;
         double bootCMin = Double.NaN;
         double bootCRec = Double.NaN;
         double bootDutyMax = Double.NaN;
@@ -722,6 +732,12 @@ public final class PairEvaluator {
                 double uv = Double.isNaN(d.uvloOff()) ? d.uvloOn() : d.uvloOff();
                 double full = fullEnhancement(s);
                 bootFloor = Math.max(Double.isNaN(uv) ? 0 : uv, Double.isNaN(full) ? 0 : full);
+                if (!Double.isNaN(uv) && !Double.isNaN(full) && op.vDrive() - op.diodeDrop() <= full) {
+                    // The bootstrap never reaches full enhancement, whatever the capacitor: size it to the
+                    // UVLO as REFERENCES §4 does (ΔV ≤ V_DD − V_F − V_UVLO,off) and let the rule warn.
+                    bootFloor = uv;
+                    bootBelowFull = true;
+                }
                 if (qKnown && (!Double.isNaN(uv) || !Double.isNaN(full))) {
                     double tOn = (Double.isNaN(op.dutyMax()) ? 1 : op.dutyMax()) / op.fSw();
                     bootCharge = Bootstrap.chargePerCycle(qTotal, Double.isNaN(d.iQbs()) ? 0 : d.iQbs(), tOn, 0, 0);
