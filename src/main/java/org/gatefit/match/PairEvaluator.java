@@ -271,8 +271,9 @@ public final class PairEvaluator {
         if (!Double.isNaN(need) && gateAtUvlo < need) {
             return fail(Rule.UVLO, "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
                     + " gate gets only " + Eng.of(gateAtUvlo, "V") + ", below the " + Eng.of(need, "V")
-                    + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO ≥ "
-                    + Eng.of(Double.isNaN(full) ? need : full, "V"), cmp);
+                    + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO falling ≥ "
+                    + Eng.of(need - c.op.vDriveNeg(), "V") + (c.op.vDriveNeg() < 0 ? " (the plateau plus the "
+                    + Eng.of(-c.op.vDriveNeg(), "V") + " negative rail)" : ""), cmp);
         }
         if (supply < d.uvloOn() + m.uvloHeadroom()) {
             return new Check(Rule.UVLO, Verdict.WARN, "the " + Eng.of(supply, "V") + " supply is within "
