@@ -171,7 +171,10 @@ class RulesTest {
                             d.uvloOff = 10.5;
                         }, O0, "11 V", "raise the supply above 12 V"),
                 row(Verdict.FAIL, "UVLO falling 4.5 V < plateau 5 V: a sagging supply leaves the switch half-on (§5)",
-                        S0, d -> d.uvloOff = 4.5, O0, "4.5 V", "5 V", "pick a driver with UVLO ≥ 10 V"),
+                        S0, d -> d.uvloOff = 4.5, O0, "4.5 V", "5 V", "pick a driver with UVLO falling ≥ 5 V"),
+                row(Verdict.FAIL, "+10/−6 V: UVLO falling 6.5 V leaves 6.5 − 6 = 0.5 V on the gate < plateau 5 V;"
+                        + " needs UVLO falling ≥ 5 + 6 = 11 V", S0, d -> d.vNegMin = -10, o -> o.vDriveNeg = -6.0,
+                        "500 mV", "pick a driver with UVLO falling ≥ 11 V"),
                 row(Verdict.UNKNOWN, "uvlo_on_v unknown", S0, d -> {
                     d.uvloOn = Double.NaN;
                     d.uvloOff = Double.NaN;
