@@ -1,5 +1,7 @@
 package org.gatefit.match;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.Locale;
 
 /** Engineering notation for messages: 3.9 A, 50 ns, 94.9 nF, 11.3 mW (three significant digits). */
@@ -46,11 +48,11 @@ public final class Eng {
         if (a < 0.01) {
             return String.format(Locale.ROOT, "%.3g", v);
         }
-        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return s.equals("-0") ? "0" : s;
+        // Same digits as String.format("%.nf") (half-up on the shortest decimal form of v) with
+        // trailing zeros dropped, without a Formatter and two regexes per number: messages are
+        // built for every pair of a shortlist, and this was its hot spot.
+        BigDecimal b = BigDecimal.valueOf(v).setScale(digits, RoundingMode.HALF_UP);
+        return b.signum() == 0 ? "0" : b.stripTrailingZeros().toPlainString();
     }
 
     /** A percentage of a fraction: 0.934 → 93.4 %. */
