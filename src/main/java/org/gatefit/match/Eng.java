@@ -48,21 +48,11 @@ public final class Eng {
         if (a < 0.01) {
             return String.format(Locale.ROOT, "%.3g", v);
         }
-        // Half-up on the decimal digits of Double.toString, which is what Formatter's %.Nf does,
-        // without building a format string and two regular expressions per call (the hot spot of
-        // check: every message holds several numbers).
-        String s = new BigDecimal(Double.toString(v)).setScale(digits, RoundingMode.HALF_UP).toPlainString();
-        if (s.indexOf('.') >= 0) {
-            int end = s.length();
-            while (s.charAt(end - 1) == '0') {
-                end--;
-            }
-            if (s.charAt(end - 1) == '.') {
-                end--;
-            }
-            s = s.substring(0, end);
-        }
-        return s.equals("-0") ? "0" : s;
+        // Same digits as String.format("%.nf") (half-up on the shortest decimal form of v) with
+        // trailing zeros dropped, without a Formatter and two regexes per number: messages are
+        // built for every pair of a shortlist, and this was its hot spot.
+        BigDecimal b = BigDecimal.valueOf(v).setScale(digits, RoundingMode.HALF_UP);
+        return b.signum() == 0 ? "0" : b.stripTrailingZeros().toPlainString();
     }
 
     /** A percentage of a fraction: 0.934 → 93.4 %. */

@@ -144,6 +144,10 @@ public final class PairEvaluator {
         OperatingPoint op = c.op;
         double on = op.vDrive();
         double swing = op.swing();
+        if (Double.isNaN(s.vGsMax())) {
+            return unknown(Rule.GATE_VOLTAGE, "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
+                    + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
+        }
         List<Comparison> cmp = new ArrayList<>();
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", c.d.vSupplyMin(), "V"));
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", c.d.vSupplyMax(), "V"));
@@ -215,6 +219,10 @@ public final class PairEvaluator {
         SwitchPart s = c.s;
         DriverPart d = c.d;
         double off = c.op.vDriveNeg();
+        if (Double.isNaN(s.vGsMin())) {
+            return unknown(Rule.NEGATIVE_BIAS, "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
+                    + " off level cannot be checked against it — look up the negative gate limit in the datasheet");
+        }
         List<Comparison> cmp = new ArrayList<>();
         double limit = s.vGsMin() * (1 - m.gateHeadroom());
         cmp.add(new Comparison("off level", off, "≥", limit, "V"));
@@ -288,8 +296,9 @@ public final class PairEvaluator {
         if (!Double.isNaN(need) && gateAtUvlo < need) {
             return fail(Rule.UVLO, "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
                     + " gate gets only " + Eng.of(gateAtUvlo, "V") + ", below the " + Eng.of(need, "V")
-                    + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO ≥ "
-                    + Eng.of(Double.isNaN(full) ? need : full, "V"), cmp);
+                    + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO falling ≥ "
+                    + Eng.of(need - c.op.vDriveNeg(), "V") + (c.op.vDriveNeg() < 0 ? " (the plateau plus the "
+                    + Eng.of(-c.op.vDriveNeg(), "V") + " negative rail)" : ""), cmp);
         }
         if (supply < d.uvloOn() + m.uvloHeadroom()) {
             return new Check(Rule.UVLO, Verdict.WARN, "the " + Eng.of(supply, "V") + " supply is within "
@@ -455,8 +464,8 @@ public final class PairEvaluator {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "low side: no bootstrap supply needed", List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(Rule.BOOTSTRAP, "no bootstrap is possible: a low-side driver has no floating supply (see high-side)",
-                    List.of());
+            return fail(Rule.BOOTSTRAP, "a low-side driver has no floating supply to bootstrap — pick a high-side,"
+                    + " half-bridge or isolated driver", List.of());
         }
         if (!d.topology().bootstrapped()) {
             return new Check(Rule.BOOTSTRAP, Verdict.PASS, "isolated output: it needs its own isolated supply of "
@@ -491,6 +500,14 @@ public final class PairEvaluator {
         if (Double.isNaN(op.dutyMax())) {
             return new Check(Rule.BOOTSTRAP, Verdict.UNKNOWN, sizing + diode + "; duty not given — the bootstrap allows at most "
                     + Eng.pct(c.bootDutyMax) + " (give --duty-max or duty_max)", cmp, Score.UNKNOWN);
+        }
+        if (c.bootBelowFull) {
+            double full = fullEnhancement(c.s);
+            return new Check(Rule.BOOTSTRAP, Verdict.WARN, "the bootstrap gives the high side at most "
+                    + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F), below the " + Eng.of(full, "V")
+                    + " full-enhancement level, so its conduction loss is higher than the low side's; " + sizing
+                    + " against UVLO,off " + Eng.of(c.bootFloor, "V") + diode + " — raise V_drive to ≥ "
+                    + Eng.of(full + op.diodeDrop(), "V") + " or use an isolated supply", cmp, Score.warn(0.5));
         }
         if (Boolean.FALSE.equals(d.bootstrapDiode()) && Double.isNaN(op.bus())) {
             return new Check(Rule.BOOTSTRAP, Verdict.WARN, sizing + ", with an external fast diode rated above the bus"
@@ -649,6 +666,7 @@ public final class PairEvaluator {
         double bootCharge = Double.NaN;
         double bootDroop = Double.NaN;
         double bootFloor = Double.NaN;
+        boolean bootBelowFull;
         double bootCMin = Double.NaN;
         double bootCRec = Double.NaN;
         double bootDutyMax = Double.NaN;
@@ -703,7 +721,10 @@ public final class PairEvaluator {
             rSnkEstimated = snk.estimated();
             rOnTot = rSrc + (op.rG() + rInt) / n;
             rOffTot = rSnk + (op.rGOff() + rInt) / n;
-            iReq = DriveCurrent.required(qTotal, op.edge());
+            // Q_g is a required column, but a part built elsewhere may lack it: every figure that
+            // needs it stays unknown (NaN) and the rules that use them say unknown.
+            boolean qKnown = !Double.isNaN(qTotal);
+            iReq = qKnown ? DriveCurrent.required(qTotal, op.edge()) : Double.NaN;
             iPkSrc = rOnTot > 0 ? Math.min(d.iSource(), swing / rOnTot) : d.iSource();
             iPkSnk = rOffTot > 0 ? Math.min(d.iSink(), swing / rOffTot) : d.iSink();
             boolean plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
@@ -716,7 +737,7 @@ public final class PairEvaluator {
                     delayOff = SwitchingTimes.delayOff(rOffTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
                 }
             }
-            if (rOnTot > 0 && rOffTot > 0) {
+            if (qKnown && rOnTot > 0 && rOffTot > 0) {
                 pGate = GatePower.total(qTotal, swing, op.fSw());
                 GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
                         rInt / n);
@@ -752,7 +773,13 @@ public final class PairEvaluator {
                 double uv = Double.isNaN(d.uvloOff()) ? d.uvloOn() : d.uvloOff();
                 double full = fullEnhancement(s);
                 bootFloor = Math.max(Double.isNaN(uv) ? 0 : uv, Double.isNaN(full) ? 0 : full);
-                if (!Double.isNaN(uv) || !Double.isNaN(full)) {
+                if (!Double.isNaN(uv) && !Double.isNaN(full) && op.vDrive() - op.diodeDrop() <= full) {
+                    // The bootstrap never reaches full enhancement, whatever the capacitor: size it to the
+                    // UVLO as REFERENCES §4 does (ΔV ≤ V_DD − V_F − V_UVLO,off) and let the rule warn.
+                    bootFloor = uv;
+                    bootBelowFull = true;
+                }
+                if (qKnown && (!Double.isNaN(uv) || !Double.isNaN(full))) {
                     double tOn = (Double.isNaN(op.dutyMax()) ? 1 : op.dutyMax()) / op.fSw();
                     bootCharge = Bootstrap.chargePerCycle(qTotal, Double.isNaN(d.iQbs()) ? 0 : d.iQbs(), tOn, 0, 0);
                     bootDroop = op.vDrive() - op.diodeDrop() - bootFloor;

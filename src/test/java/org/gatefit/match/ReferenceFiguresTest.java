@@ -1,0 +1,141 @@
+package org.gatefit.match;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.function.Consumer;
+import java.util.stream.Stream;
+import org.gatefit.physics.LogicFamily;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * The check values of REFERENCES.md, fed through {@link PairEvaluator} as parts and an operating
+ * point, read back as the pair's named figures (DESIGN.md names). Each row names its section.
+ */
+class ReferenceFiguresTest {
+
+    record Row(String source, Consumer<Parts.Sw> s, Consumer<Parts.Dr> d, Consumer<OperatingPoint.Spec> o,
+               String figure, double expected, double relTol) {
+        @Override
+        public String toString() {
+            return figure + " = " + expected + " (" + source + ")";
+        }
+    }
+
+    /**
+     * REFERENCES §1/§2/§3 resistances: R_src 2 Ω, R_sink 1 Ω, R_g 3 Ω, R_g,int 1.2 Ω, so
+     * R_on = 2 + 3 + 1.2 = 6.2 Ω and R_off = 1 + 3 + 1.2 = 5.2 Ω; Q_gd 6.9 nC, V_pl 3 V, C_iss 3.9 nF.
+     */
+    private static Consumer<Parts.Sw> sec1Switch(double qgVgs) {
+        return s -> {
+            s.qG = 44e-9;
+            s.qGVgs = qgVgs;
+            s.qGs = 10e-9;
+            s.qGd = 6.9e-9;
+            s.vPlateau = 3;
+            s.cIss = 3.9e-9;
+            s.rGInt = 1.2;
+        };
+    }
+
+    private static final Consumer<Parts.Dr> SEC1_DRIVER = d -> {
+        d.rSource = 2;
+        d.rSink = 1;
+    };
+
+    private static Consumer<OperatingPoint.Spec> drive(double v) {
+        return o -> {
+            o.vDrive = v;
+            o.vDriveNeg = 0.0;
+            o.rG = 3.0;
+            o.loop = 20e-9;
+            o.fSw = 100e3;
+        };
+    }
+
+    private static Row row(String source, Consumer<Parts.Sw> s, Consumer<Parts.Dr> d, Consumer<OperatingPoint.Spec> o,
+                           String figure, double expected, double relTol) {
+        return new Row(source, s, d, o, figure, expected, relTol);
+    }
+
+    static Stream<Row> figures() {
+        Consumer<Parts.Sw> s12 = sec1Switch(12);
+        Consumer<Parts.Sw> s10 = sec1Switch(10);
+        // §4: Q_g + I_qbs·t_on + Q_ls with Q_ls 2.5 nC folded into Q_g (it adds the same way):
+        // 46.5 nC at 12 V, I_qbs 100 µA, t_on = 0.95 / 100 kHz = 9.5 µs; ΔV = 12 − 0.7 − 10.8 (UVLO,off) = 0.5 V.
+        Consumer<Parts.Sw> boot = s -> {
+            s.qG = 46.5e-9;
+            s.qGVgs = 12;
+        };
+        Consumer<Parts.Dr> bootDriver = d -> {
+            d.iQbs = 100e-6;
+            d.uvloOn = 11.2;
+            d.uvloOff = 10.8;
+        };
+        Consumer<OperatingPoint.Spec> bootOp = o -> {
+            o.highSide = true;
+            o.vDrive = 12.0;
+            o.fSw = 100e3;
+            o.dutyMax = 0.95;
+            o.diodeDrop = 0.7;
+        };
+        // §7: C_gd 10 pF, 50 V/ns, R_off 1 + 4 + 1 Ω = 6 Ω, C_iss 1 nF, 400 V.
+        Consumer<Parts.Sw> sec7 = s -> {
+            s.cRss = 10e-12;
+            s.cIss = 1e-9;
+        };
+        Consumer<OperatingPoint.Spec> sec7Op = o -> {
+            o.bus = 400.0;
+            o.dvdt = 50e9;
+            o.rGOff = 4.0;
+        };
+        return Stream.of(
+                row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "plateau-time-on", 4.753e-9, 1e-3),
+                row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "plateau-time-off", 11.96e-9, 1e-3),
+                row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "delay-time-on", 6.956e-9, 1e-3),
+                row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "delay-time-off", 28.11e-9, 1e-3),
+                row("REFERENCES §1: Q_g/t = 44 nC / 50 ns", s12, SEC1_DRIVER, drive(12), "gate-current-required",
+                        0.88, 1e-9),
+                row("REFERENCES §1: 12 V / 6.2 Ω below the 4 A rating", s12, SEC1_DRIVER, drive(12),
+                        "gate-current-peak-source", 12 / 6.2, 1e-9),
+                row("REFERENCES §1: 12 V / 5.2 Ω below the 6 A rating", s12, SEC1_DRIVER, drive(12),
+                        "gate-current-peak-sink", 12 / 5.2, 1e-9),
+                row("REFERENCES §3, computed: 2√(20 nH / 3.9 nF)", s12, SEC1_DRIVER, drive(12),
+                        "gate-resistance-critical", 4.53, 2e-3),
+                row("REFERENCES §3, computed: ζ(6.2 Ω)", s12, SEC1_DRIVER, drive(12), "gate-loop-damping", 1.369, 1e-3),
+                row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-drive-power", 44.0e-3, 1e-6),
+                row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "driver-power", 11.33e-3, 1e-3),
+                row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-resistor-power", 23.34e-3, 1e-3),
+                row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-internal-power", 9.33e-3, 1e-3),
+                row("REFERENCES §4, computed", boot, bootDriver, bootOp, "bootstrap-charge", 47.45e-9, 1e-6),
+                row("REFERENCES §4, computed", boot, bootDriver, bootOp, "bootstrap-capacitance-min", 94.9e-9, 1e-3),
+                row("REFERENCES §7, computed", sec7, SEC1_DRIVER, sec7Op, "miller-induced-voltage", 2.21, 2e-3),
+                row("REFERENCES §6 (JEDEC, from memory): LVTTL into 2.0/0.8 V", s -> { },
+                        d -> { }, o -> o.logic = LogicFamily.LVTTL_3V3, "noise-margin-high", 0.4, 1e-9),
+                row("REFERENCES §6 (JEDEC, from memory): LVTTL into 2.0/0.8 V", s -> { }, d -> { },
+                        o -> o.logic = LogicFamily.LVTTL_3V3, "noise-margin-low", 0.4, 1e-9),
+                row("REFERENCES §6 (JESD8-7, from memory): 1.8 V into 0.65/0.35·1.8 V", s -> { }, d -> {
+                    d.vIh = 0.65 * 1.8;
+                    d.vIl = 0.35 * 1.8;
+                }, o -> o.logic = LogicFamily.LVCMOS_1V8, "noise-margin-high", 0.18, 1e-9),
+                row("REFERENCES §6 (JESD8-7, from memory): 1.8 V into 0.65/0.35·1.8 V", s -> { }, d -> {
+                    d.vIh = 0.65 * 1.8;
+                    d.vIl = 0.35 * 1.8;
+                }, o -> o.logic = LogicFamily.LVCMOS_1V8, "noise-margin-low", 0.18, 1e-9));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void figures(Row r) {
+        Parts.Sw s = Parts.sw();
+        Parts.Dr d = Parts.dr();
+        OperatingPoint.Spec o = Parts.op();
+        r.s().accept(s);
+        r.d().accept(d);
+        r.o().accept(o);
+        PairResult pr = Parts.eval(s, d, o);
+        Figure f = pr.figure(r.figure()).orElseThrow(() -> new AssertionError("no figure " + r.figure() + " in "
+                + pr.figures()));
+        assertEquals(r.expected(), f.value(), Math.abs(r.expected()) * r.relTol(), r.toString());
+    }
+}

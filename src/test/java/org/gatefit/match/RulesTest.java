@@ -1,0 +1,592 @@
+package org.gatefit.match;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.stream.Stream;
+import org.gatefit.physics.LogicFamily;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * One table per rule: invented parts with round figures ({@link Parts}), each row changing the
+ * baseline pair just enough for a clear-cut pass, warn, fail or unknown. The comment of a row
+ * (its display name) gives the arithmetic and the source of each engineering value. Every row
+ * asserts the verdict, that the message names the figures that decide it, and for a failure
+ * that the message says what to do.
+ *
+ * <p>Margins are the defaults of {@link Margins#DEFAULT} (all "common practice, no source"):
+ * drive current 1.5×, gate headroom 10 %, UVLO headroom 1 V, logic noise 0.1 V, offset 20 %,
+ * isolation 2×, driver power 70 %, dv/dt 70 % of V_th,min.
+ */
+class RulesTest {
+
+    /** One row: what to change from the baseline, the expected verdict of {@code rule}, and text the message must hold. */
+    record Row(String why, Consumer<Parts.Sw> s, Consumer<Parts.Dr> d, Consumer<OperatingPoint.Spec> o, Verdict expect,
+               List<String> mentions) {
+        @Override
+        public String toString() {
+            return expect.id() + ": " + why;
+        }
+    }
+
+    private static final Consumer<Parts.Sw> S0 = s -> { };
+    private static final Consumer<Parts.Dr> D0 = d -> { };
+    private static final Consumer<OperatingPoint.Spec> O0 = o -> { };
+
+    private static Row row(Verdict v, String why, Consumer<Parts.Sw> s, Consumer<Parts.Dr> d,
+                           Consumer<OperatingPoint.Spec> o, String... mentions) {
+        return new Row(why, s, d, o, v, List.of(mentions));
+    }
+
+    private static void check(Rule rule, Row r) {
+        Parts.Sw s = Parts.sw();
+        Parts.Dr d = Parts.dr();
+        OperatingPoint.Spec o = Parts.op();
+        r.s().accept(s);
+        r.d().accept(d);
+        r.o().accept(o);
+        PairResult pr = Parts.eval(s, d, o);
+        Check c = pr.check(rule).orElseThrow();
+        assertEquals(r.expect(), c.verdict(), () -> rule + ": " + c.message());
+        for (String m : r.mentions()) {
+            assertTrue(c.message().contains(m), () -> rule + " message should name '" + m + "': " + c.message());
+        }
+        if (c.verdict() == Verdict.FAIL) {
+            assertTrue(c.message().contains(" — "), () -> "a failure says what to do after ' — ': " + c.message());
+            assertEquals(0.0, c.score(), "a failing check scores 0");
+            assertEquals(Verdict.FAIL, pr.verdict(), "one failing rule fails the pair");
+        }
+        if (c.verdict() == Verdict.UNKNOWN) {
+            assertNotEquals(Verdict.PASS, pr.verdict(), "an unknown check never lets the pair pass");
+        }
+    }
+
+    // ------------------------------------------------------------------ drive-current
+
+    static Stream<Row> driveCurrent() {
+        return Stream.of(
+                row(Verdict.PASS, "Q_g/t = 50 nC / 50 ns = 1 A (REFERENCES §1), 1.5× margin → 1.5 A needed; peak"
+                        + " V/(R_src+R_g+R_g,int) = 10/(2+2+1) = 2 A (§1), 2× ≥ 1.5×", S0, D0, O0, "needs 1.5 A", "2 A",
+                        "50 ns"),
+                row(Verdict.WARN, "R_g 5 Ω: 10/(2+5+1) = 1.25 A, 1.25× the 1 A average: above 1× but under 1.5×;"
+                        + " R_g ≤ 10/1.5 − 2 − 1 = 3.67 Ω → E24 3.6 Ω", S0, D0, o -> o.rG = 5.0, "1.5 A", "1.25 A",
+                        "lower R_g to 3.6 Ω"),
+                row(Verdict.FAIL, "R_g 10 Ω: 10/(2+10+1) = 0.769 A < 1 A average; rated 4 A would do with R_g ≤ 3.67 Ω →"
+                        + " E24 3.6 Ω", S0, D0, o -> o.rG = 10.0, "needs 1.5 A", "769 mA", "lower R_g to 3.6 Ω"),
+                row(Verdict.FAIL, "rated 0.8 A / 0.8 A < 1 A average: pick ≥ 1.5 A, or slow the edge to"
+                        + " 50 nC·1.5/0.8 A = 93.75 ns (printed to three digits, 93.7 ns)", S0, d -> {
+                            d.iSource = 0.8;
+                            d.iSink = 0.8;
+                        }, o -> o.rG = 0.0, "800 mA", "pick a driver rated ≥ 1.5 A", "relax the edge to 93.7 ns"),
+                row(Verdict.UNKNOWN, "Q_g not known: no current estimate", s -> s.qG = Double.NaN, D0, O0,
+                        "gate charge unknown"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void driveCurrent(Row r) {
+        check(Rule.DRIVE_CURRENT, r);
+    }
+
+    // ------------------------------------------------------------------ gate-voltage
+
+    static Stream<Row> gateVoltage() {
+        return Stream.of(
+                row(Verdict.PASS, "10 V on = the 10 V R_DS(on) is specified at (full enhancement, REFERENCES §5) and"
+                        + " ≤ 20 V − 10 % = 18 V; 10 V swing within the 8–20 V supply", S0, D0, O0, "10 V", "18 V"),
+                row(Verdict.WARN, "19 V on: above 18 V (20 V less 10 % headroom) but not above V_GS,max 20 V", S0, D0,
+                        o -> o.vDrive = 19.0, "19 V", "18 V"),
+                row(Verdict.WARN, "8 V on: above V_th,max 4 V but below the 10 V R_DS(on) is specified at (§5)", S0, D0,
+                        o -> o.vDrive = 8.0, "8 V", "10 V"),
+                row(Verdict.FAIL, "22 V on > V_GS,max 20 V (§5: on level ≤ V_GS,max); driver runs to 30 V", S0,
+                        d -> d.vSupplyMax = 30, o -> o.vDrive = 22.0, "22 V", "20 V", "drive at 18 V or less"),
+                row(Verdict.FAIL, "3.5 V on ≤ V_th,max 4 V (§5: on level above V_th,max at all); driver runs from 3 V", S0,
+                        d -> d.vSupplyMin = 3, o -> o.vDrive = 3.5, "3.5 V", "4 V", "drive at 10 V or more"),
+                row(Verdict.FAIL, "22 V swing above the driver's 20 V supply maximum", s -> s.vGsMax = 30, D0,
+                        o -> o.vDrive = 22.0, "22 V", "20 V", "pick a driver rated ≥ 22 V"),
+                row(Verdict.FAIL, "6 V swing below the driver's 8 V supply minimum", S0, D0, o -> o.vDrive = 6.0, "6 V",
+                        "8 V", "raise the supply"),
+                row(Verdict.UNKNOWN, "neither r_on_vgs_v nor v_gate_on_v: full enhancement cannot be judged", s -> {
+                    s.rOnVgs = Double.NaN;
+                    s.vGateOn = Double.NaN;
+                }, D0, O0, "r_on_vgs_v"),
+                row(Verdict.UNKNOWN, "V_GS,max unknown: the gate limit cannot be checked", s -> s.vGsMax = Double.NaN,
+                        D0, O0, "V_GS,max"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void gateVoltage(Row r) {
+        check(Rule.GATE_VOLTAGE, r);
+    }
+
+    // ------------------------------------------------------------------ negative-bias
+
+    static Stream<Row> negativeBias() {
+        return Stream.of(
+                row(Verdict.PASS, "0 V off ≥ V_GS,min −20 V, and the switch recommends 0 V", S0, D0, O0, "0 V", "-20 V"),
+                row(Verdict.PASS, "−5 V off: within −20 V (less 10 %: −18 V) and the driver's −10 V rail", S0,
+                        d -> d.vNegMin = -10, o -> o.vDriveNeg = -5.0, "-5 V", "-10 V"),
+                row(Verdict.WARN, "−19 V off: below −20 V·0.9 = −18 V, so within 10 % of V_GS,min −20 V", S0,
+                        d -> d.vNegMin = -20, o -> o.vDriveNeg = -19.0, "-19 V", "-18 V"),
+                row(Verdict.WARN, "switch recommends −4 V off, stage gives 0 V, driver has no Miller clamp"
+                        + " (REFERENCES §7 remedies)", s -> s.vGateOff = -4, D0, O0, "-4 V", "add a negative rail"),
+                row(Verdict.FAIL, "−4 V asked of a driver without negative rail (v_neg_min_v 0 = none, DESIGN.md)", S0,
+                        D0, o -> o.vDriveNeg = -4.0, "-4 V", "no negative output rail",
+                        "pick a driver with a negative rail"),
+                row(Verdict.FAIL, "−8 V asked of a driver whose rail goes to −5 V", S0, d -> d.vNegMin = -5,
+                        o -> o.vDriveNeg = -8.0, "-8 V", "-5 V", "pick a driver rated for -8 V"),
+                row(Verdict.FAIL, "−25 V off < V_GS,min −20 V (§5: off level ≥ V_GS,min)", S0, d -> d.vNegMin = -30,
+                        o -> o.vDriveNeg = -25.0, "-25 V", "-20 V", "use -18 V or less negative"),
+                row(Verdict.UNKNOWN, "V_GS,min unknown: the off level cannot be checked", s -> s.vGsMin = Double.NaN,
+                        D0, O0, "V_GS,min"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void negativeBias(Row r) {
+        check(Rule.NEGATIVE_BIAS, r);
+    }
+
+    // ------------------------------------------------------------------ uvlo
+
+    static Stream<Row> uvlo() {
+        return Stream.of(
+                row(Verdict.PASS, "10 V supply ≥ UVLO rising 7 V + 1 V; UVLO falling 6.5 V ≥ plateau 5 V (§5)", S0, D0,
+                        O0, "7 V", "6.5 V", "10 V"),
+                row(Verdict.WARN, "UVLO rising 9.5 V: 10 V supply clears it by 0.5 V < 1 V headroom", S0, d -> {
+                    d.uvloOn = 9.5;
+                    d.uvloOff = 9;
+                }, O0, "9.5 V", "10 V"),
+                row(Verdict.FAIL, "UVLO rising 11 V > 10 V supply: never leaves lock-out (§5); needs > 11 + 1 V", S0,
+                        d -> {
+                            d.uvloOn = 11;
+                            d.uvloOff = 10.5;
+                        }, O0, "11 V", "raise the supply above 12 V"),
+                row(Verdict.FAIL, "UVLO falling 4.5 V < plateau 5 V: a sagging supply leaves the switch half-on (§5)",
+                        S0, d -> d.uvloOff = 4.5, O0, "4.5 V", "5 V", "pick a driver with UVLO falling ≥ 5 V"),
+                row(Verdict.FAIL, "+10/−6 V: UVLO falling 6.5 V leaves 6.5 − 6 = 0.5 V on the gate < plateau 5 V;"
+                        + " needs UVLO falling ≥ 5 + 6 = 11 V", S0, d -> d.vNegMin = -10, o -> o.vDriveNeg = -6.0,
+                        "500 mV", "pick a driver with UVLO falling ≥ 11 V"),
+                row(Verdict.UNKNOWN, "uvlo_on_v unknown", S0, d -> {
+                    d.uvloOn = Double.NaN;
+                    d.uvloOff = Double.NaN;
+                }, O0, "uvlo_on_v"),
+                row(Verdict.UNKNOWN, "plateau, V_th,max and full-enhancement level all unknown", s -> {
+                    s.vPlateau = Double.NaN;
+                    s.vThMax = Double.NaN;
+                    s.rOnVgs = Double.NaN;
+                    s.vGateOn = Double.NaN;
+                }, D0, O0, "7 V"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void uvlo(Row r) {
+        check(Rule.UVLO, r);
+    }
+
+    // ------------------------------------------------------------------ logic-level
+
+    static Stream<Row> logicLevel() {
+        return Stream.of(
+                row(Verdict.PASS, "LVCMOS 3.3 V: V_OH 3.1, V_OL 0.2 (JESD8C.01, from memory) into V_IH 2.0 / V_IL 0.8:"
+                        + " NM_H 1.1 V, NM_L 0.6 V (REFERENCES §6)", S0, D0, O0, "1.1 V", "600 mV"),
+                row(Verdict.WARN, "V_IH 3.05 V: NM_H = 3.1 − 3.05 = 50 mV < 0.1 V", S0, d -> d.vIh = 3.05, O0, "50 mV",
+                        "3.05 V"),
+                row(Verdict.FAIL, "5 V CMOS thresholds V_IH 3.5 / V_IL 1.5 (0.7/0.3·V_CC, from memory): NM_H = 3.1 − 3.5"
+                        + " = −0.4 V (§6); needs V_IH ≤ 3.1 − 0.1 = 3 V", S0, d -> {
+                            d.vIh = 3.5;
+                            d.vIl = 1.5;
+                        }, O0, "3.5 V", "-400 mV", "pick a driver with V_IH ≤ 3 V"),
+                row(Verdict.FAIL, "V_IL 0.15 V < V_OL 0.2 V: NM_L −50 mV", S0, d -> d.vIl = 0.15, O0, "-50 mV",
+                        "pick a driver with V_IL ≥ 300 mV"),
+                row(Verdict.FAIL, "5 V CMOS controller (up to 5 V) into a 3.6 V input maximum", S0, d -> d.vInMax = 3.6,
+                        o -> o.logic = LogicFamily.CMOS_5V, "5 V", "3.6 V", "add a level shifter"),
+                row(Verdict.UNKNOWN, "v_ih_v unknown", S0, d -> d.vIh = Double.NaN, O0, "v_ih_v"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void logicLevel(Row r) {
+        check(Rule.LOGIC_LEVEL, r);
+    }
+
+    // ------------------------------------------------------------------ polarity
+
+    static Stream<Row> polarity() {
+        return Stream.of(
+                row(Verdict.PASS, "non-inverting input, active-high PWM", S0, D0, O0, "non-inverting"),
+                row(Verdict.PASS, "channel A non-inverting, B inverting, active-low PWM: use channel 2", S0,
+                        d -> d.inverting = List.of(false, true), o -> o.activeHigh = false, "channel 2"),
+                row(Verdict.WARN, "inverting input with active-low PWM: on while the pin is low or unpowered", S0,
+                        d -> d.inverting = List.of(true), o -> o.activeHigh = false, "add a pull-up"),
+                row(Verdict.FAIL, "inverting input with active-high PWM: on when it should be off", S0,
+                        d -> d.inverting = List.of(true), O0, "inverting", "use the non-inverting variant"),
+                row(Verdict.FAIL, "non-inverting input with active-low PWM", S0, D0, o -> o.activeHigh = false,
+                        "active-low", "use an inverting driver"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void polarity(Row r) {
+        check(Rule.POLARITY, r);
+    }
+
+    /** Polarity has no unknown: input_polarity is a required column and a driver without one is refused. */
+    @Test
+    void aDriverWithoutInputPolarityIsRefused() {
+        Parts.Dr d = Parts.dr();
+        d.inverting = List.of();
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, d::build);
+        assertTrue(e.getMessage().contains("expected an input polarity"), e.getMessage());
+    }
+
+    // ------------------------------------------------------------------ high-side
+
+    private static final Consumer<OperatingPoint.Spec> HIGH = o -> o.highSide = true;
+
+    static Stream<Row> highSide() {
+        return Stream.of(
+                row(Verdict.PASS, "low side: nothing floats", S0, D0, O0, "low side"),
+                row(Verdict.PASS, "200 V offset ≥ 48 V bus + 20 % = 57.6 V", S0, D0, HIGH, "200 V", "48 V"),
+                row(Verdict.WARN, "180 V bus: 200 V ≥ 180 V but < 180·1.2 = 216 V", S0, D0,
+                        HIGH.andThen(o -> o.bus = 180.0), "180 V", "pick a driver rated ≥ 216 V"),
+                row(Verdict.FAIL, "250 V bus above the 200 V offset rating; needs 250·1.2 = 300 V", S0, D0,
+                        HIGH.andThen(o -> o.bus = 250.0), "250 V", "pick a driver rated ≥ 300 V"),
+                row(Verdict.FAIL, "a low-side driver cannot float", S0, d -> d.topology = Topology.LOW_SIDE, HIGH,
+                        "low-side", "pick a high-side, half-bridge or isolated driver"),
+                row(Verdict.UNKNOWN, "v_offset_max_v unknown", S0, d -> d.vOffsetMax = Double.NaN, HIGH,
+                        "v_offset_max_v"),
+                row(Verdict.UNKNOWN, "bus not given", S0, D0, HIGH.andThen(o -> o.bus = null), "--bus"),
+                row(Verdict.PASS, "isolated, 5 kV rms ≥ 2 × 800 V bus = 1.6 kV", S0, d -> {
+                    d.topology = Topology.ISOLATED;
+                    d.isolationVrms = 5000;
+                }, HIGH.andThen(o -> o.bus = 800.0), "5 kV", "800 V"),
+                row(Verdict.WARN, "isolated, 1 kV rms ≥ 800 V bus but < 1.6 kV", S0, d -> {
+                    d.topology = Topology.ISOLATED;
+                    d.isolationVrms = 1000;
+                }, HIGH.andThen(o -> o.bus = 800.0), "1 kV", "800 V"),
+                row(Verdict.FAIL, "isolated, 600 V rms < 800 V bus", S0, d -> {
+                    d.topology = Topology.ISOLATED;
+                    d.isolationVrms = 600;
+                }, HIGH.andThen(o -> o.bus = 800.0), "600 V", "pick a driver rated ≥ 1.6 kV"),
+                row(Verdict.UNKNOWN, "isolated with unknown isolation rating", S0, d -> d.topology = Topology.ISOLATED,
+                        HIGH, "isolation"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void highSide(Row r) {
+        check(Rule.HIGH_SIDE, r);
+    }
+
+    // ------------------------------------------------------------------ bootstrap
+
+    /** High side at 12 V: Q_g at 12 V = 50 nC + 4 nC/V·2 V = 58 nC (slope (50−15−15)/(10−5), piecewise-linear curve). */
+    private static final Consumer<OperatingPoint.Spec> HIGH12 = o -> {
+        o.highSide = true;
+        o.vDrive = 12.0;
+    };
+
+    static Stream<Row> bootstrap() {
+        return Stream.of(
+                row(Verdict.PASS, "low side: no bootstrap", S0, D0, O0, "low side"),
+                row(Verdict.PASS, "isolated output needs its own supply, no duty limit", S0, d -> {
+                    d.topology = Topology.ISOLATED;
+                    d.isolationVrms = 5000;
+                }, HIGH12.andThen(o -> o.dutyMax = 1.0), "isolated"),
+                row(Verdict.PASS, "Q = 58 nC + 50 µA·5 µs = 58.25 nC; ΔV = 12 − 0.7 − max(UVLO,off 6.5, full 10) = 1.3 V;"
+                        + " C ≥ Q/ΔV = 44.8 nF (REFERENCES §4); ×3 → E12 150 nF; D_max = 1 − 3·2.2 Ω·150 nF·100 kHz"
+                        + " = 0.901 (§4) ≥ duty 0.5", S0, D0, HIGH12.andThen(o -> o.dutyMax = 0.5), "44.8 nF", "150 nF",
+                        "90.1 %"),
+                row(Verdict.FAIL, "duty 100 %: a bootstrap recharges only while the low side is on (§4)", S0, D0,
+                        HIGH12.andThen(o -> o.dutyMax = 1.0), "100 %", "cap the duty at 90.1 %"),
+                row(Verdict.FAIL, "duty 95 % > D_max 90.1 %", S0, D0, HIGH12.andThen(o -> o.dutyMax = 0.95), "95 %",
+                        "90.1 %", "lower the duty"),
+                row(Verdict.UNKNOWN, "duty not given: the refresh limit cannot be checked; t_on taken as 1/f = 10 µs, so"
+                        + " Q = 58 nC + 50 µA·10 µs = 58.5 nC and C ≥ 58.5 nC / 1.3 V = 45 nF (§4)", S0, D0, HIGH12,
+                        "45 nF", "--duty-max"),
+                row(Verdict.WARN, "external diode needed, but the bus (its rating) is not given", S0,
+                        d -> d.bootstrapDiode = false, HIGH12.andThen(o -> {
+                            o.dutyMax = 0.5;
+                            o.bus = null;
+                        }), "external fast diode"),
+                row(Verdict.WARN, "10 V drive: V_drive − V_F = 9.3 V is below the 10 V full-enhancement level but above"
+                        + " UVLO,off 6.5 V, so the capacitor is sized to UVLO (§4: ΔV ≤ V_DD − V_F − V_UVLO,off) and"
+                        + " the high-side gate sits below full enhancement: raise V_drive to 10 + 0.7 V", S0, D0,
+                        o -> {
+                            o.highSide = true;
+                            o.dutyMax = 0.5;
+                        }, "9.3 V", "10 V", "10.7 V"),
+                row(Verdict.FAIL, "V_drive − V_F = 6.3 V ≤ UVLO,off 6.5 V: no capacitor helps", S0, D0, o -> {
+                    o.highSide = true;
+                    o.vDrive = 7.0;
+                    o.dutyMax = 0.5;
+                }, "6.3 V", "6.5 V", "raise V_drive"),
+                row(Verdict.FAIL, "a low-side driver has no floating supply", S0, d -> d.topology = Topology.LOW_SIDE,
+                        HIGH12.andThen(o -> o.dutyMax = 0.5), "low-side", "pick a high-side, half-bridge or isolated"),
+                row(Verdict.UNKNOWN, "UVLO and full-enhancement level unknown: no droop limit", s -> {
+                    s.rOnVgs = Double.NaN;
+                    s.vGateOn = Double.NaN;
+                }, d -> {
+                    d.uvloOn = Double.NaN;
+                    d.uvloOff = Double.NaN;
+                }, HIGH12.andThen(o -> o.dutyMax = 0.5), "UVLO"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void bootstrap(Row r) {
+        check(Rule.BOOTSTRAP, r);
+    }
+
+    // ------------------------------------------------------------------ driver-power
+
+    static Stream<Row> driverPower() {
+        return Stream.of(
+                row(Verdict.PASS, "P_G = 50 nC·10 V·100 kHz = 50 mW (REFERENCES §2); driver share"
+                        + " 25 mW·(2/5 + 1/4) = 16.25 mW ≤ 0.7·1 W", S0, D0, O0, "50 mW", "1 W"),
+                row(Verdict.WARN, "P_max 20 mW: 16.25 mW > 0.7·20 = 14 mW but ≤ 20 mW", S0, d -> d.pMax = 0.02, O0,
+                        "20 mW", "70 %"),
+                row(Verdict.FAIL, "P_max 10 mW < 16.25 mW", S0, d -> d.pMax = 0.01, O0, "10 mW",
+                        "add external gate resistance"),
+                row(Verdict.UNKNOWN, "p_max_w unknown", S0, d -> d.pMax = Double.NaN, O0, "p_max_w"),
+                row(Verdict.UNKNOWN, "Q_g unknown", s -> s.qG = Double.NaN, D0, O0, "gate charge"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void driverPower(Row r) {
+        check(Rule.DRIVER_POWER, r);
+    }
+
+    // ------------------------------------------------------------------ dv-dt
+
+    /**
+     * REFERENCES §7 check: C_gd 10 pF, 50 V/ns, R_off 6 Ω (1 Ω sink + 4 Ω R_g,off + 1 Ω internal),
+     * C_iss 1 nF, 400 V step → V_pk = 3.0 V·(1 − e^(−8 ns/6 ns)) = 2.21 V.
+     */
+    private static Consumer<Parts.Sw> sec7(double vThMin) {
+        return s -> {
+            s.cRss = 10e-12;
+            s.cIss = 1e-9;
+            s.vThMin = vThMin;
+        };
+    }
+
+    private static final Consumer<OperatingPoint.Spec> SLEW50 = o -> {
+        o.bus = 400.0;
+        o.dvdt = 50e9;
+        o.rGOff = 4.0;
+    };
+
+    static Stream<Row> dvdt() {
+        return Stream.of(
+                row(Verdict.PASS, "2.21 V (§7) ≤ 0.7 · V_th,min 4 V = 2.8 V", sec7(4), D0, SLEW50, "2.21 V", "50 V/ns",
+                        "6 Ω", "4 V"),
+                row(Verdict.WARN, "2.21 V above 0.7·3 V = 2.1 V, below V_th,min 3 V", sec7(3), D0, SLEW50, "2.21 V",
+                        "3 V"),
+                row(Verdict.FAIL, "2.21 V ≥ V_th,min 2 V, no clamp: false turn-on (§7)", sec7(2), D0, SLEW50, "2.21 V",
+                        "2 V", "use a driver with a Miller clamp"),
+                row(Verdict.WARN, "2.21 V ≥ 2 V but the driver has a Miller clamp (§7 remedy)", sec7(2),
+                        d -> d.millerClamp = true, SLEW50, "Miller clamp"),
+                row(Verdict.PASS, "−4 V off: 2.21 − 4 = −1.79 V ≤ 1.4 V (§7: risk if V_pk + V_off ≥ V_th,min)", sec7(2),
+                        d -> d.vNegMin = -10, SLEW50.andThen(o -> o.vDriveNeg = -4.0), "-1.79 V"),
+                row(Verdict.UNKNOWN, "C_rss unknown", s -> s.cRss = Double.NaN, D0, SLEW50, "C_rss"),
+                row(Verdict.UNKNOWN, "no bus and no dv/dt: slew unknown", S0, D0, o -> o.bus = null, "dv/dt"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void dvdt(Row r) {
+        check(Rule.DV_DT, r);
+    }
+
+    // ------------------------------------------------------------------ lifecycle
+
+    static Stream<Row> lifecycle() {
+        return Stream.of(
+                row(Verdict.PASS, "both active and in stock", S0, D0, O0, "active", "in stock"),
+                row(Verdict.WARN, "driver nrnd", S0, d -> d.lifecycle = "nrnd", O0, "TST-D1", "not recommended"),
+                row(Verdict.WARN, "switch at last-time buy", s -> s.lifecycle = "ltb", D0, O0, "TST-S1",
+                        "last-time buy"),
+                row(Verdict.WARN, "driver in preview", S0, d -> d.lifecycle = "preview", O0, "not yet in production"),
+                row(Verdict.WARN, "switch out of stock", s -> s.stock = 0, D0, O0, "out of stock"),
+                row(Verdict.FAIL, "driver obsolete", S0, d -> d.lifecycle = "obsolete", O0, "obsolete",
+                        "find a replacement"),
+                row(Verdict.UNKNOWN, "lifecycle unknown", S0, d -> d.lifecycle = "unknown", O0, "no lifecycle status"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void lifecycle(Row r) {
+        check(Rule.LIFECYCLE, r);
+    }
+
+    // ------------------------------------------------------------------ the pair
+
+    @Test
+    void theBaselinePairPassesEveryRule() {
+        PairResult r = Parts.eval(Parts.sw(), Parts.dr(), Parts.op());
+        for (Check c : r.checks()) {
+            assertEquals(Verdict.PASS, c.verdict(), () -> c.rule() + ": " + c.message());
+        }
+        assertEquals(Verdict.PASS, r.verdict());
+        assertEquals(11, r.checks().size(), "one check per pair rule (catalog belongs to check)");
+    }
+
+    @Test
+    void aPairFailsIfAnyRuleFailsEvenWhenOthersWarnOrAreUnknown() {
+        Parts.Dr d = Parts.dr();
+        d.inverting = List.of(true); // polarity fails
+        d.pMax = Double.NaN; // driver-power unknown
+        d.lifecycle = "nrnd"; // lifecycle warns
+        PairResult r = Parts.eval(Parts.sw(), d, Parts.op());
+        assertEquals(Verdict.FAIL, r.check(Rule.POLARITY).orElseThrow().verdict());
+        assertEquals(Verdict.UNKNOWN, r.check(Rule.DRIVER_POWER).orElseThrow().verdict());
+        assertEquals(Verdict.WARN, r.check(Rule.LIFECYCLE).orElseThrow().verdict());
+        assertEquals(Verdict.FAIL, r.verdict());
+    }
+
+    @Test
+    void anUnknownCheckMakesThePairWarn() {
+        Parts.Dr d = Parts.dr();
+        d.pMax = Double.NaN;
+        PairResult r = Parts.eval(Parts.sw(), d, Parts.op());
+        assertEquals(Verdict.UNKNOWN, r.check(Rule.DRIVER_POWER).orElseThrow().verdict());
+        assertEquals(Verdict.WARN, r.verdict());
+    }
+
+    @Test
+    void aWarningCheckMakesThePairWarn() {
+        Parts.Dr d = Parts.dr();
+        d.lifecycle = "nrnd";
+        PairResult r = Parts.eval(Parts.sw(), d, Parts.op());
+        assertEquals(Verdict.WARN, r.verdict());
+    }
+
+    /** Everything the catalog may leave empty, left empty: no rule that needs it may pass, and nothing throws. */
+    @Test
+    void missingOptionalDataIsUnknownNeverPass() {
+        Parts.Sw s = Parts.sw();
+        s.rOnVgs = s.vThMin = s.vThMax = s.vGateOn = s.qGVgs = s.qGs = s.qGd = s.vPlateau = Double.NaN;
+        s.cIss = s.cRss = s.rGInt = s.iCont = s.rOn = Double.NaN;
+        s.vGateOff = Double.NaN;
+        s.lifecycle = "unknown";
+        s.stock = -1;
+        Parts.Dr d = Parts.dr();
+        d.rSource = d.rSink = d.uvloOn = d.uvloOff = d.vIh = d.vIl = d.vInMax = d.vOffsetMax = d.iQbs = Double.NaN;
+        d.vNegMin = d.tProp = d.pMax = d.isolationVrms = Double.NaN;
+        d.bootstrapDiode = null;
+        d.millerClamp = null;
+        d.lifecycle = "unknown";
+        OperatingPoint.Spec o = Parts.op();
+        o.highSide = true;
+        o.bus = null;
+        PairResult r = Parts.eval(s, d, o);
+        for (Rule rule : List.of(Rule.GATE_VOLTAGE, Rule.UVLO, Rule.LOGIC_LEVEL, Rule.HIGH_SIDE, Rule.BOOTSTRAP,
+                Rule.DRIVER_POWER, Rule.DV_DT, Rule.LIFECYCLE)) {
+            Check c = r.check(rule).orElseThrow();
+            assertEquals(Verdict.UNKNOWN, c.verdict(), () -> rule + ": " + c.message());
+        }
+        assertEquals(Verdict.WARN, r.verdict());
+    }
+
+    // ------------------------------------------------------------------ score
+
+    @Test
+    void scoresAreInRangeAndFailingPairsRankBelowEveryPassingPair() {
+        List<PairResult> pass = new ArrayList<>();
+        List<PairResult> fail = new ArrayList<>();
+        for (Rule rule : Rule.values()) {
+            for (Row r : rowsOf(rule)) {
+                Parts.Sw s = Parts.sw();
+                Parts.Dr d = Parts.dr();
+                OperatingPoint.Spec o = Parts.op();
+                r.s().accept(s);
+                r.d().accept(d);
+                r.o().accept(o);
+                PairResult pr = Parts.eval(s, d, o);
+                assertTrue(pr.score() >= 0 && pr.score() <= 1, () -> r + ": score " + pr.score());
+                (pr.verdict() == Verdict.PASS ? pass : pr.verdict() == Verdict.FAIL ? fail : new ArrayList<PairResult>())
+                        .add(pr);
+            }
+        }
+        assertTrue(pass.size() >= 5 && fail.size() >= 20, pass.size() + " passing, " + fail.size() + " failing");
+        double worstPass = pass.stream().mapToDouble(PairResult::score).min().orElseThrow();
+        for (PairResult f : fail) {
+            assertTrue(f.score() <= Score.FAIL_CAP, () -> "failing pair scored " + f.score());
+            assertTrue(f.score() < worstPass, () -> "failing pair " + f.score() + " not below passing " + worstPass);
+        }
+    }
+
+    private static List<Row> rowsOf(Rule rule) {
+        return switch (rule) {
+            case DRIVE_CURRENT -> driveCurrent().toList();
+            case GATE_VOLTAGE -> gateVoltage().toList();
+            case NEGATIVE_BIAS -> negativeBias().toList();
+            case UVLO -> uvlo().toList();
+            case LOGIC_LEVEL -> logicLevel().toList();
+            case POLARITY -> polarity().toList();
+            case HIGH_SIDE -> highSide().toList();
+            case BOOTSTRAP -> bootstrap().toList();
+            case DRIVER_POWER -> driverPower().toList();
+            case DV_DT -> dvdt().toList();
+            case LIFECYCLE -> lifecycle().toList();
+            case CATALOG -> List.of();
+        };
+    }
+
+    @Test
+    void moreMarginLeftScoresHigherWithinPass() {
+        // 2 A available against 1.5 A needed (baseline) scores higher than 1.67 A (R_g 3 Ω: 10/(2+3+1)).
+        OperatingPoint.Spec tight = Parts.op();
+        tight.rG = 3.0;
+        double wide = Parts.eval(Parts.sw(), Parts.dr(), Parts.op()).check(Rule.DRIVE_CURRENT).orElseThrow().score();
+        Check t = Parts.eval(Parts.sw(), Parts.dr(), tight).check(Rule.DRIVE_CURRENT).orElseThrow();
+        assertEquals(Verdict.PASS, t.verdict(), t.message());
+        assertTrue(wide > t.score(), wide + " vs " + t.score());
+    }
+
+    // ------------------------------------------------------------------ margins
+
+    @Test
+    void theDriveCurrentMarginOverrideMovesTheVerdict() {
+        // Baseline: 2 A available / 1 A average = 2.0×.
+        Margins two = Margins.DEFAULT.with("drive-current=2");
+        Margins twoAndHalf = Margins.DEFAULT.with("drive-current=2.5");
+        assertEquals(2.0, two.driveCurrent());
+        Check atTwo = Parts.eval(Parts.sw(), Parts.dr(), Parts.op(), two).check(Rule.DRIVE_CURRENT).orElseThrow();
+        assertEquals(Verdict.PASS, atTwo.verdict(), "2.0× meets a 2× margin: " + atTwo.message());
+        assertTrue(atTwo.message().contains("needs 2 A"), atTwo.message());
+        Check atTwoHalf = Parts.eval(Parts.sw(), Parts.dr(), Parts.op(), twoAndHalf).check(Rule.DRIVE_CURRENT)
+                .orElseThrow();
+        assertEquals(Verdict.WARN, atTwoHalf.verdict(), "2.0× is short of 2.5× but above 1×: " + atTwoHalf.message());
+        assertTrue(atTwoHalf.message().contains("needs 2.5 A"), atTwoHalf.message());
+        // R_g 5 Ω: 1.25× warns at the default 1.5× and passes at 1.2×.
+        OperatingPoint.Spec o = Parts.op();
+        o.rG = 5.0;
+        assertEquals(Verdict.WARN, Parts.eval(Parts.sw(), Parts.dr(), o).check(Rule.DRIVE_CURRENT).orElseThrow().verdict());
+        assertEquals(Verdict.PASS, Parts.eval(Parts.sw(), Parts.dr(), o, Margins.DEFAULT.with("drive-current=1.2"))
+                .check(Rule.DRIVE_CURRENT).orElseThrow().verdict());
+    }
+
+    @Test
+    void marginOverridesAreValidated() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> Margins.DEFAULT.with("drive-current=0.5"));
+        assertTrue(e.getMessage().contains("drive-current") && e.getMessage().contains("0.5"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> Margins.DEFAULT.with("speed=2"));
+        assertTrue(e.getMessage().contains("unknown margin 'speed'"), e.getMessage());
+        assertEquals(Margins.DEFAULT.driveCurrent(), Margins.DEFAULT.with("isolation=3").driveCurrent());
+        assertEquals(3.0, Margins.DEFAULT.with("isolation=3").isolation());
+    }
+}
