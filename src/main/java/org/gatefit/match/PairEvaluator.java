@@ -3,6 +3,7 @@ package org.gatefit.match;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Supplier;
 import org.gatefit.match.Check.Comparison;
 import org.gatefit.physics.Bootstrap;
 import org.gatefit.physics.DriveCurrent;
@@ -31,10 +32,23 @@ public final class PairEvaluator {
 
     /** All checks and figures of a pair. */
     public static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        return evaluate(d, s, op, m, true);
+    }
+
+    /**
+     * Verdict and score only: the same rules as {@link #evaluate}, but the checks carry no sentence
+     * or comparisons and the result no figures. Ranking uses it for every candidate and
+     * evaluates the ones it shows in full; verdict and score are identical.
+     */
+    public static PairResult rank(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        return evaluate(d, s, op, m, false);
+    }
+
+    private static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m, boolean detail) {
         if (!s.nChannel()) {
             return pChannel(d, s, op, m);
         }
-        Calc c = new Calc(d, s, op);
+        Calc c = new Calc(d, s, op, detail);
         List<Check> checks = new ArrayList<>(11);
         checks.add(guard(Rule.DRIVE_CURRENT, () -> driveCurrent(c, m)));
         checks.add(guard(Rule.GATE_VOLTAGE, () -> gateVoltage(c, m)));
@@ -52,8 +66,8 @@ public final class PairEvaluator {
             v = v.and(ch.verdict());
         }
         v = v.forPair();
-        return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks, c.figures(), op, m,
-                Double.NaN);
+        return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks,
+                detail ? c.figures() : List.of(), op, m, Double.NaN);
     }
 
     /**
@@ -91,7 +105,7 @@ public final class PairEvaluator {
 
     static Check driveCurrent(Calc c, Margins m) {
         if (Double.isNaN(c.qTotal)) {
-            return unknown(Rule.DRIVE_CURRENT, "gate charge unknown");
+            return unknown(c, Rule.DRIVE_CURRENT, () -> "gate charge unknown");
         }
         double need = c.iReq * m.driveCurrent();
         double srcRatio = c.iPkSrc / c.iReq;
@@ -104,21 +118,21 @@ public final class PairEvaluator {
         List<Comparison> cmp = List.of(
                 new Comparison("peak source current (turn-on)", c.iPkSrc, "≥", need, "A"),
                 new Comparison("peak sink current (turn-off)", c.iPkSnk, "≥", need, "A"));
-        String edge = Eng.of(c.op.edge(), "s");
-        String what = "needs " + Eng.of(need, "A") + " for a " + edge + " edge with " + Eng.num(m.driveCurrent())
-                + "× margin (" + Eng.of(c.qTotal, "C") + " at " + Eng.of(c.op.swing(), "V") + ")";
-        String gives = "this driver " + (sourceWorse ? "sources " : "sinks ") + Eng.of(have, "A") + " through "
-                + Eng.of(rLoop, "Ω") + (have >= rated ? " (its rated peak)" : "");
+        String edge = c.detail ? (Eng.of(c.op.edge(), "s")) : "";
+        String what = c.detail ? ("needs " + Eng.of(need, "A") + " for a " + edge + " edge with " + Eng.num(m.driveCurrent())
+                + "× margin (" + Eng.of(c.qTotal, "C") + " at " + Eng.of(c.op.swing(), "V") + ")") : "";
+        String gives = c.detail ? ("this driver " + (sourceWorse ? "sources " : "sinks ") + Eng.of(have, "A") + " through "
+                + Eng.of(rLoop, "Ω") + (have >= rated ? " (its rated peak)" : "")) : "";
         if (ratio >= m.driveCurrent()) {
-            return new Check(Rule.DRIVE_CURRENT, Verdict.PASS, what + "; " + gives, cmp,
+            return check(c, Rule.DRIVE_CURRENT, Verdict.PASS, () -> what + "; " + gives, cmp,
                     Score.pass((ratio - m.driveCurrent()) / m.driveCurrent()));
         }
-        String fix = fixCurrent(c, need, sourceWorse);
+        String fix = c.detail ? (fixCurrent(c, need, sourceWorse)) : "";
         if (ratio >= 1) {
-            return new Check(Rule.DRIVE_CURRENT, Verdict.WARN, what + "; " + gives + ", less margin than asked — "
+            return check(c, Rule.DRIVE_CURRENT, Verdict.WARN, () -> what + "; " + gives + ", less margin than asked — "
                     + fix, cmp, Score.warn((ratio - 1) / (m.driveCurrent() - 1)));
         }
-        return new Check(Rule.DRIVE_CURRENT, Verdict.FAIL, what + "; " + gives + " — " + fix, cmp, 0);
+        return check(c, Rule.DRIVE_CURRENT, Verdict.FAIL, () -> what + "; " + gives + " — " + fix, cmp, 0);
     }
 
     private static String fixCurrent(Calc c, double need, boolean source) {
@@ -145,7 +159,7 @@ public final class PairEvaluator {
         double on = op.vDrive();
         double swing = op.swing();
         if (Double.isNaN(s.vGsMax())) {
-            return unknown(Rule.GATE_VOLTAGE, "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
+            return unknown(c, Rule.GATE_VOLTAGE, () -> "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
                     + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
         }
         List<Comparison> cmp = new ArrayList<>();
@@ -161,45 +175,45 @@ public final class PairEvaluator {
             cmp.add(new Comparison("on level (above threshold)", on, "≥", s.vThMax(), "V"));
         }
         if (swing > c.d.vSupplyMax()) {
-            return fail(Rule.GATE_VOLTAGE, "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
+            return fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
                     + Eng.of(op.vDriveNeg(), "V") + ") exceeds this driver's " + Eng.of(c.d.vSupplyMax(), "V")
                     + " maximum — lower the drive levels or pick a driver rated ≥ " + Eng.of(swing, "V"), cmp);
         }
         if (swing < c.d.vSupplyMin()) {
-            return fail(Rule.GATE_VOLTAGE, "the " + Eng.of(swing, "V") + " supply is below this driver's "
+            return fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply is below this driver's "
                     + Eng.of(c.d.vSupplyMin(), "V") + " minimum — raise the supply or pick a driver that runs from "
                     + Eng.of(swing, "V"), cmp);
         }
         if (on > s.vGsMax()) {
-            return fail(Rule.GATE_VOLTAGE, "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
+            return fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
                     + Eng.of(s.vGsMax(), "V") + " and will damage the gate — drive at " + Eng.of(limit, "V")
                     + " or less" + (Double.isNaN(s.vGateOn()) ? "" : " (recommended " + Eng.of(s.vGateOn(), "V") + ")"), cmp);
         }
         if (!Double.isNaN(s.vThMax()) && on <= s.vThMax()) {
-            return fail(Rule.GATE_VOLTAGE, "on level " + Eng.of(on, "V") + " does not exceed V_th,max "
+            return fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " does not exceed V_th,max "
                     + Eng.of(s.vThMax(), "V") + ", so the switch may not turn on — drive at "
                     + Eng.of(Double.isNaN(full) ? s.vThMax() * 2 : full, "V") + " or more", cmp);
         }
         if (on > limit) {
-            return new Check(Rule.GATE_VOLTAGE, Verdict.WARN, "on level " + Eng.of(on, "V") + " is within "
+            return check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is within "
                     + Eng.pct(m.gateHeadroom()) + " of V_GS,max " + Eng.of(s.vGsMax(), "V")
                     + ", leaving little room for overshoot — drive at " + Eng.of(limit, "V") + " or less, or damp the gate loop",
                     cmp, Score.warn((s.vGsMax() - on) / (s.vGsMax() - limit)));
         }
         if (Double.isNaN(full)) {
-            return new Check(Rule.GATE_VOLTAGE, Verdict.UNKNOWN, "on level " + Eng.of(on, "V") + " is within the limits,"
+            return check(c, Rule.GATE_VOLTAGE, Verdict.UNKNOWN, () -> "on level " + Eng.of(on, "V") + " is within the limits,"
                     + " but the level R_on is specified at (r_on_vgs_v) is unknown — check full enhancement in the datasheet",
                     cmp, Score.UNKNOWN);
         }
         if (on < full) {
             double frac = Double.isNaN(s.vThMax()) ? 0.5 : (on - s.vThMax()) / (full - s.vThMax());
-            return new Check(Rule.GATE_VOLTAGE, Verdict.WARN, "on level " + Eng.of(on, "V") + " is below the "
+            return check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is below the "
                     + Eng.of(full, "V") + " that " + (s.technology() == Technology.IGBT ? "V_CE(sat)" : "R_DS(on)")
                     + " is specified at, so conduction loss will be higher than the datasheet figure — drive at "
                     + Eng.of(full, "V") + " or more", cmp, Score.warn(Math.max(0, Math.min(1, frac))));
         }
         double room = Math.min((limit - on) / limit, (on - full) / Math.max(full, 1));
-        return new Check(Rule.GATE_VOLTAGE, Verdict.PASS, "on level " + Eng.of(on, "V") + " fully enhances the switch (≥ "
+        return check(c, Rule.GATE_VOLTAGE, Verdict.PASS, () -> "on level " + Eng.of(on, "V") + " fully enhances the switch (≥ "
                 + Eng.of(full, "V") + ") and stays below " + Eng.of(limit, "V") + " (V_GS,max " + Eng.of(s.vGsMax(), "V")
                 + " less " + Eng.pct(m.gateHeadroom()) + "); the driver runs from " + Eng.of(c.d.vSupplyMin(), "V")
                 + " to " + Eng.of(c.d.vSupplyMax(), "V"), cmp, Score.pass(room * 5));
@@ -220,7 +234,7 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         double off = c.op.vDriveNeg();
         if (Double.isNaN(s.vGsMin())) {
-            return unknown(Rule.NEGATIVE_BIAS, "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
+            return unknown(c, Rule.NEGATIVE_BIAS, () -> "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
                     + " off level cannot be checked against it — look up the negative gate limit in the datasheet");
         }
         List<Comparison> cmp = new ArrayList<>();
@@ -234,33 +248,33 @@ public final class PairEvaluator {
             cmp.add(new Comparison("off level (switch's recommendation)", off, "≤", s.vGateOff(), "V"));
         }
         if (off < s.vGsMin()) {
-            return fail(Rule.NEGATIVE_BIAS, "off level " + Eng.of(off, "V") + " is below the switch's V_GS,min "
+            return fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the switch's V_GS,min "
                     + Eng.of(s.vGsMin(), "V") + " and will damage the gate — use " + Eng.of(limit, "V") + " or less negative", cmp);
         }
         if (off < 0 && (Double.isNaN(d.vNegMin()) || d.vNegMin() == 0)) {
-            return fail(Rule.NEGATIVE_BIAS, "the stage asks for " + Eng.of(off, "V") + " off, but this driver has no"
+            return fail(c, Rule.NEGATIVE_BIAS, () -> "the stage asks for " + Eng.of(off, "V") + " off, but this driver has no"
                     + " negative output rail — pick a driver with a negative rail (v_neg_min_v ≤ " + Eng.of(off, "V")
                     + ") or turn off at 0 V with a Miller clamp", cmp);
         }
         if (off < 0 && off < d.vNegMin()) {
-            return fail(Rule.NEGATIVE_BIAS, "off level " + Eng.of(off, "V") + " is below the " + Eng.of(d.vNegMin(), "V")
+            return fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the " + Eng.of(d.vNegMin(), "V")
                     + " this driver's negative rail supports — use " + Eng.of(d.vNegMin(), "V") + " or pick a driver rated for "
                     + Eng.of(off, "V"), cmp);
         }
         if (off < limit) {
-            return new Check(Rule.NEGATIVE_BIAS, Verdict.WARN, "off level " + Eng.of(off, "V") + " is within "
+            return check(c, Rule.NEGATIVE_BIAS, Verdict.WARN, () -> "off level " + Eng.of(off, "V") + " is within "
                     + Eng.pct(m.gateHeadroom()) + " of V_GS,min " + Eng.of(s.vGsMin(), "V") + " — undershoot may exceed it;"
                     + " use " + Eng.of(limit, "V") + " or less negative", cmp, Score.warn(0.5));
         }
         if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && off > s.vGateOff()) {
             boolean clamp = Boolean.TRUE.equals(d.millerClamp());
-            String msg = "the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "
+            String msg = c.detail ? ("the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "
                     + Eng.of(off, "V") + (clamp ? "; this driver's Miller clamp holds the gate low, so verify turn-off on the bench"
-                    : " — add a negative rail or use a driver with a Miller clamp, or dv/dt and noise may turn it on");
-            return new Check(Rule.NEGATIVE_BIAS, clamp ? Verdict.PASS : Verdict.WARN, msg, cmp,
+                    : " — add a negative rail or use a driver with a Miller clamp, or dv/dt and noise may turn it on")) : "";
+            return check(c, Rule.NEGATIVE_BIAS, clamp ? Verdict.PASS : Verdict.WARN, () -> msg, cmp,
                     clamp ? Score.pass(0) : Score.warn(0.5));
         }
-        return new Check(Rule.NEGATIVE_BIAS, Verdict.PASS, "off level " + Eng.of(off, "V") + " is within the switch's limit "
+        return check(c, Rule.NEGATIVE_BIAS, Verdict.PASS, () -> "off level " + Eng.of(off, "V") + " is within the switch's limit "
                 + Eng.of(s.vGsMin(), "V") + (off < 0 ? " and the driver's negative rail " + Eng.of(d.vNegMin(), "V") : "")
                 + (Double.isNaN(s.vGateOff()) ? "" : " and meets its recommended " + Eng.of(s.vGateOff(), "V")), cmp,
                 Score.pass(1));
@@ -273,13 +287,13 @@ public final class PairEvaluator {
         SwitchPart s = c.s;
         double supply = c.op.swing();
         if (Double.isNaN(d.uvloOn())) {
-            return unknown(Rule.UVLO, "this driver's UVLO thresholds are unknown (uvlo_on_v) — check that it starts at "
+            return unknown(c, Rule.UVLO, () -> "this driver's UVLO thresholds are unknown (uvlo_on_v) — check that it starts at "
                     + Eng.of(supply, "V") + " and what its outputs do when the supply sags");
         }
         List<Comparison> cmp = new ArrayList<>();
         cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + m.uvloHeadroom(), "V"));
         if (supply < d.uvloOn()) {
-            return fail(Rule.UVLO, "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
+            return fail(c, Rule.UVLO, () -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
                     + Eng.of(d.uvloOn(), "V") + ", so it stays locked out — raise the supply above " + Eng.of(d.uvloOn()
                     + m.uvloHeadroom(), "V") + " or pick a driver with a lower UVLO", cmp);
         }
@@ -294,26 +308,26 @@ public final class PairEvaluator {
             cmp.add(new Comparison("on level just before lock-out (full enhancement)", gateAtUvlo, "≥", full, "V"));
         }
         if (!Double.isNaN(need) && gateAtUvlo < need) {
-            return fail(Rule.UVLO, "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
+            return fail(c, Rule.UVLO, () -> "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
                     + " gate gets only " + Eng.of(gateAtUvlo, "V") + ", below the " + Eng.of(need, "V")
                     + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO falling ≥ "
                     + Eng.of(need - c.op.vDriveNeg(), "V") + (c.op.vDriveNeg() < 0 ? " (the plateau plus the "
                     + Eng.of(-c.op.vDriveNeg(), "V") + " negative rail)" : ""), cmp);
         }
         if (supply < d.uvloOn() + m.uvloHeadroom()) {
-            return new Check(Rule.UVLO, Verdict.WARN, "the " + Eng.of(supply, "V") + " supply is within "
+            return check(c, Rule.UVLO, Verdict.WARN, () -> "the " + Eng.of(supply, "V") + " supply is within "
                     + Eng.of(m.uvloHeadroom(), "V") + " of UVLO rising " + Eng.of(d.uvloOn(), "V")
                     + ", so supply tolerance or droop may lock the driver out — raise the supply or pick a lower UVLO", cmp,
                     Score.warn((supply - d.uvloOn()) / m.uvloHeadroom()));
         }
         if (Double.isNaN(need) && Double.isNaN(full)) {
-            return unknown(Rule.UVLO, "the driver starts at " + Eng.of(d.uvloOn(), "V") + ", but the switch's threshold"
+            return unknown(c, Rule.UVLO, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + ", but the switch's threshold"
                     + " and plateau are unknown, so the gate level at lock-out cannot be judged");
         }
-        String below = !Double.isNaN(full) && gateAtUvlo < full
+        String below = c.detail ? (!Double.isNaN(full) && gateAtUvlo < full
                 ? "; between " + Eng.of(gateAtUvlo, "V") + " and full enhancement " + Eng.of(full, "V")
-                        + " a sagging supply only raises conduction loss" : "";
-        return new Check(Rule.UVLO, Verdict.PASS, "the driver starts at " + Eng.of(d.uvloOn(), "V") + " (supply "
+                        + " a sagging supply only raises conduction loss" : "") : "";
+        return check(c, Rule.UVLO, Verdict.PASS, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + " (supply "
                 + Eng.of(supply, "V") + ") and locks out at " + Eng.of(offUvlo, "V") + ", before the gate falls below the "
                 + Eng.of(Double.isNaN(need) ? full : need, "V") + (Double.isNaN(need) ? " full-enhancement level" : " plateau")
                 + below, cmp,
@@ -327,7 +341,7 @@ public final class PairEvaluator {
         OperatingPoint op = c.op;
         String from = op.logic() == null ? "the controller" : "the " + op.logic().id() + " controller";
         if (Double.isNaN(d.vIh()) || Double.isNaN(d.vIl())) {
-            return unknown(Rule.LOGIC_LEVEL, "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
+            return unknown(c, Rule.LOGIC_LEVEL, () -> "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");
         }
         List<Comparison> cmp = new ArrayList<>();
@@ -337,28 +351,28 @@ public final class PairEvaluator {
             cmp.add(new Comparison("controller output high", op.vOhMax(), "≤", d.vInMax(), "V"));
         }
         if (!Double.isNaN(d.vInMax()) && op.vOhMax() > d.vInMax()) {
-            return fail(Rule.LOGIC_LEVEL, from + " drives up to " + Eng.of(op.vOhMax(), "V") + ", above this driver's "
+            return fail(c, Rule.LOGIC_LEVEL, () -> from + " drives up to " + Eng.of(op.vOhMax(), "V") + ", above this driver's "
                     + Eng.of(d.vInMax(), "V") + " input maximum — add a level shifter or pick a driver with a higher input rating", cmp);
         }
         if (c.nmHigh < 0) {
-            return fail(Rule.LOGIC_LEVEL, from + " gives V_OH " + Eng.of(op.vOh(), "V") + " but this driver needs V_IH "
+            return fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OH " + Eng.of(op.vOh(), "V") + " but this driver needs V_IH "
                     + Eng.of(d.vIh(), "V") + " (margin " + Eng.of(c.nmHigh, "V") + "), so a high may not register — pick a driver"
                     + " with V_IH ≤ " + Eng.of(op.vOh() - m.logicNoise(), "V") + " or add a level shifter", cmp);
         }
         if (c.nmLow < 0) {
-            return fail(Rule.LOGIC_LEVEL, from + " gives V_OL " + Eng.of(op.vOl(), "V") + " but this driver needs V_IL "
+            return fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OL " + Eng.of(op.vOl(), "V") + " but this driver needs V_IL "
                     + Eng.of(d.vIl(), "V") + " (margin " + Eng.of(c.nmLow, "V") + "), so a low may not register — pick a driver"
                     + " with V_IL ≥ " + Eng.of(op.vOl() + m.logicNoise(), "V"), cmp);
         }
         double worst = Math.min(c.nmHigh, c.nmLow);
-        String margins = "noise margins " + Eng.of(c.nmHigh, "V") + " high, " + Eng.of(c.nmLow, "V") + " low";
+        String margins = c.detail ? ("noise margins " + Eng.of(c.nmHigh, "V") + " high, " + Eng.of(c.nmLow, "V") + " low") : "";
         if (worst < m.logicNoise()) {
-            return new Check(Rule.LOGIC_LEVEL, Verdict.WARN, from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
+            return check(c, Rule.LOGIC_LEVEL, Verdict.WARN, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
                     + Eng.of(d.vIl(), "V") + ": " + margins + ", under the " + Eng.of(m.logicNoise(), "V")
                     + " asked for — keep the input trace short or pick a driver with lower thresholds", cmp,
                     Score.warn(worst / m.logicNoise()));
         }
-        return new Check(Rule.LOGIC_LEVEL, Verdict.PASS, from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
+        return check(c, Rule.LOGIC_LEVEL, Verdict.PASS, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
                 + Eng.of(d.vIl(), "V") + ": " + margins, cmp, Score.pass(worst / 0.8));
     }
 
@@ -370,26 +384,26 @@ public final class PairEvaluator {
         String sense = c.op.activeHigh() ? "active-high" : "active-low";
         if (d.offers(false) && d.offers(true)) {
             int ch = d.inverting().indexOf(wantInverting) + 1;
-            return new Check(Rule.POLARITY, Verdict.PASS, "this driver has inverting and non-inverting inputs; use channel "
+            return check(c, Rule.POLARITY, Verdict.PASS, () -> "this driver has inverting and non-inverting inputs; use channel "
                     + ch + " (" + (wantInverting ? "inverting" : "non-inverting") + ") for the " + sense + " PWM",
                     List.of(), Score.pass(1));
         }
         boolean inverting = d.offers(true);
         if (inverting == wantInverting) {
             if (inverting) {
-                return new Check(Rule.POLARITY, Verdict.WARN, "inverting input matches the active-low PWM, but the switch turns"
+                return check(c, Rule.POLARITY, Verdict.WARN, () -> "inverting input matches the active-low PWM, but the switch turns"
                         + " on whenever the controller pin is low or unpowered (reset, boot) — add a pull-up and an enable,"
                         + " or use a non-inverting driver with active-high PWM", List.of(), Score.warn(0.5));
             }
-            return new Check(Rule.POLARITY, Verdict.PASS, "non-inverting input matches the active-high PWM", List.of(),
+            return check(c, Rule.POLARITY, Verdict.PASS, () -> "non-inverting input matches the active-high PWM", List.of(),
                     Score.pass(1));
         }
         if (inverting) {
-            return new Check(Rule.POLARITY, Verdict.FAIL, "this driver's input is inverting but the PWM is active-high, so the"
+            return check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is inverting but the PWM is active-high, so the"
                     + " switch is on while the controller holds its pin low (also in reset) — use the non-inverting variant or"
                     + " invert the PWM in the controller", List.of(), 0);
         }
-        return new Check(Rule.POLARITY, Verdict.FAIL, "this driver's input is non-inverting but the PWM is active-low, so the"
+        return check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is non-inverting but the PWM is active-low, so the"
                 + " switch is on when it should be off — use an inverting driver or make the PWM active-high", List.of(), 0);
     }
 
@@ -399,58 +413,58 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         double bus = c.op.bus();
         if (!c.op.highSide()) {
-            return new Check(Rule.HIGH_SIDE, Verdict.PASS, "low side: the source sits at ground, no floating output needed",
+            return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "low side: the source sits at ground, no floating output needed",
                     List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(Rule.HIGH_SIDE, "a " + d.topology() + " driver cannot float on the switch node of a high-side switch"
+            return fail(c, Rule.HIGH_SIDE, () -> "a " + d.topology() + " driver cannot float on the switch node of a high-side switch"
                     + " — pick a high-side, half-bridge or isolated driver", List.of());
         }
         if (d.topology() == Topology.ISOLATED) {
             if (Double.isNaN(d.isolationVrms())) {
-                return unknown(Rule.HIGH_SIDE, "isolated driver with unknown isolation rating — check it against the "
+                return unknown(c, Rule.HIGH_SIDE, () -> "isolated driver with unknown isolation rating — check it against the "
                         + (Double.isNaN(bus) ? "bus" : Eng.of(bus, "V") + " bus"));
             }
             if (Double.isNaN(bus)) {
-                return unknown(Rule.HIGH_SIDE, "bus voltage not given — give --bus or bus_v to check the "
+                return unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
                         + Eng.of(d.isolationVrms(), "V") + " rms isolation");
             }
             List<Comparison> cmp = List.of(new Comparison("isolation rating (rms)", d.isolationVrms(), "≥",
                     bus * m.isolation(), "V"));
             if (d.isolationVrms() < bus) {
-                return fail(Rule.HIGH_SIDE, "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is below the "
+                return fail(c, Rule.HIGH_SIDE, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is below the "
                         + Eng.of(bus, "V") + " bus — pick a driver rated ≥ " + Eng.of(bus * m.isolation(), "V"), cmp);
             }
             if (d.isolationVrms() < bus * m.isolation()) {
-                return new Check(Rule.HIGH_SIDE, Verdict.WARN, "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is less than "
+                return check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is less than "
                         + Eng.num(m.isolation()) + "× the " + Eng.of(bus, "V") + " bus — check the working-voltage rating"
                         + " (VIORM) and creepage for your standard", cmp,
                         Score.warn((d.isolationVrms() - bus) / (bus * (m.isolation() - 1))));
             }
-            return new Check(Rule.HIGH_SIDE, Verdict.PASS, "isolated output, " + Eng.of(d.isolationVrms(), "V")
+            return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "isolated output, " + Eng.of(d.isolationVrms(), "V")
                     + " rms against a " + Eng.of(bus, "V") + " bus; confirm the working-voltage rating for your standard", cmp,
                     Score.pass((d.isolationVrms() / (bus * m.isolation()) - 1)));
         }
         if (Double.isNaN(d.vOffsetMax())) {
-            return unknown(Rule.HIGH_SIDE, "this driver's floating offset rating (v_offset_max_v) is unknown");
+            return unknown(c, Rule.HIGH_SIDE, () -> "this driver's floating offset rating (v_offset_max_v) is unknown");
         }
         if (Double.isNaN(bus)) {
-            return unknown(Rule.HIGH_SIDE, "bus voltage not given — give --bus or bus_v to check the "
+            return unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
                     + Eng.of(d.vOffsetMax(), "V") + " offset rating");
         }
         double need = bus * (1 + m.offset());
         List<Comparison> cmp = List.of(new Comparison("floating offset rating", d.vOffsetMax(), "≥", need, "V"));
         if (d.vOffsetMax() < bus) {
-            return fail(Rule.HIGH_SIDE, "offset rating " + Eng.of(d.vOffsetMax(), "V") + " is below the " + Eng.of(bus, "V")
+            return fail(c, Rule.HIGH_SIDE, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " is below the " + Eng.of(bus, "V")
                     + " bus — pick a driver rated ≥ " + Eng.of(need, "V"), cmp);
         }
         if (d.vOffsetMax() < need) {
-            return new Check(Rule.HIGH_SIDE, Verdict.WARN, "offset rating " + Eng.of(d.vOffsetMax(), "V") + " leaves less than "
+            return check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " leaves less than "
                     + Eng.pct(m.offset()) + " above the " + Eng.of(bus, "V") + " bus for switch-node overshoot — pick a driver"
                     + " rated ≥ " + Eng.of(need, "V") + " or measure the overshoot", cmp,
                     Score.warn((d.vOffsetMax() - bus) / (need - bus)));
         }
-        return new Check(Rule.HIGH_SIDE, Verdict.PASS, "offset rating " + Eng.of(d.vOffsetMax(), "V") + " covers the "
+        return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " covers the "
                 + Eng.of(bus, "V") + " bus with " + Eng.pct(d.vOffsetMax() / bus - 1) + " to spare", cmp,
                 Score.pass(d.vOffsetMax() / need - 1));
     }
@@ -461,59 +475,59 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         OperatingPoint op = c.op;
         if (!op.highSide()) {
-            return new Check(Rule.BOOTSTRAP, Verdict.PASS, "low side: no bootstrap supply needed", List.of(), Score.pass(1));
+            return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "low side: no bootstrap supply needed", List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(Rule.BOOTSTRAP, "a low-side driver has no floating supply to bootstrap — pick a high-side,"
+            return fail(c, Rule.BOOTSTRAP, () -> "a low-side driver has no floating supply to bootstrap — pick a high-side,"
                     + " half-bridge or isolated driver", List.of());
         }
         if (!d.topology().bootstrapped()) {
-            return new Check(Rule.BOOTSTRAP, Verdict.PASS, "isolated output: it needs its own isolated supply of "
+            return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "isolated output: it needs its own isolated supply of "
                     + Eng.of(op.swing(), "V") + " (no bootstrap, no duty limit)", List.of(), Score.pass(1));
         }
         if (Double.isNaN(c.bootDroop)) {
-            return unknown(Rule.BOOTSTRAP, "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
+            return unknown(c, Rule.BOOTSTRAP, () -> "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
         }
         List<Comparison> cmp = new ArrayList<>();
         cmp.add(new Comparison("allowed droop (V_drive − V_F − UVLO,off)", c.bootDroop, "≥", 0, "V"));
         if (c.bootDroop <= 0) {
-            return fail(Rule.BOOTSTRAP, "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
+            return fail(c, Rule.BOOTSTRAP, () -> "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
                     + " is already at or below the high side's " + Eng.of(c.bootFloor, "V") + " limit, so no capacitor helps"
                     + " — raise V_drive or pick a driver with a lower UVLO", cmp);
         }
-        String sizing = "C_boot ≥ " + Eng.of(c.bootCMin, "F") + " for " + Eng.of(c.bootCharge, "C") + " per cycle at "
+        String sizing = c.detail ? ("C_boot ≥ " + Eng.of(c.bootCMin, "F") + " for " + Eng.of(c.bootCharge, "C") + " per cycle at "
                 + Eng.of(c.bootDroop, "V") + " droop; use " + Eng.of(c.bootCRec, "F")
                 + (op.bootAssumed() ? " (V_F " + Eng.of(op.diodeDrop(), "V") + ", R_boot " + Eng.of(op.rBoot(), "Ω")
-                + " assumed)" : "");
-        String diode = Boolean.FALSE.equals(d.bootstrapDiode()) ? ", with an external fast diode rated ≥ "
-                + Eng.of(Double.isNaN(op.bus()) ? Double.NaN : op.bus() * 1.2, "V") : "";
+                + " assumed)" : "")) : "";
+        String diode = c.detail ? (Boolean.FALSE.equals(d.bootstrapDiode()) ? ", with an external fast diode rated ≥ "
+                + Eng.of(Double.isNaN(op.bus()) ? Double.NaN : op.bus() * 1.2, "V") : "") : "";
         cmp.add(new Comparison("duty cycle", op.dutyMax(), "≤", c.bootDutyMax, "1"));
         if (!Double.isNaN(op.dutyMax()) && op.dutyMax() >= 1) {
-            return fail(Rule.BOOTSTRAP, "100 % duty is impossible with a bootstrap supply (it recharges only while the low"
+            return fail(c, Rule.BOOTSTRAP, () -> "100 % duty is impossible with a bootstrap supply (it recharges only while the low"
                     + " side is on) — cap the duty at " + Eng.pct(c.bootDutyMax) + " or use an isolated supply", cmp);
         }
         if (!Double.isNaN(op.dutyMax()) && op.dutyMax() > c.bootDutyMax) {
-            return fail(Rule.BOOTSTRAP, "duty " + Eng.pct(op.dutyMax()) + " leaves too little low-side time to recharge "
+            return fail(c, Rule.BOOTSTRAP, () -> "duty " + Eng.pct(op.dutyMax()) + " leaves too little low-side time to recharge "
                     + Eng.of(c.bootCRec, "F") + " through " + Eng.of(op.rBoot(), "Ω") + " (allowed " + Eng.pct(c.bootDutyMax)
                     + ") — lower the duty, the frequency or the bootstrap resistance", cmp);
         }
         if (Double.isNaN(op.dutyMax())) {
-            return new Check(Rule.BOOTSTRAP, Verdict.UNKNOWN, sizing + diode + "; duty not given — the bootstrap allows at most "
+            return check(c, Rule.BOOTSTRAP, Verdict.UNKNOWN, () -> sizing + diode + "; duty not given — the bootstrap allows at most "
                     + Eng.pct(c.bootDutyMax) + " (give --duty-max or duty_max)", cmp, Score.UNKNOWN);
         }
         if (c.bootBelowFull) {
             double full = fullEnhancement(c.s);
-            return new Check(Rule.BOOTSTRAP, Verdict.WARN, "the bootstrap gives the high side at most "
+            return check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> "the bootstrap gives the high side at most "
                     + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F), below the " + Eng.of(full, "V")
                     + " full-enhancement level, so its conduction loss is higher than the low side's; " + sizing
                     + " against UVLO,off " + Eng.of(c.bootFloor, "V") + diode + " — raise V_drive to ≥ "
                     + Eng.of(full + op.diodeDrop(), "V") + " or use an isolated supply", cmp, Score.warn(0.5));
         }
         if (Boolean.FALSE.equals(d.bootstrapDiode()) && Double.isNaN(op.bus())) {
-            return new Check(Rule.BOOTSTRAP, Verdict.WARN, sizing + ", with an external fast diode rated above the bus"
+            return check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> sizing + ", with an external fast diode rated above the bus"
                     + " (bus not given)", cmp, Score.warn(0.5));
         }
-        return new Check(Rule.BOOTSTRAP, Verdict.PASS, sizing + diode + "; duty " + Eng.pct(op.dutyMax()) + " ≤ "
+        return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> sizing + diode + "; duty " + Eng.pct(op.dutyMax()) + " ≤ "
                 + Eng.pct(c.bootDutyMax) + " allowed", cmp, Score.pass((c.bootDutyMax - op.dutyMax()) * 5));
     }
 
@@ -522,26 +536,26 @@ public final class PairEvaluator {
     static Check driverPower(Calc c, Margins m) {
         DriverPart d = c.d;
         if (Double.isNaN(c.pDriver)) {
-            return unknown(Rule.DRIVER_POWER, "gate charge unknown, so driver dissipation cannot be estimated");
+            return unknown(c, Rule.DRIVER_POWER, () -> "gate charge unknown, so driver dissipation cannot be estimated");
         }
-        String est = Eng.of(c.pDriver, "W") + " in the driver (of " + Eng.of(c.pGate, "W") + " gate-drive power at "
+        String est = c.detail ? (Eng.of(c.pDriver, "W") + " in the driver (of " + Eng.of(c.pGate, "W") + " gate-drive power at "
                 + Eng.of(c.op.fSw(), "Hz") + (c.rSrcEstimated || c.rSnkEstimated ? ", output resistance estimated as V/I_peak" : "")
-                + ")";
+                + ")") : "";
         if (Double.isNaN(d.pMax())) {
-            return unknown(Rule.DRIVER_POWER, est + "; the package limit (p_max_w) is unknown — check it against the datasheet");
+            return unknown(c, Rule.DRIVER_POWER, () -> est + "; the package limit (p_max_w) is unknown — check it against the datasheet");
         }
         double allowed = d.pMax() * m.driverPower();
         List<Comparison> cmp = List.of(new Comparison("driver dissipation", c.pDriver, "≤", allowed, "W"));
         if (c.pDriver > d.pMax()) {
-            return fail(Rule.DRIVER_POWER, est + " exceeds its " + Eng.of(d.pMax(), "W") + " package limit — add external gate"
+            return fail(c, Rule.DRIVER_POWER, () -> est + " exceeds its " + Eng.of(d.pMax(), "W") + " package limit — add external gate"
                     + " resistance to move loss out of the driver, lower the frequency, or add a buffer stage", cmp);
         }
         if (c.pDriver > allowed) {
-            return new Check(Rule.DRIVER_POWER, Verdict.WARN, est + " uses more than " + Eng.pct(m.driverPower()) + " of its "
+            return check(c, Rule.DRIVER_POWER, Verdict.WARN, () -> est + " uses more than " + Eng.pct(m.driverPower()) + " of its "
                     + Eng.of(d.pMax(), "W") + " limit — check the temperature rise at your ambient", cmp,
                     Score.warn((d.pMax() - c.pDriver) / (d.pMax() - allowed)));
         }
-        return new Check(Rule.DRIVER_POWER, Verdict.PASS, est + ", within " + Eng.pct(m.driverPower()) + " of its "
+        return check(c, Rule.DRIVER_POWER, Verdict.PASS, () -> est + ", within " + Eng.pct(m.driverPower()) + " of its "
                 + Eng.of(d.pMax(), "W") + " limit", cmp, Score.pass(allowed / Math.max(c.pDriver, 1e-12) - 1));
     }
 
@@ -550,31 +564,31 @@ public final class PairEvaluator {
     static Check dvdt(Calc c, Margins m) {
         SwitchPart s = c.s;
         if (Double.isNaN(s.cRss()) || Double.isNaN(s.vThMin())) {
-            return unknown(Rule.DV_DT, "C_rss or V_th,min of the switch unknown, so Miller-induced turn-on cannot be judged");
+            return unknown(c, Rule.DV_DT, () -> "C_rss or V_th,min of the switch unknown, so Miller-induced turn-on cannot be judged");
         }
         if (Double.isNaN(c.slew)) {
-            return unknown(Rule.DV_DT, "switch-node dv/dt unknown (give --bus, or --dvdt, and the switch's Q_gd and plateau)");
+            return unknown(c, Rule.DV_DT, () -> "switch-node dv/dt unknown (give --bus, or --dvdt, and the switch's Q_gd and plateau)");
         }
         double limit = s.vThMin() * m.dvdt();
         double seen = c.vInduced + c.op.vDriveNeg();
         List<Comparison> cmp = List.of(new Comparison("induced gate voltage + off level", seen, "≤", limit, "V"));
         boolean clamp = Boolean.TRUE.equals(c.d.millerClamp());
-        String what = "at " + Eng.of(c.slew * 1e-9, "V") + "/ns the Miller current lifts the off gate to " + Eng.of(seen, "V")
-                + " (through " + Eng.of(c.rOffPath, "Ω") + ") against V_th,min " + Eng.of(s.vThMin(), "V");
+        String what = c.detail ? ("at " + Eng.of(c.slew * 1e-9, "V") + "/ns the Miller current lifts the off gate to " + Eng.of(seen, "V")
+                + " (through " + Eng.of(c.rOffPath, "Ω") + ") against V_th,min " + Eng.of(s.vThMin(), "V")) : "";
         if (seen >= s.vThMin()) {
             if (clamp) {
-                return new Check(Rule.DV_DT, Verdict.WARN, what + "; this driver's Miller clamp should hold it — verify on the bench",
+                return check(c, Rule.DV_DT, Verdict.WARN, () -> what + "; this driver's Miller clamp should hold it — verify on the bench",
                         cmp, Score.warn(0.3));
             }
-            return fail(Rule.DV_DT, what + ", so it may turn on falsely — lower R_g,off, add a negative off level or use a driver"
+            return fail(c, Rule.DV_DT, () -> what + ", so it may turn on falsely — lower R_g,off, add a negative off level or use a driver"
                     + " with a Miller clamp (allowed " + Eng.of(c.dvdtAllowed * 1e-9, "V") + "/ns as is)", cmp);
         }
         if (seen > limit) {
-            return new Check(Rule.DV_DT, Verdict.WARN, what + ", less than " + Eng.pct(1 - m.dvdt()) + " below it — lower R_g,off"
+            return check(c, Rule.DV_DT, Verdict.WARN, () -> what + ", less than " + Eng.pct(1 - m.dvdt()) + " below it — lower R_g,off"
                     + " or add negative bias" + (clamp ? " (the Miller clamp helps)" : ""), cmp,
                     Score.warn((s.vThMin() - seen) / (s.vThMin() - limit)));
         }
-        return new Check(Rule.DV_DT, Verdict.PASS, what + ", well below it", cmp, Score.pass((limit - seen) / limit));
+        return check(c, Rule.DV_DT, Verdict.PASS, () -> what + ", well below it", cmp, Score.pass((limit - seen) / limit));
     }
 
     // ---------------------------------------------------------------- lifecycle
@@ -619,12 +633,24 @@ public final class PairEvaluator {
 
     // ---------------------------------------------------------------- helpers
 
-    private static Check fail(Rule r, String msg, List<Comparison> cmp) {
-        return new Check(r, Verdict.FAIL, msg, cmp, 0);
-    }
-
     private static Check unknown(Rule r, String msg) {
         return new Check(r, Verdict.UNKNOWN, msg, List.of(), Score.UNKNOWN);
+    }
+
+    /**
+     * A check whose sentence and comparisons are built only when the pair is shown: ranking a
+     * large catalog evaluates every verdict and score but words only the pairs it lists.
+     */
+    private static Check check(Calc c, Rule r, Verdict v, Supplier<String> msg, List<Comparison> cmp, double score) {
+        return new Check(r, v, c.detail ? msg.get() : "", c.detail ? cmp : List.of(), score);
+    }
+
+    private static Check fail(Calc c, Rule r, Supplier<String> msg, List<Comparison> cmp) {
+        return check(c, r, Verdict.FAIL, msg, cmp, 0);
+    }
+
+    private static Check unknown(Calc c, Rule r, Supplier<String> msg) {
+        return check(c, r, Verdict.UNKNOWN, msg, List.of(), Score.UNKNOWN);
     }
 
     private static double nz(double v) {
@@ -633,6 +659,8 @@ public final class PairEvaluator {
 
     /** The pair's figures, computed once and shared by the rules. */
     static final class Calc {
+        /** Whether checks get their sentences and comparisons (false while ranking). */
+        final boolean detail;
         final DriverPart d;
         final SwitchPart s;
         final OperatingPoint op;
@@ -678,7 +706,8 @@ public final class PairEvaluator {
         double vInduced = Double.NaN;
         double dvdtAllowed = Double.NaN;
 
-        Calc(DriverPart d, SwitchPart s, OperatingPoint op) {
+        Calc(DriverPart d, SwitchPart s, OperatingPoint op, boolean detail) {
+            this.detail = detail;
             this.d = d;
             this.s = s;
             this.op = op;

@@ -81,7 +81,7 @@ public final class Shortlist {
         private final int top;
         private final boolean all;
         private final List<String> prefilterUsed;
-        private final java.util.PriorityQueue<PairResult> best;
+        private final java.util.PriorityQueue<Ranked> best;
         private int pass;
         private int warn;
         private int fail;
@@ -96,13 +96,18 @@ public final class Shortlist {
             this.top = top;
             this.all = all;
             this.prefilterUsed = List.copyOf(prefilterUsed);
-            this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1, RANKING.reversed());
+            this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1,
+                    java.util.Comparator.comparing(Ranked::result, RANKING).reversed());
+        }
+
+        /** A driver with its verdict and score, before its checks are worded. */
+        private record Ranked(DriverPart driver, PairResult result) {
         }
 
         @Override
         public void accept(Row r) {
             DriverPart d = DriverPart.of(r);
-            PairResult pr = PairEvaluator.evaluate(d, sw, op, m).withPrice(d.price());
+            PairResult pr = PairEvaluator.rank(d, sw, op, m).withPrice(d.price());
             switch (pr.verdict()) {
                 case PASS -> pass++;
                 case WARN, UNKNOWN -> warn++;
@@ -111,14 +116,18 @@ public final class Shortlist {
             if (!all && pr.verdict() == Verdict.FAIL) {
                 return;
             }
-            best.add(pr);
+            best.add(new Ranked(d, pr));
             if (best.size() > top) {
                 best.poll();
             }
         }
 
+        /** The best drivers, best first, each evaluated in full (sentences, comparisons, figures). */
         public Result result() {
-            List<PairResult> out = new ArrayList<>(best);
+            List<PairResult> out = new ArrayList<>(best.size());
+            for (Ranked x : best) {
+                out.add(PairEvaluator.evaluate(x.driver(), sw, op, m).withPrice(x.driver().price()));
+            }
             out.sort(RANKING);
             return new Result(sw, op, m, out, pass + warn + fail, pass, warn, fail, prefilterUsed);
         }

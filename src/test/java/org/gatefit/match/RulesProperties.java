@@ -115,6 +115,23 @@ class RulesProperties {
         }
     }
 
+    @Property(tries = 500)
+    void rankingModeGivesTheSameVerdictsAndScoresAsTheFullEvaluation(@ForAll("drivers") DriverPart d,
+            @ForAll("switches") SwitchPart s, @ForAll("points") OperatingPoint.Spec spec) {
+        // The shortlist ranks with PairEvaluator.rank (no sentences) and words only the pairs it shows;
+        // the two must agree on everything that decides the order.
+        OperatingPoint op = spec.resolve(s);
+        PairResult full = PairEvaluator.evaluate(d, s, op, Margins.DEFAULT);
+        PairResult quick = PairEvaluator.rank(d, s, op, Margins.DEFAULT);
+        assertEquals(full.verdict(), quick.verdict());
+        assertEquals(full.score(), quick.score(), 0.0);
+        for (int i = 0; i < full.checks().size(); i++) {
+            assertEquals(full.checks().get(i).rule(), quick.checks().get(i).rule());
+            assertEquals(full.checks().get(i).verdict(), quick.checks().get(i).verdict(), full.checks().get(i).rule().id());
+            assertEquals(full.checks().get(i).score(), quick.checks().get(i).score(), 0.0);
+        }
+    }
+
     @Provide
     Arbitrary<List<DriverPart>> driverLists() {
         return drivers().list().ofMinSize(2).ofMaxSize(30);
