@@ -21,10 +21,12 @@ import java.util.regex.Pattern;
  * @param defaultFrom  name of another column whose value is used when this one is empty, or null
  * @param description  one line for documentation and help
  * @param example      an example value for messages, or null
+ * @param wordsOnly    a long free text searched by its words only: not compared with --where or sorted
  */
 public record Column(String name, ColumnType type, Unit unit, boolean required, List<String> choices,
                      Pattern pattern, Double minimum, boolean minExclusive, Double maximum,
-                     String defaultValue, String defaultFrom, String description, String example) {
+                     String defaultValue, String defaultFrom, String description, String example,
+                     boolean wordsOnly) {
 
     public Column {
         Objects.requireNonNull(name, "name");

@@ -24,7 +24,9 @@ import java.util.regex.Pattern;
  * <p>Besides standard keywords ({@code type}, {@code enum}, {@code pattern}, {@code minimum},
  * {@code exclusiveMinimum}, {@code maximum}, {@code default}, {@code required}, {@code examples})
  * the files use two annotations of ours: {@code x-unit} (the unit of a number, e.g. {@code nC})
- * and {@code x-default-from} (the column whose value fills an empty cell).
+ * {@code x-default-from} (the column whose value fills an empty cell) and {@code x-words-only}
+ * (a free text searched by its words, not compared or sorted, so the index keeps no exact term or
+ * sort value for it).
  */
 public final class Schema {
     /** Classpath folder of the bundled schema files. */
@@ -109,7 +111,7 @@ public final class Schema {
         String example = p.has("examples") && p.get("examples").size() > 0 ? p.get("examples").get(0).asText() : null;
         Pattern pattern = p.has("pattern") ? Pattern.compile(p.get("pattern").asText()) : null;
         return new Column(name, type, unit, required, choices, pattern, min, minEx, max, def, defFrom,
-                p.path("description").asText(""), example);
+                p.path("description").asText(""), example, p.path("x-words-only").asBoolean(false));
     }
 
     public Kind kind() {

@@ -41,6 +41,9 @@ public final class SchemaDoc {
         if (c.defaultValue() != null) {
             parts.add("default `" + c.defaultValue() + "`");
         }
+        if (c.wordsOnly()) {
+            parts.add("searched by words only");
+        }
         if (c.defaultFrom() != null) {
             parts.add("default: `" + c.defaultFrom() + "`");
         }

@@ -175,8 +175,8 @@ public final class Catalog implements AutoCloseable {
 
     /**
      * Streams the parts of a kind that match {@code filter}, built from doc values only (no
-     * stored-field loads), for engines that evaluate every candidate. Extra columns are not
-     * included; source file and line are left empty.
+     * stored-field loads), for engines that evaluate every candidate. Extra columns and
+     * words-only text (description) are not included; source file and line are left empty.
      */
     public long scan(Kind kind, Query filter, java.util.function.Consumer<Row> sink) throws IOException {
         if (searcher == null) {
@@ -202,7 +202,7 @@ public final class Catalog implements AutoCloseable {
                 Column c = cols.get(i);
                 dv[i] = switch (c.type()) {
                     case NUMBER, INTEGER -> lr.getNumericDocValues(c.name());
-                    case TEXT, CHOICE -> lr.getSortedDocValues(c.name());
+                    case TEXT, CHOICE -> c.wordsOnly() ? null : lr.getSortedDocValues(c.name());
                 };
             }
             DocIdSetIterator it = sc.iterator();

@@ -54,9 +54,10 @@ final class Documents {
                 }
                 case TEXT, CHOICE -> {
                     String s = (String) v;
-                    String key = s.toLowerCase(Locale.ROOT);
-                    d.add(new StringField(n, key, Field.Store.NO));
-                    d.add(new SortedDocValuesField(n, new BytesRef(s)));
+                    if (!c.wordsOnly()) {
+                        d.add(new StringField(n, s.toLowerCase(Locale.ROOT), Field.Store.NO));
+                        d.add(new SortedDocValuesField(n, new BytesRef(s)));
+                    }
                     d.add(new StoredField(n, s));
                     if (c.type() == org.gatefit.catalog.ColumnType.TEXT) {
                         all.append(s).append(' ');

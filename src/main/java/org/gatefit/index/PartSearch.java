@@ -162,6 +162,10 @@ public final class PartSearch {
 
     private static void addCondition(BooleanQuery.Builder q, Column col, Condition c) throws BadValueException {
         String n = col.name();
+        if (col.wordsOnly()) {
+            throw new BadValueException("--where " + n + ": " + n + " is searched by its words (find WORDS), not compared"
+                    + " (expected a column other than " + n + ")");
+        }
         Object v;
         try {
             v = Cells.parse(col, c.value(), false);
@@ -231,6 +235,9 @@ public final class PartSearch {
             s = s.substring(0, colon).strip();
         }
         Column col = column(kind, s);
+        if (col.wordsOnly()) {
+            throw new BadValueException("--sort " + s + ": " + s + " is free text and cannot be sorted (expected another column)");
+        }
         SortField f = switch (col.type()) {
             case NUMBER -> {
                 SortField sf = new SortField(col.name(), SortField.Type.DOUBLE, desc);
