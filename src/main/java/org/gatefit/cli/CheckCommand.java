@@ -44,8 +44,8 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--junit", paramLabel = "FILE", description = "Also write a JUnit-XML report (one test case per stage and rule).")
     Path junit;
 
-    @Option(names = "--margin", paramLabel = "NAME=VALUE", description = "Override a margin (repeatable); see 'shortlist --help'.")
-    List<String> margins = new ArrayList<>();
+    @Mixin
+    MarginOptions margins;
 
     @Mixin
     OutputOptions output;
@@ -56,14 +56,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Margins m = Margins.DEFAULT;
-        for (String a : margins) {
-            try {
-                m = m.with(a);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException("--margin: " + e.getMessage());
-            }
-        }
+        Margins m = margins.margins();
         StageCheck.Report report = run(stages, bom, m);
         for (String n : report.bomNotes()) {
             ctx.err.println("warning: " + n);
@@ -100,8 +93,8 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             if (c.isEmpty()) {
                 ctx.err.println("note: the catalog in " + c.directory() + " is empty; every stage will fail the catalog rule");
             }
-            return StageCheck.run(stagesFile.toString(), rows, b, pn -> lookup(c, Kind.DRIVER, pn),
-                    pn -> lookup(c, Kind.SWITCH, pn), m);
+            return StageCheck.run(stagesFile.toString(), rows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
+                    pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
         }
     }
 
@@ -123,11 +116,4 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
         return rows;
     }
 
-    private static Optional<Row> lookup(Catalog c, Kind k, String pn) {
-        try {
-            return c.get(k, pn);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
 }

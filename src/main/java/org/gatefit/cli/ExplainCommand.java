@@ -31,6 +31,9 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
     OperatingPointOptions point;
 
     @Mixin
+    MarginOptions margins;
+
+    @Mixin
     OutputOptions output;
 
     ExplainCommand(Context ctx) {
@@ -44,13 +47,8 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
-            OperatingPoint op;
-            try {
-                op = spec.resolve(sw);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException(e.getMessage());
-            }
-            r = PairEvaluator.evaluate(dr, sw, op, point.margins());
+            OperatingPoint op = PairSupport.resolve(spec, sw);
+            r = PairEvaluator.evaluate(dr, sw, op, margins.margins());
         }
         try (Writer w = output.open(ctx)) {
             MatchReports.explain(r, output.format, w);

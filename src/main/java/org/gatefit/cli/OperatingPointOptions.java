@@ -1,8 +1,6 @@
 package org.gatefit.cli;
 
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.Cells;
@@ -10,7 +8,6 @@ import org.gatefit.catalog.Column;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.catalog.Schema;
-import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
 import picocli.CommandLine.Option;
 
@@ -77,11 +74,6 @@ final class OperatingPointOptions {
             description = "Switch-node slew rate to check, V/ns (default: estimated as bus / turn-on plateau time).")
     String dvdt;
 
-    @Option(names = "--margin", paramLabel = "NAME=VALUE",
-            description = "Override a margin (repeatable): drive-current, gate-headroom, uvlo-headroom, logic-noise, offset,"
-                    + " isolation, driver-power, dv-dt. Defaults are printed with every result.")
-    List<String> margins = new ArrayList<>();
-
     /** The options as a stage-sheet row, parsed exactly as a stage sheet's cells would be. */
     OperatingPoint.Spec spec() throws BadValueException {
         Map<String, String> cells = new LinkedHashMap<>();
@@ -131,18 +123,6 @@ final class OperatingPointOptions {
             }
         }
         return s;
-    }
-
-    Margins margins() throws BadValueException {
-        Margins m = Margins.DEFAULT;
-        for (String a : margins) {
-            try {
-                m = m.with(a);
-            } catch (IllegalArgumentException e) {
-                throw new BadValueException("--margin: " + e.getMessage());
-            }
-        }
-        return m;
     }
 
     private static String optionName(String column) {

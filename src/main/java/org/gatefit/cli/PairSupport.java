@@ -21,6 +21,25 @@ final class PairSupport {
                 : " (try 'gatefit find --kind " + kind + " " + pn.replaceAll("[^A-Za-z0-9]+", " ").strip() + "')")));
     }
 
+    /** A catalog lookup for the engines, which take plain functions. */
+    static java.util.Optional<Row> lookup(Catalog c, Kind k, String pn) {
+        try {
+            return c.get(k, pn);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /** The operating point for a switch, or a usage error naming what is missing or wrong. */
+    static org.gatefit.match.OperatingPoint resolve(org.gatefit.match.OperatingPoint.Spec spec,
+                                                    org.gatefit.match.SwitchPart sw) throws UsageException {
+        try {
+            return spec.resolve(sw);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
     /** The prefilter conditions as a catalog query. */
     static org.apache.lucene.search.Query filter(List<String> conditions) throws BadValueException {
         List<PartSearch.Condition> parsed = new ArrayList<>();

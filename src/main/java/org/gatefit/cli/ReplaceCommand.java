@@ -54,8 +54,8 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--include-obsolete", description = "Also consider obsolete parts.")
     boolean includeObsolete;
 
-    @Option(names = "--margin", paramLabel = "NAME=VALUE", description = "Override a margin (repeatable); see 'shortlist --help'.")
-    List<String> margins = new ArrayList<>();
+    @Mixin
+    MarginOptions margins;
 
     @Mixin
     OutputOptions output;
@@ -72,14 +72,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         if (bom != null && stages == null) {
             throw new UsageException("--bom needs --stages (the BOM resolves the stage sheet's designators)");
         }
-        Margins m = Margins.DEFAULT;
-        for (String a : margins) {
-            try {
-                m = m.with(a);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException("--margin: " + e.getMessage());
-            }
-        }
+        Margins m = margins.margins();
         List<Row> stageRows = List.of();
         Bom b = null;
         if (stages != null) {
@@ -108,7 +101,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
             List<Row> candidates = new ArrayList<>();
             c.scan(original.kind(), PartSearch.filter(original.kind(), pre), candidates::add);
             r = Replacement.run(original, candidates, c.count(original.kind()), top, includeObsolete, stages == null ? "" : stages.toString(),
-                    stageRows, b, pn -> lookup(c, Kind.DRIVER, pn), pn -> lookup(c, Kind.SWITCH, pn), m);
+                    stageRows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn), pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
         }
         try (Writer w = output.open(ctx)) {
             ReplaceReports.render(r, output.format, w);
@@ -116,11 +109,4 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         return ExitCode.OK;
     }
 
-    private static Optional<Row> lookup(Catalog c, Kind k, String pn) {
-        try {
-            return c.get(k, pn);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
 }

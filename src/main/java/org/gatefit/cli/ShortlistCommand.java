@@ -36,6 +36,9 @@ final class ShortlistCommand extends CatalogCommand implements Callable<Integer>
     OperatingPointOptions point;
 
     @Mixin
+    MarginOptions margins;
+
+    @Mixin
     OutputOptions output;
 
     ShortlistCommand(Context ctx) {
@@ -48,17 +51,12 @@ final class ShortlistCommand extends CatalogCommand implements Callable<Integer>
             throw new UsageException("--top: expected at least 1, got " + top);
         }
         OperatingPoint.Spec spec = point.spec();
-        Margins margins = point.margins();
+        Margins m = margins.margins();
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
-            OperatingPoint op;
-            try {
-                op = spec.resolve(sw);
-            } catch (IllegalArgumentException e) {
-                throw new UsageException(e.getMessage());
-            }
+            OperatingPoint op = PairSupport.resolve(spec, sw);
             List<String> pre = Shortlist.prefilter(op);
-            Shortlist.Ranker ranker = new Shortlist.Ranker(sw, op, margins, top, all, all ? List.of() : pre);
+            Shortlist.Ranker ranker = new Shortlist.Ranker(sw, op, m, top, all, all ? List.of() : pre);
             c.scan(Kind.DRIVER, all ? null : PairSupport.filter(pre), ranker);
             Shortlist.Result r = ranker.result();
             try (Writer w = output.open(ctx)) {
