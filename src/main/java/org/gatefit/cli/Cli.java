@@ -7,6 +7,7 @@ import java.util.Map;
 import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.index.CatalogBusyException;
+import org.gatefit.report.Format;
 import picocli.CommandLine;
 
 /** Builds the command line; {@code main} and the tests both use {@link #create}. */
@@ -34,6 +35,10 @@ public final class Cli {
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpWidth(100);
+        cl.setExecutionStrategy(parsed -> {
+            rejectHtml(parsed);
+            return new CommandLine.RunLast().execute(parsed);
+        });
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> handle(ex, cmd, top.verbose));
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
@@ -53,6 +58,21 @@ public final class Cli {
         out.flush();
         err.flush();
         return code;
+    }
+
+    /** {@code --format html} on a command without an HTML report is a usage error (exit 2), before any work. */
+    private static void rejectHtml(CommandLine.ParseResult parsed) {
+        CommandLine.ParseResult last = parsed;
+        while (last.hasSubcommand()) {
+            last = last.subcommand();
+        }
+        CommandLine.Model.OptionSpec format = last.commandSpec().findOption("--format");
+        if (format != null && last.hasMatchedOption("--format") && format.getValue() == Format.HTML
+                && !Format.HTML_COMMANDS.contains(last.commandSpec().name())) {
+            throw new CommandLine.ParameterException(last.commandSpec().commandLine(), "--format html is not available"
+                    + " for " + last.commandSpec().name() + "; HTML reports are made by " + String.join(", ",
+                    Format.HTML_COMMANDS));
+        }
     }
 
     private static int handle(Exception ex, CommandLine cmd, boolean verbose) {

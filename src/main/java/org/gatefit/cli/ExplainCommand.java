@@ -10,6 +10,7 @@ import org.gatefit.match.PairEvaluator;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
+import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -41,6 +42,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         OperatingPoint.Spec spec = point.spec();
         PairResult r;
+        GateDrive drive;
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
@@ -51,9 +53,10 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException(e.getMessage());
             }
             r = PairEvaluator.evaluate(dr, sw, op, point.margins());
+            drive = GateDrive.of(sw, r);
         }
         try (Writer w = output.open(ctx)) {
-            MatchReports.explain(r, output.format, w);
+            MatchReports.explain(r, drive, output.format, w);
         }
         return r.verdict() == Verdict.FAIL ? ExitCode.FAILED : ExitCode.OK;
     }

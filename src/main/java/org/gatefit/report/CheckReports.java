@@ -24,10 +24,11 @@ public final class CheckReports {
             case CSV -> csv(r, out);
             case TEXT -> text(r, out, false);
             case MARKDOWN -> text(r, out, true);
+            case HTML -> CheckHtml.render(r, out);
         }
     }
 
-    private static String summary(StageCheck.Report r) {
+    static String summary(StageCheck.Report r) {
         return r.results().size() + " stages checked in " + r.file() + ": " + r.count(Verdict.FAIL) + " failed, "
                 + r.count(Verdict.WARN) + " warned, " + r.count(Verdict.PASS) + " passed";
     }
@@ -93,7 +94,7 @@ public final class CheckReports {
         };
     }
 
-    private static String ref(String ref, String pn) {
+    static String ref(String ref, String pn) {
         if (pn == null) {
             return ref + " (?)";
         }

@@ -29,10 +29,11 @@ public final class MatchReports {
             case CSV -> shortlistCsv(r, out);
             case TEXT -> shortlistText(r, out, false);
             case MARKDOWN -> shortlistText(r, out, true);
+            case HTML -> MatchHtml.shortlist(r, out);
         }
     }
 
-    private static String switchLine(SwitchPart s) {
+    static String switchLine(SwitchPart s) {
         return s.partNumber() + " (" + s.technology() + ", " + Eng.of(s.vBlock(), "V") + ", Q_g " + Eng.of(s.qG(), "C")
                 + (Double.isNaN(s.qGVgs()) ? "" : " at " + Eng.of(s.qGVgs(), "V")) + ", V_GS " + Eng.of(s.vGsMin(), "V")
                 + " to " + Eng.of(s.vGsMax(), "V") + ")";
@@ -119,7 +120,7 @@ public final class MatchReports {
         }
     }
 
-    private static String driveRatio(PairResult p) {
+    static String driveRatio(PairResult p) {
         double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
         double src = p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN);
         double snk = p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN);
@@ -127,14 +128,14 @@ public final class MatchReports {
         return Double.isNaN(ratio) ? "" : Eng.num(ratio) + "×";
     }
 
-    private static String noiseMin(PairResult p) {
+    static String noiseMin(PairResult p) {
         double h = p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN);
         double l = p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN);
         double m = Math.min(h, l);
         return Double.isNaN(m) ? "" : Eng.of(m, "V");
     }
 
-    private static String fig(PairResult p, String name, String unit) {
+    static String fig(PairResult p, String name, String unit) {
         return p.figure(name).map(f -> Eng.of(f.value(), unit)).orElse("");
     }
 
@@ -150,7 +151,7 @@ public final class MatchReports {
         return worst;
     }
 
-    private static String deciding(PairResult p) {
+    static String deciding(PairResult p) {
         Check c = decidingCheck(p);
         return c == null || c.verdict() == Verdict.PASS ? "" : c.rule().id() + " " + c.verdict().id();
     }
@@ -215,7 +216,16 @@ public final class MatchReports {
     // ------------------------------------------------------------------ explain
 
     public static void explain(PairResult p, Format format, Writer out) throws IOException {
+        explain(p, null, format, out);
+    }
+
+    /**
+     * The calculation sheet; {@code drive} (switch and loop resistances) lets the HTML page plot
+     * the gate waveforms and the gate-loop step response, and may be null.
+     */
+    public static void explain(PairResult p, GateDrive drive, Format format, Writer out) throws IOException {
         switch (format) {
+            case HTML -> MatchHtml.explain(p, drive, out);
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
