@@ -171,7 +171,7 @@ final class Charts {
         plot.getRangeAxis().setRange(-1.1, 3.3);
         plot.addRangeMarker(new ValueMarker(0, Color.BLACK, new BasicStroke(1.4f)), Layer.FOREGROUND);
         JFreeChart chart = new JFreeChart(title, TITLE, plot, false);
-        return svg(chart, WIDTH, Math.max(160, 70 + 26 * bars.size()), title);
+        return svg(chart, WIDTH, Math.max(200, 90 + 30 * bars.size()), title);
     }
 
     /** Grouped vertical bars: one group per category, one bar per series. */

@@ -162,13 +162,17 @@ final class Html {
         };
     }
 
-    /** The tightest comparison of a check (smallest margin), or null when none has a margin. */
+    /**
+     * The tightest comparison a check's verdict rests on (smallest margin), or null when none has a
+     * margin. A passing check's comparisons beyond their limit are advisory (the rule passed anyway,
+     * its message says why) and are left out.
+     */
     static Check.Comparison tightest(Check c) {
         Check.Comparison best = null;
         double m = Double.POSITIVE_INFINITY;
         for (Check.Comparison x : c.compared()) {
             double v = margin(x);
-            if (!Double.isNaN(v) && v < m) {
+            if (!Double.isNaN(v) && v < m && !(c.verdict() == org.gatefit.match.Verdict.PASS && v < 0)) {
                 m = v;
                 best = x;
             }
