@@ -15,9 +15,18 @@ public final class Cli {
     private Cli() {
     }
 
-    /** A ready command line writing results to {@code out} and messages to {@code err}. */
+    /** A ready command line writing results to {@code out} and messages to {@code err}, neither a terminal. */
     public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
-        Context ctx = new Context(out, err, env, clock);
+        return create(out, err, env, clock, false);
+    }
+
+    /**
+     * A ready command line; {@code terminal} says the streams are a terminal, which allows verdict
+     * colour (unless {@code NO_COLOR} is set or results go to a file) and progress bars.
+     */
+    public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock,
+                                     boolean terminal) {
+        Context ctx = new Context(out, err, env, clock, terminal);
         GatefitCommand top = new GatefitCommand();
         CommandLine cl = new CommandLine(top);
         cl.addSubcommand("import", new ImportCommand(ctx));
@@ -31,6 +40,7 @@ public final class Cli {
         cl.addSubcommand("check", new CheckCommand(ctx));
         cl.addSubcommand("replace", new ReplaceCommand(ctx));
         cl.addSubcommand("demo", new DemoCommand(ctx));
+        cl.addSubcommand("completion", new CompletionCommand(ctx));
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -54,7 +64,8 @@ public final class Cli {
     public static int run(String... args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
-        int code = create(out, err, System.getenv(), Clock.systemUTC()).execute(args);
+        // System.console() is non-null only when standard input and output are a terminal.
+        int code = create(out, err, System.getenv(), Clock.systemUTC(), System.console() != null).execute(args);
         out.flush();
         err.flush();
         return code;

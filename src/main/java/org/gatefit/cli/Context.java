@@ -15,12 +15,26 @@ final class Context {
     final PrintWriter err;
     final Map<String, String> env;
     final Clock clock;
+    /** Whether the streams are a terminal (a person watching), not a pipe or file: colour and progress bars. */
+    final boolean terminal;
 
-    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
+    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal) {
         this.out = out;
         this.err = err;
         this.env = Map.copyOf(env);
         this.clock = clock;
+        this.terminal = terminal;
+    }
+
+    /** Colour on standard output: a terminal, and {@code NO_COLOR} unset or empty (no-color.org). */
+    boolean colour() {
+        String no = env.get("NO_COLOR");
+        return terminal && (no == null || no.isEmpty());
+    }
+
+    /** A progress bar on standard error, drawn only on a terminal. */
+    Progress progress(String what, long total) {
+        return new Progress(err, terminal, what, total);
     }
 
     /** The per-user data directory's catalog: XDG_DATA_HOME, ~/.local/share, or the platform's equivalent. */

@@ -56,7 +56,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             drive = GateDrive.of(sw, r);
         }
         try (Writer w = output.open(ctx)) {
-            MatchReports.explain(r, drive, output.format, w);
+            MatchReports.explain(r, drive, output.format, output.colour(ctx), w);
         }
         return r.verdict() == Verdict.FAIL ? ExitCode.FAILED : ExitCode.OK;
     }

@@ -40,8 +40,11 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
         for (Path f : files) {
             names.add(f.toString());
         }
-        Importer.Result r = new Importer(dir, ctx.clock).run(files, names,
-                new Importer.Options(kind, replace, rejects), n -> { });
+        long lines = ctx.terminal ? Progress.dataLines(files) : 0;
+        Importer.Result r;
+        try (Progress bar = ctx.progress("rows imported", lines >= Progress.LONG_IMPORT ? lines : 0)) {
+            r = new Importer(dir, ctx.clock).run(files, names, new Importer.Options(kind, replace, rejects), bar::update);
+        }
         for (SheetReader.Summary s : r.files()) {
             if (!s.unknownColumns().isEmpty()) {
                 ctx.err.println("note: " + s.file() + ": columns not in the " + s.kind() + " schema, kept as extra"

@@ -24,11 +24,16 @@ public final class MatchReports {
     // ------------------------------------------------------------------ shortlist
 
     public static void shortlist(Shortlist.Result r, Format format, Writer out) throws IOException {
+        shortlist(r, format, false, out);
+    }
+
+    /** As {@link #shortlist(Shortlist.Result, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
+    public static void shortlist(Shortlist.Result r, Format format, boolean colour, Writer out) throws IOException {
         switch (format) {
             case JSON -> shortlistJson(r, out);
             case CSV -> shortlistCsv(r, out);
-            case TEXT -> shortlistText(r, out, false);
-            case MARKDOWN -> shortlistText(r, out, true);
+            case TEXT -> shortlistText(r, out, false, colour);
+            case MARKDOWN -> shortlistText(r, out, true, false);
             case HTML -> MatchHtml.shortlist(r, out);
         }
     }
@@ -39,7 +44,7 @@ public final class MatchReports {
                 + " to " + Eng.of(s.vGsMax(), "V") + ")";
     }
 
-    private static void shortlistText(Shortlist.Result r, Writer out, boolean md) throws IOException {
+    private static void shortlistText(Shortlist.Result r, Writer out, boolean md, boolean colour) throws IOException {
         String head = "Drivers for " + switchLine(r.switchPart()) + ": " + r.evaluated() + " evaluated, " + r.passing()
                 + " pass, " + r.warning() + " warn, " + r.failing() + " fail";
         out.write(md ? "## " + Markdown.escape(head) + "\n\n" : Wrap.wrap(head, WIDTH, 2) + "\n");
@@ -51,6 +56,9 @@ public final class MatchReports {
         } else {
             TextTable t = new TextTable(List.of("#", "driver", "verdict", "score", "I_pk/I_req", "NM min", "P_driver", "price",
                     "deciding"), true, false, false, true, true, true, true, true, false);
+            if (colour) {
+                t.paint(2, Ansi::paintByWord);
+            }
             int i = 1;
             for (PairResult p : r.candidates()) {
                 t.add(List.of(Integer.toString(i++), p.driver(), p.verdict().id(), Eng.num(p.score()), driveRatio(p),
@@ -224,6 +232,12 @@ public final class MatchReports {
      * the gate waveforms and the gate-loop step response, and may be null.
      */
     public static void explain(PairResult p, GateDrive drive, Format format, Writer out) throws IOException {
+        explain(p, drive, format, false, out);
+    }
+
+    /** As {@link #explain(PairResult, GateDrive, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
+    public static void explain(PairResult p, GateDrive drive, Format format, boolean colour, Writer out)
+            throws IOException {
         switch (format) {
             case HTML -> MatchHtml.explain(p, drive, out);
             case JSON -> {
@@ -252,19 +266,23 @@ public final class MatchReports {
                             f.label() + (f.estimated() ? " (estimate)" : "")));
                 }
             }
-            case TEXT -> explainText(p, out);
+            case TEXT -> explainText(p, out, colour);
             case MARKDOWN -> explainMarkdown(p, out);
         }
     }
 
-    private static void explainText(PairResult p, Writer out) throws IOException {
-        out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": " + p.verdict().id().toUpperCase(java.util.Locale.ROOT)
-                + " (score " + Eng.num(p.score()) + ")\n");
+    private static void explainText(PairResult p, Writer out, boolean colour) throws IOException {
+        String verdict = p.verdict().id().toUpperCase(java.util.Locale.ROOT);
+        out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": "
+                + (colour ? Ansi.paint(p.verdict(), verdict) : verdict) + " (score " + Eng.num(p.score()) + ")\n");
         context(out, false, p.point(), p.margins(), null);
         out.write("\nChecks\n");
         for (Check c : p.checks()) {
             String head = String.format("  %-8s %-14s", "[" + c.verdict().id() + "]", c.rule().id());
-            out.write(head + Wrap.wrap(c.message(), WIDTH, head.length(), head.length()) + "\n");
+            String tag = "[" + c.verdict().id() + "]";
+            out.write((colour ? head.replaceFirst(java.util.regex.Pattern.quote(tag),
+                    java.util.regex.Matcher.quoteReplacement(Ansi.paint(c.verdict(), tag))) : head)
+                    + Wrap.wrap(c.message(), WIDTH, head.length(), head.length()) + "\n");
         }
         out.write("\nFigures\n");
         TextTable t = new TextTable(List.of("figure", "value", "how"), false, true, false);
@@ -273,7 +291,10 @@ public final class MatchReports {
                     f.label() + (f.estimated() ? " (estimate)" : "")));
         }
         out.write(t.render(Integer.MAX_VALUE));
-        out.write("\n" + recommendations(p) + "\n");
+        out.write("\n");
+        for (String line : recommendations(p).lines().toList()) {
+            out.write((line.startsWith("  ") ? "  " + Wrap.wrap(line.strip(), WIDTH, 4, 2) : line) + "\n");
+        }
         out.write(Wrap.wrap(Caution.TEXT, WIDTH, 0) + "\n");
     }
 
