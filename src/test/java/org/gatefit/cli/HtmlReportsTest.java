@@ -128,6 +128,19 @@ class HtmlReportsTest {
         assertTrue(replace.contains("<td>" + esc("Testmaker " + HtmlFixture.SCRIPT) + "</td>"), "candidate maker");
     }
 
+    @Test
+    void withoutAnOutputFileThePageGoesToStandardOutput() throws IOException {
+        String[] args = new String[4 + HtmlFixture.POINT.length + 2];
+        String[] head = {"explain", "--driver", "TST-D06A", "--switch", "TST-G650A"};
+        List<String> all = new java.util.ArrayList<>(List.of(head));
+        all.addAll(List.of(HtmlFixture.POINT));
+        all.addAll(List.of("--format", "html"));
+        CliRun r = CliRun.on(fx.catalog, all.toArray(args));
+        assertEquals(0, r.exit(), r.dump());
+        assertTrue(r.out().startsWith("<!DOCTYPE html>") && r.out().strip().endsWith("</html>"), r.dump());
+        assertEquals(count(fx.html("explain"), "<svg"), count(r.out(), "<svg"));
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"find", "show", "info", "validate", "export"})
     void commandsWithoutAnHtmlReportRejectTheFormatAsAUsageError(String command) throws IOException {
