@@ -62,7 +62,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             ctx.err.println("warning: " + n);
         }
         try (Writer w = output.open(ctx)) {
-            CheckReports.render(report, output.format, w);
+            CheckReports.render(report, output.format, output.colour(ctx), w);
         }
         if (junit != null) {
             Path parent = ctx.path(junit).toAbsolutePath().getParent();
@@ -93,8 +93,10 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             if (c.isEmpty()) {
                 ctx.err.println("note: the catalog in " + c.directory() + " is empty; every stage will fail the catalog rule");
             }
-            return StageCheck.run(stagesFile.toString(), rows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
-                    pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
+            try (Progress bar = ctx.progress("stages checked", rows.size() >= Progress.LONG_CHECK ? rows.size() : 0)) {
+                return StageCheck.run(stagesFile.toString(), rows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
+                        pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m, bar::update);
+            }
         }
     }
 

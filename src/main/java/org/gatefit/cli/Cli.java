@@ -8,6 +8,7 @@ import java.util.Map;
 import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.index.CatalogBusyException;
+import org.gatefit.report.Format;
 import picocli.CommandLine;
 
 /** Builds the command line; {@code main} and the tests both use {@link #create}. */
@@ -15,14 +16,24 @@ public final class Cli {
     private Cli() {
     }
 
-    /** A ready command line writing results to {@code out} and messages to {@code err}. */
+    /** A ready command line writing results to {@code out} and messages to {@code err}, neither a terminal. */
     public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock) {
-        return create(out, err, env, clock, null);
+        return create(out, err, env, clock, false);
     }
 
-    /** As {@link #create(PrintWriter, PrintWriter, Map, Clock)}, with relative paths resolved against {@code workDir}. */
-    static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, Path workDir) {
-        Context ctx = new Context(out, err, env, clock, workDir);
+    /**
+     * A ready command line; {@code terminal} says the streams are a terminal, which allows verdict
+     * colour (unless {@code NO_COLOR} is set or results go to a file) and progress bars.
+     */
+    public static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock,
+                                     boolean terminal) {
+        return create(out, err, env, clock, terminal, null);
+    }
+
+    /** As above, with relative paths resolved against {@code workDir} (the demo runs in a temporary folder). */
+    static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal,
+                              Path workDir) {
+        Context ctx = new Context(out, err, env, clock, terminal, workDir);
         GatefitCommand top = new GatefitCommand();
         CommandLine cl = new CommandLine(top);
         cl.addSubcommand("import", new ImportCommand(ctx));
@@ -36,10 +47,15 @@ public final class Cli {
         cl.addSubcommand("check", new CheckCommand(ctx));
         cl.addSubcommand("replace", new ReplaceCommand(ctx));
         cl.addSubcommand("demo", new DemoCommand(ctx));
+        cl.addSubcommand("completion", new CompletionCommand(ctx));
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setUsageHelpWidth(100);
+        cl.setExecutionStrategy(parsed -> {
+            rejectHtml(parsed);
+            return new CommandLine.RunLast().execute(parsed);
+        });
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> handle(ex, cmd, top.verbose));
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
@@ -55,10 +71,26 @@ public final class Cli {
     public static int run(String... args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
-        int code = create(out, err, System.getenv(), Clock.systemUTC()).execute(args);
+        // System.console() is non-null only when standard input and output are a terminal.
+        int code = create(out, err, System.getenv(), Clock.systemUTC(), System.console() != null).execute(args);
         out.flush();
         err.flush();
         return code;
+    }
+
+    /** {@code --format html} on a command without an HTML report is a usage error (exit 2), before any work. */
+    private static void rejectHtml(CommandLine.ParseResult parsed) {
+        CommandLine.ParseResult last = parsed;
+        while (last.hasSubcommand()) {
+            last = last.subcommand();
+        }
+        CommandLine.Model.OptionSpec format = last.commandSpec().findOption("--format");
+        if (format != null && last.hasMatchedOption("--format") && format.getValue() == Format.HTML
+                && !Format.HTML_COMMANDS.contains(last.commandSpec().name())) {
+            throw new CommandLine.ParameterException(last.commandSpec().commandLine(), "--format html is not available"
+                    + " for " + last.commandSpec().name() + "; HTML reports are made by " + String.join(", ",
+                    Format.HTML_COMMANDS));
+        }
     }
 
     private static int handle(Exception ex, CommandLine cmd, boolean verbose) {

@@ -15,20 +15,34 @@ final class Context {
     final PrintWriter err;
     final Map<String, String> env;
     final Clock clock;
+    /** Whether the streams are a terminal (a person watching), not a pipe or file: colour and progress bars. */
+    final boolean terminal;
     /** Folder that relative paths are resolved against; null for the process's working directory. */
     final Path workDir;
 
-    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, Path workDir) {
+    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal, Path workDir) {
         this.out = out;
         this.err = err;
         this.env = Map.copyOf(env);
         this.clock = clock;
+        this.terminal = terminal;
         this.workDir = workDir;
     }
 
     /** A path as typed, resolved against {@link #workDir} when that is set and the path is relative. */
     Path path(Path p) {
         return p == null || workDir == null || p.isAbsolute() ? p : workDir.resolve(p);
+    }
+
+    /** Colour on standard output: a terminal, and {@code NO_COLOR} unset or empty (no-color.org). */
+    boolean colour() {
+        String no = env.get("NO_COLOR");
+        return terminal && (no == null || no.isEmpty());
+    }
+
+    /** A progress bar on standard error, drawn only on a terminal. */
+    Progress progress(String what, long total) {
+        return new Progress(err, terminal, what, total);
     }
 
     /** The per-user data directory's catalog: XDG_DATA_HOME, ~/.local/share, or the platform's equivalent. */

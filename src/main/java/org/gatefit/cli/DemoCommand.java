@@ -97,7 +97,7 @@ final class DemoCommand implements Callable<Integer> {
         ctx.out.flush();
         List<String> full = new ArrayList<>(List.of("--catalog", catalog.getFileName().toString()));
         full.addAll(List.of(args));
-        CommandLine cl = Cli.create(ctx.out, ctx.err, ctx.env, ctx.clock, catalog.getParent());
+        CommandLine cl = Cli.create(ctx.out, ctx.err, ctx.env, ctx.clock, ctx.terminal, catalog.getParent());
         int code = cl.execute(full.toArray(String[]::new));
         ctx.out.println();
         ctx.out.flush();

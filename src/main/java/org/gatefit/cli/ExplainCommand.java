@@ -10,6 +10,7 @@ import org.gatefit.match.PairEvaluator;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
+import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -44,14 +45,16 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         OperatingPoint.Spec spec = point.spec();
         PairResult r;
+        GateDrive drive;
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
             r = PairEvaluator.evaluate(dr, sw, op, margins.margins());
+            drive = GateDrive.of(sw, r);
         }
         try (Writer w = output.open(ctx)) {
-            MatchReports.explain(r, output.format, w);
+            MatchReports.explain(r, drive, output.format, output.colour(ctx), w);
         }
         return r.verdict() == Verdict.FAIL ? ExitCode.FAILED : ExitCode.OK;
     }

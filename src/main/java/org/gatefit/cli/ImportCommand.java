@@ -42,8 +42,12 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
             names.add(f.toString());
             paths.add(ctx.path(f));
         }
-        Importer.Result r = new Importer(dir, ctx.clock).run(paths, names,
-                new Importer.Options(kind, replace, ctx.path(rejects)), n -> { });
+        long lines = ctx.terminal ? Progress.dataLines(paths) : 0;
+        Importer.Result r;
+        try (Progress bar = ctx.progress("rows imported", lines >= Progress.LONG_IMPORT ? lines : 0)) {
+            r = new Importer(dir, ctx.clock).run(paths, names, new Importer.Options(kind, replace, ctx.path(rejects)),
+                    bar::update);
+        }
         for (SheetReader.Summary s : r.files()) {
             if (!s.unknownColumns().isEmpty()) {
                 ctx.err.println("note: " + s.file() + ": columns not in the " + s.kind() + " schema, kept as extra"

@@ -6,6 +6,8 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        // HTML reports draw charts with AWT; never with a display (set before AWT could load).
+        System.setProperty("java.awt.headless", "true");
         System.exit(Cli.run(args));
     }
 }

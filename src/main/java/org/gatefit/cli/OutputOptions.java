@@ -19,6 +19,11 @@ final class OutputOptions {
             description = "Write results to FILE instead of standard output.")
     Path output;
 
+    /** Whether text verdicts get ANSI colour: text to standard output on a terminal, NO_COLOR unset. */
+    boolean colour(Context ctx) {
+        return format == Format.TEXT && output == null && ctx.colour();
+    }
+
     /** Where results go; closing it closes the file but never standard output. */
     Writer open(Context ctx) throws IOException {
         return open(ctx, output);

@@ -60,7 +60,7 @@ final class ShortlistCommand extends CatalogCommand implements Callable<Integer>
             c.scan(Kind.DRIVER, all ? null : PairSupport.filter(pre), ranker);
             Shortlist.Result r = ranker.result();
             try (Writer w = output.open(ctx)) {
-                MatchReports.shortlist(r, output.format, w);
+                MatchReports.shortlist(r, output.format, output.colour(ctx), w);
             }
         }
         return ExitCode.OK;

@@ -85,12 +85,19 @@ public final class StageCheck {
      */
     public static Report run(String file, List<Row> stages, Bom bom, Function<String, Optional<Row>> drivers,
                              Function<String, Optional<Row>> switches, Margins m) {
+        return run(file, stages, bom, drivers, switches, m, n -> { });
+    }
+
+    /** As {@link #run(String, List, Bom, Function, Function, Margins)}, telling {@code progress} the stages done so far. */
+    public static Report run(String file, List<Row> stages, Bom bom, Function<String, Optional<Row>> drivers,
+                             Function<String, Optional<Row>> switches, Margins m, java.util.function.IntConsumer progress) {
         Map<String, Optional<Row>> driverCache = new HashMap<>();
         Map<String, Optional<Row>> switchCache = new HashMap<>();
         List<StageResult> out = new ArrayList<>(stages.size());
         for (Row st : stages) {
             out.add(one(st, bom, pn -> driverCache.computeIfAbsent(pn, drivers),
                     pn -> switchCache.computeIfAbsent(pn, switches), m));
+            progress.accept(out.size());
         }
         out = deadTime(out, pn -> driverCache.computeIfAbsent(pn, drivers));
         return new Report(file, out, bom == null ? List.of() : bom.notes(), m);

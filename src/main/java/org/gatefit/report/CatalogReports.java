@@ -59,6 +59,7 @@ public final class CatalogReports {
                     }
                 }
             }
+            case HTML -> throw Format.noHtml("validate");
             case TEXT, MARKDOWN -> {
                 for (SheetReader.Summary s : files) {
                     String what = s.kind() == null ? "?" : s.kind().id();
@@ -135,6 +136,7 @@ public final class CatalogReports {
                     out.write(Csv.line(r.time().toString(), r.file(), r.kind(), Long.toString(r.rows()), r.mode(), r.sha256()));
                 }
             }
+            case HTML -> throw Format.noHtml("info");
             case TEXT, MARKDOWN -> {
                 boolean md = format == Format.MARKDOWN;
                 out.write((md ? "**Catalog:** " : "catalog:  ") + (md ? Markdown.escape(dir.toString()) : dir) + "\n");

@@ -19,20 +19,26 @@ public final class CheckReports {
     }
 
     public static void render(StageCheck.Report r, Format format, Writer out) throws IOException {
+        render(r, format, false, out);
+    }
+
+    /** As {@link #render(StageCheck.Report, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
+    public static void render(StageCheck.Report r, Format format, boolean colour, Writer out) throws IOException {
         switch (format) {
             case JSON -> json(r, out);
             case CSV -> csv(r, out);
-            case TEXT -> text(r, out, false);
-            case MARKDOWN -> text(r, out, true);
+            case TEXT -> text(r, out, false, colour);
+            case MARKDOWN -> text(r, out, true, false);
+            case HTML -> CheckHtml.render(r, out);
         }
     }
 
-    private static String summary(StageCheck.Report r) {
+    static String summary(StageCheck.Report r) {
         return r.results().size() + " stages checked in " + r.file() + ": " + r.count(Verdict.FAIL) + " failed, "
                 + r.count(Verdict.WARN) + " warned, " + r.count(Verdict.PASS) + " passed";
     }
 
-    private static void text(StageCheck.Report r, Writer out, boolean md) throws IOException {
+    private static void text(StageCheck.Report r, Writer out, boolean md, boolean colour) throws IOException {
         out.write(md ? "## " + Markdown.escape(summary(r)) + "\n\n" : summary(r) + "\n");
         out.write((md ? "- **Margins:** " + Markdown.escape(MatchJson.marginsLine(r.margins()))
                 : Wrap.wrap("Margins: " + MatchJson.marginsLine(r.margins()), WIDTH, 4)) + "\n");
@@ -42,6 +48,9 @@ public final class CheckReports {
         out.write("\n");
         TextTable t = new TextTable(List.of("stage", "verdict", "score", "driver", "switch", "failing / warning rules"),
                 false, false, true, false, false, false);
+        if (colour) {
+            t.paint(1, Ansi::paintByWord);
+        }
         for (StageCheck.StageResult s : r.results()) {
             List<String> bad = new ArrayList<>();
             for (Check c : s.checks()) {
@@ -93,7 +102,7 @@ public final class CheckReports {
         };
     }
 
-    private static String ref(String ref, String pn) {
+    static String ref(String ref, String pn) {
         if (pn == null) {
             return ref + " (?)";
         }

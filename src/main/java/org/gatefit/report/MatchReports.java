@@ -24,21 +24,27 @@ public final class MatchReports {
     // ------------------------------------------------------------------ shortlist
 
     public static void shortlist(Shortlist.Result r, Format format, Writer out) throws IOException {
+        shortlist(r, format, false, out);
+    }
+
+    /** As {@link #shortlist(Shortlist.Result, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
+    public static void shortlist(Shortlist.Result r, Format format, boolean colour, Writer out) throws IOException {
         switch (format) {
             case JSON -> shortlistJson(r, out);
             case CSV -> shortlistCsv(r, out);
-            case TEXT -> shortlistText(r, out, false);
-            case MARKDOWN -> shortlistText(r, out, true);
+            case TEXT -> shortlistText(r, out, false, colour);
+            case MARKDOWN -> shortlistText(r, out, true, false);
+            case HTML -> MatchHtml.shortlist(r, out);
         }
     }
 
-    private static String switchLine(SwitchPart s) {
+    static String switchLine(SwitchPart s) {
         return s.partNumber() + " (" + s.technology() + ", " + Eng.of(s.vBlock(), "V") + ", Q_g " + Eng.of(s.qG(), "C")
                 + (Double.isNaN(s.qGVgs()) ? "" : " at " + Eng.of(s.qGVgs(), "V")) + ", V_GS " + Eng.of(s.vGsMin(), "V")
                 + " to " + Eng.of(s.vGsMax(), "V") + ")";
     }
 
-    private static void shortlistText(Shortlist.Result r, Writer out, boolean md) throws IOException {
+    private static void shortlistText(Shortlist.Result r, Writer out, boolean md, boolean colour) throws IOException {
         String head = "Drivers for " + switchLine(r.switchPart()) + ": " + r.evaluated() + " evaluated, " + r.passing()
                 + " pass, " + r.warning() + " warn, " + r.failing() + " fail";
         out.write(md ? "## " + Markdown.escape(head) + "\n\n" : Wrap.wrap(head, WIDTH, 2) + "\n");
@@ -50,6 +56,9 @@ public final class MatchReports {
         } else {
             TextTable t = new TextTable(List.of("#", "driver", "verdict", "score", "I_pk/I_req", "NM min", "P_driver", "price",
                     "deciding"), true, false, false, true, true, true, true, true, false);
+            if (colour) {
+                t.paint(2, Ansi::paintByWord);
+            }
             int i = 1;
             for (PairResult p : r.candidates()) {
                 t.add(List.of(Integer.toString(i++), p.driver(), p.verdict().id(), Eng.num(p.score()), driveRatio(p),
@@ -119,7 +128,7 @@ public final class MatchReports {
         }
     }
 
-    private static String driveRatio(PairResult p) {
+    static String driveRatio(PairResult p) {
         double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
         double src = p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN);
         double snk = p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN);
@@ -127,14 +136,14 @@ public final class MatchReports {
         return Double.isNaN(ratio) ? "" : Eng.num(ratio) + "×";
     }
 
-    private static String noiseMin(PairResult p) {
+    static String noiseMin(PairResult p) {
         double h = p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN);
         double l = p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN);
         double m = Math.min(h, l);
         return Double.isNaN(m) ? "" : Eng.of(m, "V");
     }
 
-    private static String fig(PairResult p, String name, String unit) {
+    static String fig(PairResult p, String name, String unit) {
         return p.figure(name).map(f -> Eng.of(f.value(), unit)).orElse("");
     }
 
@@ -150,7 +159,7 @@ public final class MatchReports {
         return worst;
     }
 
-    private static String deciding(PairResult p) {
+    static String deciding(PairResult p) {
         Check c = decidingCheck(p);
         return c == null || c.verdict() == Verdict.PASS ? "" : c.rule().id() + " " + c.verdict().id();
     }
@@ -215,7 +224,22 @@ public final class MatchReports {
     // ------------------------------------------------------------------ explain
 
     public static void explain(PairResult p, Format format, Writer out) throws IOException {
+        explain(p, null, format, out);
+    }
+
+    /**
+     * The calculation sheet; {@code drive} (switch and loop resistances) lets the HTML page plot
+     * the gate waveforms and the gate-loop step response, and may be null.
+     */
+    public static void explain(PairResult p, GateDrive drive, Format format, Writer out) throws IOException {
+        explain(p, drive, format, false, out);
+    }
+
+    /** As {@link #explain(PairResult, GateDrive, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
+    public static void explain(PairResult p, GateDrive drive, Format format, boolean colour, Writer out)
+            throws IOException {
         switch (format) {
+            case HTML -> MatchHtml.explain(p, drive, out);
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
@@ -242,19 +266,23 @@ public final class MatchReports {
                             f.label() + (f.estimated() ? " (estimate)" : "")));
                 }
             }
-            case TEXT -> explainText(p, out);
+            case TEXT -> explainText(p, out, colour);
             case MARKDOWN -> explainMarkdown(p, out);
         }
     }
 
-    private static void explainText(PairResult p, Writer out) throws IOException {
-        out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": " + p.verdict().id().toUpperCase(java.util.Locale.ROOT)
-                + " (score " + Eng.num(p.score()) + ")\n");
+    private static void explainText(PairResult p, Writer out, boolean colour) throws IOException {
+        String verdict = p.verdict().id().toUpperCase(java.util.Locale.ROOT);
+        out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": "
+                + (colour ? Ansi.paint(p.verdict(), verdict) : verdict) + " (score " + Eng.num(p.score()) + ")\n");
         context(out, false, p.point(), p.margins(), null);
         out.write("\nChecks\n");
         for (Check c : p.checks()) {
             String head = String.format("  %-8s %-14s", "[" + c.verdict().id() + "]", c.rule().id());
-            out.write(head + Wrap.wrap(c.message(), WIDTH, head.length(), head.length()) + "\n");
+            String tag = "[" + c.verdict().id() + "]";
+            out.write((colour ? head.replaceFirst(java.util.regex.Pattern.quote(tag),
+                    java.util.regex.Matcher.quoteReplacement(Ansi.paint(c.verdict(), tag))) : head)
+                    + Wrap.wrap(c.message(), WIDTH, head.length(), head.length()) + "\n");
         }
         out.write("\nFigures\n");
         TextTable t = new TextTable(List.of("figure", "value", "how"), false, true, false);
@@ -263,7 +291,10 @@ public final class MatchReports {
                     f.label() + (f.estimated() ? " (estimate)" : "")));
         }
         out.write(t.render(Integer.MAX_VALUE));
-        out.write("\n" + recommendations(p) + "\n");
+        out.write("\n");
+        for (String line : recommendations(p).lines().toList()) {
+            out.write((line.startsWith("  ") ? "  " + Wrap.wrap(line.strip(), WIDTH, 4, 2) : line) + "\n");
+        }
         out.write(Wrap.wrap(Caution.TEXT, WIDTH, 0) + "\n");
     }
 

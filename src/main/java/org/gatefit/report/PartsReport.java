@@ -66,6 +66,7 @@ public final class PartsReport {
                     csv(k, parts, out, false);
                 }
             }
+            case HTML -> throw Format.noHtml("find");
             case TEXT, MARKDOWN -> {
                 if (parts.isEmpty()) {
                     out.write(format == Format.MARKDOWN ? "_No parts match._\n" : "No parts match.\n");
@@ -107,6 +108,7 @@ public final class PartsReport {
                 out.write('\n');
             }
             case CSV -> csv(r.kind(), List.of(r), out, false);
+            case HTML -> throw Format.noHtml("show");
             case TEXT, MARKDOWN -> {
                 Schema s = Schema.of(r.kind());
                 TextTable t = new TextTable(List.of("column", "value", "unit", "meaning"));

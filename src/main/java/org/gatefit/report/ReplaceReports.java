@@ -22,10 +22,11 @@ public final class ReplaceReports {
             case CSV -> csv(r, out);
             case TEXT -> text(r, out, false);
             case MARKDOWN -> text(r, out, true);
+            case HTML -> ReplaceHtml.render(r, out);
         }
     }
 
-    private static String head(Replacement.Result r) {
+    static String head(Replacement.Result r) {
         String life = r.original().text("lifecycle");
         double stock = r.original().number("stock");
         return "Substitutes for " + r.kind() + " " + r.part() + " (" + r.original().text("pinout") + ", " + life
@@ -82,7 +83,7 @@ public final class ReplaceReports {
         out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
     }
 
-    private static int count(Replacement.Candidate c, String assessment) {
+    static int count(Replacement.Candidate c, String assessment) {
         return (int) c.differences().stream().filter(d -> d.assessment().equals(assessment)).count();
     }
 

@@ -11,6 +11,8 @@ public final class TextTable {
     private final List<String> headers;
     private final boolean[] right;
     private final List<List<String>> rows = new ArrayList<>();
+    private int paintColumn = -1;
+    private java.util.function.UnaryOperator<String> painter = java.util.function.UnaryOperator.identity();
 
     public TextTable(List<String> headers, boolean... rightAligned) {
         this.headers = List.copyOf(headers);
@@ -25,6 +27,16 @@ public final class TextTable {
             throw new IllegalArgumentException("expected " + headers.size() + " cells, got " + cells.size());
         }
         rows.add(List.copyOf(cells));
+        return this;
+    }
+
+    /**
+     * Decorates the cells of one column (after padding is worked out, so escape codes take no
+     * width), e.g. ANSI colour for verdicts on a terminal.
+     */
+    public TextTable paint(int column, java.util.function.UnaryOperator<String> p) {
+        this.paintColumn = column;
+        this.painter = p;
         return this;
     }
 
@@ -63,19 +75,20 @@ public final class TextTable {
             total--;
         }
         StringBuilder sb = new StringBuilder();
-        line(sb, headers, w, new boolean[n]);
+        line(sb, headers, w, new boolean[n], -1, null);
         List<String> rule = new ArrayList<>();
         for (int x : w) {
             rule.add("-".repeat(x));
         }
-        line(sb, rule, w, new boolean[n]);
+        line(sb, rule, w, new boolean[n], -1, null);
         for (List<String> r : rows) {
-            line(sb, r, w, right);
+            line(sb, r, w, right, paintColumn, painter);
         }
         return sb.toString();
     }
 
-    private static void line(StringBuilder sb, List<String> cells, int[] w, boolean[] right) {
+    private static void line(StringBuilder sb, List<String> cells, int[] w, boolean[] right, int paintColumn,
+                             java.util.function.UnaryOperator<String> painter) {
         StringBuilder l = new StringBuilder();
         for (int i = 0; i < cells.size(); i++) {
             String c = cells.get(i);
@@ -86,7 +99,8 @@ public final class TextTable {
             if (i > 0) {
                 l.append("  ");
             }
-            l.append(right[i] ? pad + c : c + (i == cells.size() - 1 ? "" : pad));
+            String shown = i == paintColumn && !c.isEmpty() ? painter.apply(c) : c;
+            l.append(right[i] ? pad + shown : shown + (i == cells.size() - 1 ? "" : pad));
         }
         sb.append(l.toString().stripTrailing()).append('\n');
     }

@@ -1,0 +1,207 @@
+package org.gatefit.report;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import org.gatefit.match.Check;
+import org.gatefit.match.Eng;
+import org.gatefit.match.Figure;
+import org.gatefit.match.Verdict;
+
+/**
+ * Building blocks of the self-contained HTML reports: the page (inline CSS, a Content-Security-Policy
+ * that forbids every fetch, print layout), escaping, verdict badges, check and figure tables, and
+ * margin bars. Every piece of text from outside (catalog, stage sheet, BOM) goes through
+ * {@link #esc}.
+ */
+final class Html {
+    /** Nothing may be fetched: no scripts, fonts, images or styles from anywhere; inline CSS and data: images only. */
+    static final String CSP = "default-src 'none'; style-src 'unsafe-inline'; img-src data:";
+
+    private static final String CSS = """
+            :root { color-scheme: light; }
+            body { font-family: system-ui, -apple-system, "Segoe UI", Roboto, "DejaVu Sans", sans-serif; color: #1b1b1b;
+              margin: 2rem auto; max-width: 960px; padding: 0 1rem; line-height: 1.45; }
+            h1 { font-size: 1.5rem; margin-bottom: .25rem; } h2 { font-size: 1.2rem; margin-top: 2rem;
+              border-bottom: 1px solid #ccc; padding-bottom: .2rem; } h3 { font-size: 1.05rem; margin-top: 1.5rem; }
+            table { border-collapse: collapse; width: 100%; margin: .5rem 0 1rem; font-size: .9rem; }
+            th, td { border-bottom: 1px solid #e2e2e2; padding: .3rem .5rem; text-align: left; vertical-align: top; }
+            th { background: #f3f4f6; font-weight: 600; } td.num { text-align: right; font-variant-numeric: tabular-nums;
+              white-space: nowrap; }
+            .v { font-weight: 700; white-space: nowrap; padding: .05rem .4rem; border-radius: .25rem; border: 1px solid; }
+            .v-pass { color: #1a7f37; background: #e9f7ee; } .v-warn { color: #8a4500; background: #fff3e0; }
+            .v-unknown { color: #555; background: #f0f0f0; } .v-fail { color: #b71c1c; background: #fdecea; }
+            .v-grade { color: #1f4e9a; background: #eaf1fb; }
+            dl.ctx { display: grid; grid-template-columns: max-content 1fr; gap: .15rem 1rem; font-size: .9rem; }
+            dl.ctx dt { font-weight: 600; } dl.ctx dd { margin: 0; }
+            figure { margin: 1rem 0; } figure svg { width: 100%; height: auto; display: block; }
+            figcaption { font-size: .85rem; color: #444; margin-top: .25rem; }
+            .est { color: #8a4500; font-size: .8rem; } .note { color: #444; font-size: .9rem; }
+            .caution { border: 2px solid #b71c1c; background: #fff8f7; padding: .6rem .8rem; margin: 1.5rem 0;
+              font-weight: 600; }
+            .summary { font-size: 1.05rem; } .muted { color: #666; }
+            a { color: #1f4e9a; }
+            @page { margin: 14mm 12mm; }
+            @media print {
+              body { margin: 0; max-width: none; font-size: 10pt; }
+              h2 { break-after: avoid; } figure, tr, .caution { break-inside: avoid; }
+              section.stage { break-before: page; } a { color: inherit; text-decoration: none; }
+              th { background: #eee !important; -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+              .v { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+            }
+            """;
+
+    private Html() {
+    }
+
+    /** Escapes text for HTML element content and quoted attribute values; drops control characters. */
+    static String esc(String s) {
+        if (s == null) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder(s.length() + 16);
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '<' -> sb.append("&lt;");
+                case '>' -> sb.append("&gt;");
+                case '&' -> sb.append("&amp;");
+                case '"' -> sb.append("&quot;");
+                case '\'' -> sb.append("&#39;");
+                default -> {
+                    if (c >= 0x20 || c == '\n' || c == '\t') {
+                        sb.append(c);
+                    }
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    /** The document head and the start of the body. */
+    static void begin(Writer out, String title) throws IOException {
+        out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
+                + "<meta http-equiv=\"Content-Security-Policy\" content=\"" + CSP + "\">\n"
+                + "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n"
+                + "<meta name=\"generator\" content=\"gatefit\">\n"
+                + "<title>" + esc(title) + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n");
+    }
+
+    /** The caution and the end of the document. */
+    static void end(Writer out) throws IOException {
+        out.write("<p class=\"caution\" role=\"note\">" + esc(Caution.TEXT) + "</p>\n"
+                + "<p class=\"muted\">Made by gatefit. Charts drawn with JFreeChart into SVG.</p>\n</body>\n</html>\n");
+    }
+
+    /** A verdict as colour, symbol and word, so it reads in grey print and without colour vision. */
+    static String verdict(Verdict v) {
+        return "<span class=\"v v-" + v.id() + "\">" + esc(CheckReports.symbol(v)) + "</span>";
+    }
+
+    /** A definition list of context lines (label, text). */
+    static String context(List<String[]> lines) {
+        StringBuilder sb = new StringBuilder("<dl class=\"ctx\">\n");
+        for (String[] l : lines) {
+            sb.append("<dt>").append(esc(l[0])).append("</dt><dd>").append(esc(l[1])).append("</dd>\n");
+        }
+        return sb.append("</dl>\n").toString();
+    }
+
+    /** A figure with an inline chart and a caption. */
+    static String figure(String svg, String caption) {
+        return "<figure>\n" + svg + "\n<figcaption>" + esc(caption) + "</figcaption>\n</figure>\n";
+    }
+
+    /** The checks: rule, verdict (badge), what was compared, message. */
+    static String checks(List<Check> checks) {
+        StringBuilder sb = new StringBuilder("<table class=\"checks\">\n<thead><tr><th>rule</th><th>verdict</th>"
+                + "<th>compared (value vs limit)</th><th>why</th></tr></thead>\n<tbody>\n");
+        for (Check c : checks) {
+            List<String> cmp = new ArrayList<>();
+            for (Check.Comparison x : c.compared()) {
+                cmp.add(esc(x.quantity() + ": " + Eng.of(x.value(), x.unit()) + " " + x.relation() + " "
+                        + Eng.of(x.limit(), x.unit())));
+            }
+            sb.append("<tr><td>").append(esc(c.rule().id())).append("</td><td>").append(verdict(c.verdict()))
+                    .append("</td><td>").append(String.join("<br>", cmp)).append("</td><td>").append(esc(c.message()))
+                    .append("</td></tr>\n");
+        }
+        return sb.append("</tbody>\n</table>\n").toString();
+    }
+
+    /** The calculation table: figure, value with unit, formula, estimate flag. */
+    static String figures(List<Figure> figures) {
+        StringBuilder sb = new StringBuilder("<table class=\"figures\">\n<thead><tr><th>figure</th><th>value</th>"
+                + "<th>how</th><th>estimate</th></tr></thead>\n<tbody>\n");
+        for (Figure f : figures) {
+            sb.append("<tr><td>").append(esc(f.name())).append("</td><td class=\"num\">")
+                    .append(esc(Eng.of(f.value(), f.unit().equals("1") ? "" : f.unit()))).append("</td><td>")
+                    .append(esc(f.label())).append("</td><td>")
+                    .append(f.estimated() ? "<span class=\"est\">≈ estimate</span>" : "").append("</td></tr>\n");
+        }
+        return sb.append("</tbody>\n</table>\n").toString();
+    }
+
+    /**
+     * How far a comparison sits inside its limit, as a fraction of the limit: (value − limit) / |limit|
+     * for ≥, (limit − value) / |limit| for ≤ (|value| when the limit is 0); 0 at the limit, negative
+     * beyond it; NaN when a side is unknown or the relation is not an inequality.
+     */
+    static double margin(Check.Comparison c) {
+        double v = c.value();
+        double l = c.limit();
+        if (!Double.isFinite(v) || !Double.isFinite(l)) {
+            return Double.NaN;
+        }
+        double scale = l != 0 ? Math.abs(l) : Math.abs(v) > 0 ? Math.abs(v) : 1;
+        return switch (c.relation()) {
+            case "≥", ">" -> (v - l) / scale;
+            case "≤", "<" -> (l - v) / scale;
+            default -> Double.NaN;
+        };
+    }
+
+    /**
+     * The tightest comparison a check's verdict rests on (smallest margin), or null when none has a
+     * margin. A passing check's comparisons beyond their limit are advisory (the rule passed anyway,
+     * its message says why) and are left out.
+     */
+    static Check.Comparison tightest(Check c) {
+        Check.Comparison best = null;
+        double m = Double.POSITIVE_INFINITY;
+        for (Check.Comparison x : c.compared()) {
+            double v = margin(x);
+            if (!Double.isNaN(v) && v < m && !(c.verdict() == org.gatefit.match.Verdict.PASS && v < 0)) {
+                m = v;
+                best = x;
+            }
+        }
+        return best;
+    }
+
+    /** One margin bar per rule that compared figures: its tightest comparison. */
+    static List<Charts.Bar> marginBars(List<Check> checks) {
+        List<Charts.Bar> bars = new ArrayList<>();
+        for (Check c : checks) {
+            Check.Comparison x = tightest(c);
+            if (x != null) {
+                bars.add(new Charts.Bar(c.rule().id() + ": " + x.quantity() + " " + Eng.of(x.value(), x.unit()) + " "
+                        + x.relation() + " " + Eng.of(x.limit(), x.unit()), margin(x), c.verdict()));
+            }
+        }
+        return bars;
+    }
+
+    /** The margin chart of a pair's checks, or a note when no rule compared figures. */
+    static String marginChart(String title, List<Check> checks) {
+        List<Charts.Bar> bars = marginBars(checks);
+        if (bars.isEmpty()) {
+            return "<p class=\"note\">No rule compared figures (parts missing or data unknown).</p>\n";
+        }
+        return figure(Charts.margins(title, "margin against the limit (0 = at the limit, 1 = 100 % to spare)", bars),
+                "Each bar is a rule's tightest comparison: how far the value sits inside its limit, as a fraction of"
+                        + " the limit. Bars left of the black line are beyond the limit. Colour follows the verdict;"
+                        + " the tables say it in words.");
+    }
+}
