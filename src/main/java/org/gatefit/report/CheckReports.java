@@ -217,25 +217,9 @@ public final class CheckReports {
         out.write("  </testsuite>\n</testsuites>\n");
     }
 
-    /** Escapes text for XML attributes and content; drops characters XML 1.0 cannot hold. */
+    /** Escapes text for XML attributes and content (the same rules as HTML); drops characters XML 1.0 cannot hold. */
     static String xml(String s) {
-        StringBuilder sb = new StringBuilder(s.length());
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '<' -> sb.append("&lt;");
-                case '>' -> sb.append("&gt;");
-                case '&' -> sb.append("&amp;");
-                case '"' -> sb.append("&quot;");
-                case '\'' -> sb.append("&apos;");
-                default -> {
-                    if (c >= 0x20 || c == '\n' || c == '\t' || c == '\r') {
-                        sb.append(c);
-                    }
-                }
-            }
-        }
-        return sb.toString();
+        return Html.esc(s);
     }
 
 }

@@ -110,15 +110,7 @@ public final class MatchReports {
 
     private static void context(Writer out, boolean md, org.gatefit.match.OperatingPoint p,
                                 org.gatefit.match.Margins m, List<String> prefilter) throws IOException {
-        List<String[]> lines = new ArrayList<>();
-        lines.add(new String[] {"Operating point", MatchJson.pointLine(p)});
-        for (String a : p.assumed()) {
-            lines.add(new String[] {"Assumed", a});
-        }
-        lines.add(new String[] {"Margins", MatchJson.marginsLine(m)});
-        if (prefilter != null && !prefilter.isEmpty()) {
-            lines.add(new String[] {"Prefilter", String.join("; ", prefilter) + " (drivers outside these must fail)"});
-        }
+        List<String[]> lines = MatchHtml.context(p, m, prefilter);
         for (String[] l : lines) {
             if (md) {
                 out.write("- **" + l[0] + ":** " + Markdown.escape(l[1]) + "\n");
