@@ -229,7 +229,7 @@ public final class SyntheticCatalog {
         row.put("q_gd_nc", num(qgd, 2));
         row.put("v_plateau_v", num(plateau, 2));
         row.put("c_iss_pf", num(qg * 1000 / (on - off) * (0.8 + r.nextDouble() * 0.4), 0));
-        row.put("c_rss_pf", num(qgd * 1000 / (vBlock / 2) * 3 + 1, 1));
+        row.put("c_rss_pf", num(qgd * 1000 / vBlock * 0.5 + 0.2, 1)); // C_rss at V_DS,max / 2 is well below Q_gd / V
         row.put("r_g_int_ohm", num(rgInt, 2));
         row.put("description", "synthetic " + tech + " " + num(vBlock, 0) + " V bench part");
     }
