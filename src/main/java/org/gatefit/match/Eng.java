@@ -8,11 +8,33 @@ import java.util.Locale;
 public final class Eng {
     private static final String[] PREFIX = {"f", "p", "n", "µ", "m", "", "k", "M", "G"};
 
+    /**
+     * Set while a pair is evaluated only for its verdict and score ({@link PairEvaluator#rankOnly}):
+     * the words are then thrown away, so numbers are not formatted (the formatting is most of the
+     * cost of a rule).
+     */
+    private static final ThreadLocal<boolean[]> QUIET = ThreadLocal.withInitial(() -> new boolean[1]);
+
     private Eng() {
+    }
+
+    /** Runs {@code body} with formatting switched off on this thread (every call returns "·"). */
+    static <T> T quietly(java.util.function.Supplier<T> body) {
+        boolean[] q = QUIET.get();
+        boolean was = q[0];
+        q[0] = true;
+        try {
+            return body.get();
+        } finally {
+            q[0] = was;
+        }
     }
 
     /** A value with an SI prefix and unit; "unknown" for NaN; the unit {@code 1} prints as a plain number. */
     public static String of(double v, String unit) {
+        if (QUIET.get()[0]) {
+            return "·";
+        }
         if (Double.isNaN(v)) {
             return "unknown";
         }
@@ -40,6 +62,9 @@ public final class Eng {
 
     /** Three significant digits, trailing zeros dropped. */
     public static String num(double v) {
+        if (QUIET.get()[0]) {
+            return "·";
+        }
         if (v == 0) {
             return "0";
         }

@@ -29,6 +29,14 @@ public final class PairEvaluator {
     private PairEvaluator() {
     }
 
+    /**
+     * The pair's verdict and score only, as {@link #evaluate} gives them, with the messages left
+     * unworded (placeholders): for ranking many candidates of which few are shown.
+     */
+    static PairResult rankOnly(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        return Eng.quietly(() -> evaluate(d, s, op, m));
+    }
+
     /** All checks and figures of a pair. */
     public static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
         if (!s.nChannel()) {

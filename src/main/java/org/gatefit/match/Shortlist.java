@@ -102,15 +102,20 @@ public final class Shortlist {
         @Override
         public void accept(Row r) {
             DriverPart d = DriverPart.of(r);
-            PairResult pr = PairEvaluator.evaluate(d, sw, op, m).withPrice(d.price());
-            switch (pr.verdict()) {
+            // Verdict and score first, unworded; the words only for a pair that enters the best.
+            PairResult quick = PairEvaluator.rankOnly(d, sw, op, m).withPrice(d.price());
+            switch (quick.verdict()) {
                 case PASS -> pass++;
                 case WARN, UNKNOWN -> warn++;
                 case FAIL -> fail++;
             }
-            if (!all && pr.verdict() == Verdict.FAIL) {
+            if (!all && quick.verdict() == Verdict.FAIL) {
                 return;
             }
+            if (best.size() >= top && RANKING.compare(quick, best.peek()) >= 0) {
+                return; // not better than the worst kept: it would be polled at once
+            }
+            PairResult pr = PairEvaluator.evaluate(d, sw, op, m).withPrice(d.price());
             best.add(pr);
             if (best.size() > top) {
                 best.poll();
