@@ -218,7 +218,7 @@ public final class Catalog implements AutoCloseable {
             }
             DocIdSetIterator it = sc.iterator();
             for (int doc = it.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = it.nextDoc()) {
-                Map<String, Object> values = new LinkedHashMap<>(cols.size() * 2); // no rehash per row
+                LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2); // no rehash per row
                 for (int i = 0; i < cols.size(); i++) {
                     Column c = cols.get(i);
                     Object o = dv[i];
@@ -253,7 +253,7 @@ public final class Catalog implements AutoCloseable {
                 if (key == null) {
                     continue;
                 }
-                sink.accept(new Row(kind, key.toString(), "", 0, values, Map.of()));
+                sink.accept(new Row(kind, key.toString(), "", 0, Row.owned(values), Map.of()));
                 n++;
             }
         }
