@@ -23,12 +23,50 @@ public record Row(Kind kind, String key, String file, long line, Map<String, Obj
     public Row {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(key, "key");
-        values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
+        values = values instanceof Owned ? values : Collections.unmodifiableMap(new LinkedHashMap<>(values));
         extras = Collections.unmodifiableMap(new LinkedHashMap<>(extras));
         for (Object v : values.values()) {
             if (!(v instanceof String || v instanceof Double || v instanceof Long)) {
                 throw new IllegalArgumentException("expected String, Double or Long values, got " + v);
             }
+        }
+    }
+
+    /**
+     * Hands a freshly built map to a row without the defensive copy (for scans that build a row
+     * per document): the caller gives up the map and must not change it afterwards. The row sees it
+     * read-only, in its insertion order.
+     */
+    public static Map<String, Object> owned(LinkedHashMap<String, Object> values) {
+        return new Owned(values);
+    }
+
+    /** A read-only map over a map nobody else holds (see {@link #owned}). */
+    private static final class Owned extends java.util.AbstractMap<String, Object> {
+        private final Map<String, Object> map;
+
+        Owned(LinkedHashMap<String, Object> map) {
+            this.map = Collections.unmodifiableMap(map);
+        }
+
+        @Override
+        public Object get(Object key) {
+            return map.get(key);
+        }
+
+        @Override
+        public boolean containsKey(Object key) {
+            return map.containsKey(key);
+        }
+
+        @Override
+        public int size() {
+            return map.size();
+        }
+
+        @Override
+        public java.util.Set<Map.Entry<String, Object>> entrySet() {
+            return map.entrySet();
         }
     }
 

@@ -6,7 +6,6 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
-import java.util.EnumMap;
 import java.util.HashSet;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
@@ -32,7 +31,9 @@ public final class Schema {
     /** Classpath folder of the bundled schema files. */
     public static final String RESOURCE_DIR = "/org/gatefit/catalog/schema/";
 
-    private static final Map<Kind, Schema> CACHE = new EnumMap<>(Kind.class);
+    /** Loaded schemas by kind ordinal: read without a lock on every lookup (hot in scans), loaded once under one. */
+    private static final java.util.concurrent.atomic.AtomicReferenceArray<Schema> CACHE =
+            new java.util.concurrent.atomic.AtomicReferenceArray<>(Kind.values().length);
 
     private final Kind kind;
     private final List<Column> columns;
@@ -49,18 +50,27 @@ public final class Schema {
     }
 
     /** The bundled schema of a kind. */
-    public static synchronized Schema of(Kind kind) {
-        return CACHE.computeIfAbsent(kind, k -> {
-            String res = RESOURCE_DIR + k.id() + ".schema.json";
-            try (InputStream in = Schema.class.getResourceAsStream(res)) {
-                if (in == null) {
-                    throw new IllegalStateException("schema resource missing from the build: " + res);
-                }
-                return parse(k, new ObjectMapper().readTree(in));
-            } catch (IOException e) {
-                throw new UncheckedIOException("cannot read " + res, e);
+    public static Schema of(Kind kind) {
+        Schema s = CACHE.get(kind.ordinal());
+        return s != null ? s : load(kind);
+    }
+
+    private static synchronized Schema load(Kind k) {
+        Schema s = CACHE.get(k.ordinal());
+        if (s != null) {
+            return s;
+        }
+        String res = RESOURCE_DIR + k.id() + ".schema.json";
+        try (InputStream in = Schema.class.getResourceAsStream(res)) {
+            if (in == null) {
+                throw new IllegalStateException("schema resource missing from the build: " + res);
             }
-        });
+            s = parse(k, new ObjectMapper().readTree(in));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + res, e);
+        }
+        CACHE.set(k.ordinal(), s);
+        return s;
     }
 
     /** Builds a schema from a parsed JSON Schema document. */

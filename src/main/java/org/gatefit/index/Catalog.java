@@ -51,6 +51,9 @@ import org.gatefit.catalog.Row;
  * try-with-resources; an empty or missing directory reads as an empty catalog.
  */
 public final class Catalog implements AutoCloseable {
+    /** Largest number of distinct values per segment whose texts {@link #scan} keeps decoded. */
+    private static final int ORD_CACHE_MAX = 4096;
+
     private final Path dir;
     private final Directory directory;
     private final DirectoryReader reader;
@@ -198,6 +201,9 @@ public final class Catalog implements AutoCloseable {
             }
             LeafReader lr = leaf.reader();
             Object[] dv = new Object[cols.size()];
+            // Text of each ord, decoded once per leaf: maker, package, topology, lifecycle and the
+            // like repeat across most rows (unique columns such as part_number are decoded per row).
+            String[][] ordText = new String[cols.size()][];
             for (int i = 0; i < cols.size(); i++) {
                 Column c = cols.get(i);
                 dv[i] = switch (c.type()) {
@@ -205,9 +211,14 @@ public final class Catalog implements AutoCloseable {
                     case TEXT, CHOICE -> c.wordsOnly() ? null : lr.getSortedDocValues(c.name());
                 };
             }
+            for (int i = 0; i < cols.size(); i++) {
+                if (dv[i] instanceof SortedDocValues sd && sd.getValueCount() <= ORD_CACHE_MAX) {
+                    ordText[i] = new String[sd.getValueCount()];
+                }
+            }
             DocIdSetIterator it = sc.iterator();
             for (int doc = it.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = it.nextDoc()) {
-                Map<String, Object> values = new LinkedHashMap<>();
+                LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2); // no rehash per row
                 for (int i = 0; i < cols.size(); i++) {
                     Column c = cols.get(i);
                     Object o = dv[i];
@@ -225,7 +236,16 @@ public final class Catalog implements AutoCloseable {
                             sd.advance(doc);
                         }
                         if (sd.docID() == doc) {
-                            values.put(c.name(), sd.lookupOrd(sd.ordValue()).utf8ToString());
+                            int ord = sd.ordValue();
+                            String[] cache = ordText[i];
+                            String text = cache == null ? null : cache[ord];
+                            if (text == null) {
+                                text = sd.lookupOrd(ord).utf8ToString();
+                                if (cache != null) {
+                                    cache[ord] = text;
+                                }
+                            }
+                            values.put(c.name(), text);
                         }
                     }
                 }
@@ -233,7 +253,7 @@ public final class Catalog implements AutoCloseable {
                 if (key == null) {
                     continue;
                 }
-                sink.accept(new Row(kind, key.toString(), "", 0, values, Map.of()));
+                sink.accept(new Row(kind, key.toString(), "", 0, Row.owned(values), Map.of()));
                 n++;
             }
         }

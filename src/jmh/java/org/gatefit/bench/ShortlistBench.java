@@ -1,0 +1,320 @@
+package org.gatefit.bench;
+
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.PriorityQueue;
+import java.util.concurrent.TimeUnit;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.apache.lucene.search.Query;
+import org.gatefit.catalog.Column;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Schema;
+import org.gatefit.index.Catalog;
+import org.gatefit.index.PartSearch;
+import org.gatefit.match.DriverPart;
+import org.gatefit.match.Margins;
+import org.gatefit.match.OperatingPoint;
+import org.gatefit.match.PairEvaluator;
+import org.gatefit.match.PairResult;
+import org.gatefit.match.Shortlist;
+import org.gatefit.match.SwitchPart;
+import org.gatefit.match.Topology;
+import org.gatefit.match.Verdict;
+import org.gatefit.synth.BenchCatalogs;
+import org.gatefit.synth.SyntheticCatalog;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
+import org.openjdk.jmh.annotations.Measurement;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
+import org.openjdk.jmh.annotations.Warmup;
+
+/**
+ * {@code shortlist} latency, warm, over {@code drivers} synthetic drivers, and the same shortlist
+ * answered in the same run by DuckDB and SQLite (in-memory, loaded from the same CSV) and by plain
+ * Java over parsed records. The question: drivers for switch TST-S0000000 (an n-channel Si MOSFET)
+ * on the high side of a 48 V bus at 100 kHz, 12 V / 0 V drive, R_g 2.2 Ω, duty ≤ 0.6, 3.3 V LVCMOS PWM
+ * (active high), the default edge and margins; the best 10.
+ *
+ * <ul>
+ * <li>{@code gatefit}: what {@code ShortlistCommand} does once the catalog is open: look up the switch,
+ *     resolve the operating point, prefilter (topology, supply range) in Lucene, scan doc values, run
+ *     every rule on every remaining driver, keep the best 10 by verdict, score, price, part number.
+ * <li>{@code duckdb}, {@code sqlite}: the hard constraints as a practitioner writes them in SQL
+ *     (topology, supply range, peak source and sink current ≥ margin · Q_g(swing) / edge, V_IH ≤
+ *     V_OH − margin, UVLO rising ≤ supply − headroom, offset ≥ bus · 1.2 or isolation ≥ 2 · bus,
+ *     a non-inverting input, not obsolete; an unknown value passes as gatefit's unknown does), ordered
+ *     by the nearest SQL has to gatefit's order — drive-current margin, then price, then part number.
+ * <li>{@code naiveFilter}: the same constraints and order over a {@code List<DriverPart>} in plain Java.
+ * <li>{@code naiveRules}: every rule (PairEvaluator) over the same list, ranked as gatefit ranks —
+ *     gatefit's answer without Lucene.
+ * </ul>
+ * SQL cannot compute gatefit's score (eleven rules with margins), so its ten are not gatefit's ten;
+ * the set-up prints both lists and their overlap.
+ */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@Warmup(iterations = 3, time = 1)
+@Measurement(iterations = 5, time = 1)
+@Fork(value = 1, jvmArgsAppend = {"-Xmx8g"})
+public class ShortlistBench {
+    private static final int TOP = 10;
+    private static final String SWITCH = SyntheticCatalog.switchNumber(0);
+    private static final String SQL = """
+            SELECT part_number FROM drivers
+            WHERE topology IN ('high-side', 'half-bridge', 'isolated')
+              AND v_supply_min_v <= ? AND v_supply_max_v >= ?
+              AND i_source_a >= ? AND i_sink_a >= ?
+              AND (v_ih_v IS NULL OR v_ih_v <= ?)
+              AND (uvlo_on_v IS NULL OR uvlo_on_v <= ?)
+              AND ((topology IN ('high-side', 'half-bridge') AND v_offset_max_v >= ?)
+                   OR (topology = 'isolated' AND isolation_vrms >= ?))
+              AND input_polarity LIKE '%non-inverting%'
+              AND (lifecycle IS NULL OR lifecycle <> 'obsolete')
+            ORDER BY MIN(i_source_a, i_sink_a) DESC, unit_price ASC NULLS LAST, part_number
+            LIMIT 10""";
+
+    @Param({"1000", "10000", "100000", "1000000"})
+    public long drivers;
+
+    private Catalog catalog;
+    private OperatingPoint.Spec spec;
+    private Margins margins = Margins.DEFAULT;
+    private Connection duck;
+    private Connection lite;
+    private PreparedStatement duckQuery;
+    private PreparedStatement liteQuery;
+    private List<DriverPart> parsed;
+    private double[] bind;
+
+    @Setup(Level.Trial)
+    public void setUp() throws Exception {
+        Path dir = BenchCatalogs.catalog(100, drivers);
+        catalog = Catalog.open(dir);
+        spec = new OperatingPoint.Spec();
+        spec.highSide = true;
+        spec.bus = 48.0;
+        spec.fSw = 100e3;
+        spec.rG = 2.2;
+        spec.dutyMax = 0.6;
+        spec.vDrive = 12.0;
+        SwitchPart sw = SwitchPart.of(catalog.get(Kind.SWITCH, SWITCH).orElseThrow());
+        OperatingPoint op = spec.copy().resolve(sw);
+        double qg = sw.qG() * op.swing() / sw.qGVgs();
+        double need = margins.driveCurrent() * qg / op.edge();
+        bind = new double[] {op.swing(), op.swing(), need, need, op.vOh() - margins.logicNoise(),
+            op.swing() - margins.uvloHeadroom(), op.bus() * (1 + margins.offset()), op.bus() * margins.isolation()};
+        parsed = new ArrayList<>();
+        catalog.scan(Kind.DRIVER, null, r -> parsed.add(DriverPart.of(r)));
+
+        Path csv = BenchCatalogs.driversCsv(drivers);
+        Class.forName("org.duckdb.DuckDBDriver");
+        duck = DriverManager.getConnection("jdbc:duckdb:");
+        try (Statement s = duck.createStatement()) {
+            s.execute(createTable("DOUBLE", "BIGINT", "VARCHAR"));
+            s.execute("COPY drivers FROM '" + csv.toString().replace("'", "''") + "' (HEADER)");
+        }
+        duckQuery = duck.prepareStatement(SQL.replace("MIN(i_source_a", "LEAST(i_source_a"));
+        lite = DriverManager.getConnection("jdbc:sqlite::memory:");
+        loadSqlite(csv);
+        liteQuery = lite.prepareStatement(SQL);
+
+        List<String> g = names(gatefit());
+        List<String> d = duckdb();
+        List<String> l = sqlite();
+        List<String> n = naiveFilter();
+        List<String> nr = names(naiveRules());
+        long overlap = g.stream().filter(d::contains).count();
+        System.out.printf("%n[shortlist %d drivers] need %.2f A; gatefit %s%n  sql %s (%d in common with gatefit)%n",
+                drivers, need, g, d, overlap);
+        if (!d.equals(l) || !d.equals(n)) {
+            throw new IllegalStateException("DuckDB, SQLite and plain Java disagree: " + d + " / " + l + " / " + n);
+        }
+        if (!g.equals(nr)) {
+            throw new IllegalStateException("gatefit and its rules over a list disagree: " + g + " / " + nr);
+        }
+    }
+
+    private static String createTable(String real, String integer, String text) {
+        StringBuilder sb = new StringBuilder("CREATE TABLE drivers (");
+        List<Column> cols = Schema.of(Kind.DRIVER).columns();
+        for (int i = 0; i < cols.size(); i++) {
+            Column c = cols.get(i);
+            sb.append(i == 0 ? "" : ", ").append(c.name()).append(' ').append(switch (c.type()) {
+                case NUMBER -> real;
+                case INTEGER -> integer;
+                case TEXT, CHOICE -> text;
+            });
+        }
+        return sb.append(')').toString();
+    }
+
+    private void loadSqlite(Path csv) throws Exception {
+        List<Column> cols = Schema.of(Kind.DRIVER).columns();
+        try (Statement s = lite.createStatement()) {
+            s.execute(createTable("REAL", "INTEGER", "TEXT"));
+        }
+        lite.setAutoCommit(false);
+        String marks = String.join(",", java.util.Collections.nCopies(cols.size(), "?"));
+        try (Reader in = Files.newBufferedReader(csv, StandardCharsets.UTF_8);
+             PreparedStatement ins = lite.prepareStatement("INSERT INTO drivers VALUES (" + marks + ")")) {
+            int batch = 0;
+            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+                for (int i = 0; i < cols.size(); i++) {
+                    String v = rec.get(cols.get(i).name());
+                    if (v.isEmpty()) {
+                        ins.setNull(i + 1, java.sql.Types.NULL);
+                    } else {
+                        switch (cols.get(i).type()) {
+                            case NUMBER -> ins.setDouble(i + 1, Double.parseDouble(v));
+                            case INTEGER -> ins.setLong(i + 1, Long.parseLong(v));
+                            case TEXT, CHOICE -> ins.setString(i + 1, v);
+                        }
+                    }
+                }
+                ins.addBatch();
+                if (++batch % 10_000 == 0) {
+                    ins.executeBatch();
+                }
+            }
+            ins.executeBatch();
+        }
+        lite.commit();
+        try (Statement s = lite.createStatement()) {
+            s.execute("CREATE INDEX drivers_supply ON drivers (topology, v_supply_min_v, v_supply_max_v)");
+            s.execute("ANALYZE");
+        }
+    }
+
+    @TearDown(Level.Trial)
+    public void tearDown() throws Exception {
+        catalog.close();
+        duck.close();
+        lite.close();
+    }
+
+    @Benchmark
+    public Shortlist.Result gatefit() throws Exception {
+        SwitchPart sw = SwitchPart.of(catalog.get(Kind.SWITCH, SWITCH).orElseThrow());
+        OperatingPoint op = spec.resolve(sw);
+        List<String> pre = Shortlist.prefilter(op);
+        List<PartSearch.Condition> parsedPre = new ArrayList<>();
+        for (String s : pre) {
+            parsedPre.add(PartSearch.Condition.parse(s));
+        }
+        Query filter = PartSearch.filter(Kind.DRIVER, parsedPre);
+        Shortlist.Ranker ranker = new Shortlist.Ranker(sw, op, margins, TOP, false, pre);
+        catalog.scan(Kind.DRIVER, filter, ranker);
+        return ranker.result();
+    }
+
+    @Benchmark
+    public List<String> duckdb() throws SQLException {
+        return run(duckQuery);
+    }
+
+    @Benchmark
+    public List<String> sqlite() throws SQLException {
+        return run(liteQuery);
+    }
+
+    private List<String> run(PreparedStatement q) throws SQLException {
+        for (int i = 0; i < bind.length; i++) {
+            q.setDouble(i + 1, bind[i]);
+        }
+        List<String> out = new ArrayList<>(TOP);
+        try (ResultSet rs = q.executeQuery()) {
+            while (rs.next()) {
+                out.add(rs.getString(1));
+            }
+        }
+        return out;
+    }
+
+    private static final Comparator<DriverPart> SQL_ORDER = Comparator
+            .comparingDouble((DriverPart d) -> -Math.min(d.iSource(), d.iSink()))
+            .thenComparingDouble(d -> Double.isNaN(d.price()) ? Double.MAX_VALUE : d.price())
+            .thenComparing(DriverPart::partNumber);
+
+    @Benchmark
+    public List<String> naiveFilter() {
+        double swing = bind[0];
+        List<DriverPart> hits = new ArrayList<>();
+        for (DriverPart d : parsed) {
+            Topology t = d.topology();
+            boolean floating = t == Topology.HIGH_SIDE || t == Topology.HALF_BRIDGE;
+            if ((floating || t == Topology.ISOLATED)
+                    && d.vSupplyMin() <= swing && d.vSupplyMax() >= swing
+                    && d.iSource() >= bind[2] && d.iSink() >= bind[3]
+                    && !(d.vIh() > bind[4]) && !(d.uvloOn() > bind[5])
+                    && (floating ? d.vOffsetMax() >= bind[6] : d.isolationVrms() >= bind[7])
+                    && d.inverting().contains(false)
+                    && !d.lifecycle().equals("obsolete")) {
+                hits.add(d);
+            }
+        }
+        hits.sort(SQL_ORDER);
+        List<String> out = new ArrayList<>(TOP);
+        for (int i = 0; i < Math.min(TOP, hits.size()); i++) {
+            out.add(hits.get(i).partNumber());
+        }
+        return out;
+    }
+
+    @Benchmark
+    public List<PairResult> naiveRules() {
+        SwitchPart sw;
+        try {
+            sw = SwitchPart.of(catalog.get(Kind.SWITCH, SWITCH).orElseThrow());
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        OperatingPoint op = spec.resolve(sw);
+        double swing = op.swing();
+        PriorityQueue<PairResult> best = new PriorityQueue<>(TOP + 1, Shortlist.RANKING.reversed());
+        for (DriverPart d : parsed) {
+            if (d.topology() == Topology.LOW_SIDE || d.vSupplyMax() < swing || d.vSupplyMin() > swing) {
+                continue;
+            }
+            PairResult pr = PairEvaluator.evaluate(d, sw, op, margins).withPrice(d.price());
+            if (pr.verdict() == Verdict.FAIL) {
+                continue;
+            }
+            best.add(pr);
+            if (best.size() > TOP) {
+                best.poll();
+            }
+        }
+        List<PairResult> out = new ArrayList<>(best);
+        out.sort(Shortlist.RANKING);
+        return out;
+    }
+
+    private static List<String> names(Shortlist.Result r) {
+        return names(r.candidates());
+    }
+
+    private static List<String> names(List<PairResult> r) {
+        return r.stream().map(PairResult::driver).toList();
+    }
+}
