@@ -94,7 +94,7 @@ public record Row(Kind kind, String key, String file, long line, Map<String, Obj
         if (Double.isNaN(v)) {
             return v;
         }
-        Unit u = Schema.of(kind).column(column).map(Column::unit).orElse(null);
+        Unit u = Schema.of(kind).unit(column);
         return u == null ? v : u.toSi(v);
     }
 

@@ -38,6 +38,7 @@ public final class Schema {
     private final Kind kind;
     private final List<Column> columns;
     private final Map<String, Column> byName;
+    private final Map<String, Unit> units = new java.util.HashMap<>();
 
     private Schema(Kind kind, List<Column> columns) {
         this.kind = kind;
@@ -45,6 +46,9 @@ public final class Schema {
         Map<String, Column> m = new LinkedHashMap<>();
         for (Column c : columns) {
             m.put(c.name(), c);
+            if (c.unit() != null) {
+                units.put(c.name(), c.unit());
+            }
         }
         this.byName = m;
     }
@@ -136,6 +140,11 @@ public final class Schema {
     /** A column by exact (lower-case) name. */
     public Optional<Column> column(String name) {
         return Optional.ofNullable(byName.get(name));
+    }
+
+    /** The unit of a number column, or null (no such column, or a number without unit): for hot paths. */
+    public Unit unit(String column) {
+        return units.get(column);
     }
 
     /** Names of all columns, in order. */

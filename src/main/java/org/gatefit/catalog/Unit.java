@@ -40,12 +40,25 @@ public record Unit(Dimension dimension, int exponent) {
 
     /** Converts a value in this unit to SI. */
     public double toSi(double value) {
-        return exponent == 0 ? value : value * Math.pow(10, exponent);
+        return exponent == 0 ? value : value * pow10(exponent);
     }
 
     /** Converts an SI value to this unit. */
     public double fromSi(double si) {
-        return exponent == 0 ? si : si / Math.pow(10, exponent);
+        return exponent == 0 ? si : si / pow10(exponent);
+    }
+
+    /** Math.pow(10, e) for the prefix exponents, computed once (conversions run per cell and per column). */
+    private static final double[] POW10 = new double[28];
+
+    static {
+        for (int e = -15; e <= 12; e++) {
+            POW10[e + 15] = Math.pow(10, e);
+        }
+    }
+
+    private static double pow10(int e) {
+        return e >= -15 && e <= 12 ? POW10[e + 15] : Math.pow(10, e);
     }
 
     /** Symbol as people write it: {@code nC}, {@code mΩ}; empty for a ratio. */
