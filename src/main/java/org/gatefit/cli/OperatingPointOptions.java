@@ -76,38 +76,28 @@ final class OperatingPointOptions {
 
     /** The options as a stage-sheet row, parsed exactly as a stage sheet's cells would be. */
     OperatingPoint.Spec spec() throws BadValueException {
-        Map<String, String> cells = new LinkedHashMap<>();
-        cells.put("side", side);
-        cells.put("bus_v", bus);
-        cells.put("f_sw_khz", freq);
-        cells.put("edge_ns", edge);
-        cells.put("v_drive_v", drive);
-        cells.put("v_drive_neg_v", driveNeg);
-        cells.put("logic", logic);
-        cells.put("v_oh_v", vOh);
-        cells.put("v_ol_v", vOl);
-        cells.put("pwm_sense", pwm);
-        cells.put("r_g_ohm", rg);
-        cells.put("r_g_off_ohm", rgOff);
-        cells.put("duty_max", dutyMax);
-        cells.put("parallel", parallel);
-        cells.put("loop_nh", loop);
-        cells.put("v_f_boot_v", vfBoot);
-        cells.put("r_boot_ohm", rBoot);
+        // Option, stage-sheet column, value as typed: one row each, so errors name the option.
+        String[][] cells = {
+            {"--side", "side", side}, {"--bus", "bus_v", bus}, {"--freq", "f_sw_khz", freq},
+            {"--edge", "edge_ns", edge}, {"--drive", "v_drive_v", drive}, {"--drive-neg", "v_drive_neg_v", driveNeg},
+            {"--logic", "logic", logic}, {"--v-oh", "v_oh_v", vOh}, {"--v-ol", "v_ol_v", vOl},
+            {"--pwm", "pwm_sense", pwm}, {"--rg", "r_g_ohm", rg}, {"--rg-off", "r_g_off_ohm", rgOff},
+            {"--duty-max", "duty_max", dutyMax}, {"--parallel", "parallel", parallel}, {"--loop", "loop_nh", loop},
+            {"--v-f-boot", "v_f_boot_v", vfBoot}, {"--r-boot", "r_boot_ohm", rBoot}};
         Schema stage = Schema.of(Kind.STAGE);
         Map<String, Object> values = new LinkedHashMap<>();
-        for (Map.Entry<String, String> e : cells.entrySet()) {
-            if (e.getValue() == null) {
+        for (String[] cell : cells) {
+            if (cell[2] == null) {
                 continue;
             }
-            Column c = stage.column(e.getKey()).orElseThrow();
+            Column c = stage.column(cell[1]).orElseThrow();
             try {
-                Object v = Cells.parse(c, e.getValue(), false);
+                Object v = Cells.parse(c, cell[2], false);
                 if (v != null) {
                     values.put(c.name(), v);
                 }
             } catch (BadValueException ex) {
-                throw new BadValueException("--" + optionName(c.name()) + ": " + ex.getMessage());
+                throw new BadValueException(cell[0] + ": " + ex.getMessage());
             }
         }
         OperatingPoint.Spec s = OperatingPoint.Spec.fromStage(new Row(Kind.STAGE, "command line", "", 0, values, Map.of()));
@@ -123,25 +113,5 @@ final class OperatingPointOptions {
             }
         }
         return s;
-    }
-
-    private static String optionName(String column) {
-        return switch (column) {
-            case "bus_v" -> "bus";
-            case "f_sw_khz" -> "freq";
-            case "edge_ns" -> "edge";
-            case "v_drive_v" -> "drive";
-            case "v_drive_neg_v" -> "drive-neg";
-            case "v_oh_v" -> "v-oh";
-            case "v_ol_v" -> "v-ol";
-            case "pwm_sense" -> "pwm";
-            case "r_g_ohm" -> "rg";
-            case "r_g_off_ohm" -> "rg-off";
-            case "duty_max" -> "duty-max";
-            case "loop_nh" -> "loop";
-            case "v_f_boot_v" -> "v-f-boot";
-            case "r_boot_ohm" -> "r-boot";
-            default -> column;
-        };
     }
 }

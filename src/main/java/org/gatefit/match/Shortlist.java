@@ -60,16 +60,6 @@ public final class Shortlist {
         return c;
     }
 
-    /** Evaluates every driver and ranks them. */
-    public static Result rank(SwitchPart sw, OperatingPoint op, Margins m, Iterable<Row> drivers, int top, boolean all,
-                              List<String> prefilterUsed) {
-        Ranker r = new Ranker(sw, op, m, top, all, prefilterUsed);
-        for (Row d : drivers) {
-            r.accept(d);
-        }
-        return r.result();
-    }
-
     /**
      * Streams drivers through the rules and keeps only the best {@code top} (a bounded heap), so
      * memory does not grow with the catalog.
