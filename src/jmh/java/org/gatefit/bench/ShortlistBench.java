@@ -29,6 +29,7 @@ import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.PairEvaluator;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.Shortlist;
+import org.gatefit.cli.ShortlistCommand;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Topology;
 import org.gatefit.match.Verdict;
@@ -56,9 +57,14 @@ import org.openjdk.jmh.annotations.Warmup;
  * (active high), the default edge and margins; the best 10.
  *
  * <ul>
- * <li>{@code gatefit}: what {@code ShortlistCommand} does once the catalog is open: look up the switch,
- *     resolve the operating point, prefilter (topology, supply range) in Lucene, scan doc values, run
- *     every rule on every remaining driver, keep the best 10 by verdict, score, price, part number.
+ * <li>{@code gatefit}: what {@code ShortlistCommand.run} does once the catalog is open: look up the
+ *     switch, resolve the operating point, prefilter in Lucene (drivers certain to fail on their own
+ *     values: topology, supply range, rated peak current, offset or isolation rating, UVLO, negative
+ *     rail, obsolete), scan the rest on both cores, run every rule on every remaining driver, keep the
+ *     best 10 by verdict, score, price, part number, and word those 10 in full. The catalog keeps its
+ *     decoded columns ({@code Catalog.keepColumns}), as a long-running process would.
+ * <li>{@code gatefitDocValues}: the same on a catalog that reads doc values on every scan, as a
+ *     one-off {@code gatefit shortlist} command does.
  * <li>{@code duckdb}, {@code sqlite}: the hard constraints as a practitioner writes them in SQL
  *     (topology, supply range, peak source and sink current ≥ margin · Q_g(swing) / edge, V_IH ≤
  *     V_OH − margin, UVLO rising ≤ supply − headroom, offset ≥ bus · 1.2 or isolation ≥ 2 · bus,
@@ -98,6 +104,7 @@ public class ShortlistBench {
     public long drivers;
 
     private Catalog catalog;
+    private Catalog direct;
     private OperatingPoint.Spec spec;
     private Margins margins = Margins.DEFAULT;
     private Connection duck;
@@ -110,7 +117,8 @@ public class ShortlistBench {
     @Setup(Level.Trial)
     public void setUp() throws Exception {
         Path dir = BenchCatalogs.catalog(100, drivers);
-        catalog = Catalog.open(dir);
+        catalog = Catalog.open(dir).keepColumns(true);
+        direct = Catalog.open(dir);
         spec = new OperatingPoint.Spec();
         spec.highSide = true;
         spec.bus = 48.0;
@@ -209,23 +217,25 @@ public class ShortlistBench {
     @TearDown(Level.Trial)
     public void tearDown() throws Exception {
         catalog.close();
+        direct.close();
         duck.close();
         lite.close();
     }
 
     @Benchmark
     public Shortlist.Result gatefit() throws Exception {
-        SwitchPart sw = SwitchPart.of(catalog.get(Kind.SWITCH, SWITCH).orElseThrow());
-        OperatingPoint op = spec.resolve(sw);
-        List<String> pre = Shortlist.prefilter(op);
-        List<PartSearch.Condition> parsedPre = new ArrayList<>();
-        for (String s : pre) {
-            parsedPre.add(PartSearch.Condition.parse(s));
-        }
-        Query filter = PartSearch.filter(Kind.DRIVER, parsedPre);
-        Shortlist.Ranker ranker = new Shortlist.Ranker(sw, op, margins, TOP, false, pre);
-        catalog.scan(Kind.DRIVER, filter, ranker);
-        return ranker.result();
+        return shortlist(catalog);
+    }
+
+    @Benchmark
+    public Shortlist.Result gatefitDocValues() throws Exception {
+        return shortlist(direct);
+    }
+
+    private Shortlist.Result shortlist(Catalog c) throws Exception {
+        SwitchPart sw = SwitchPart.of(c.get(Kind.SWITCH, SWITCH).orElseThrow());
+        OperatingPoint op = spec.copy().resolve(sw);
+        return ShortlistCommand.run(c, sw, op, margins, TOP, false, Runtime.getRuntime().availableProcessors());
     }
 
     @Benchmark

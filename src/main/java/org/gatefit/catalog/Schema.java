@@ -147,6 +147,16 @@ public final class Schema {
         return units.get(column);
     }
 
+    /** Position of a column in {@link #columns()} (what {@link RowCursor} takes); an unknown name is a programming error. */
+    public int position(String column) {
+        for (int i = 0; i < columns.size(); i++) {
+            if (columns.get(i).name().equals(column)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("expected a " + kind.id() + " column, got '" + column + "'");
+    }
+
     /** Names of all columns, in order. */
     public List<String> names() {
         return List.copyOf(byName.keySet());

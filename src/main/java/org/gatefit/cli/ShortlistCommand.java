@@ -8,6 +8,7 @@ import org.gatefit.index.Catalog;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.Shortlist;
+import org.gatefit.match.PairEvaluator;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.report.MatchReports;
 import picocli.CommandLine.Command;
@@ -22,7 +23,7 @@ import picocli.CommandLine.Option;
             + " Drivers are skipped up front only when their topology or supply range makes them certain to fail."
             + " Defaults that were assumed are printed with the result."},
         footer = {"", "Example:", "  gatefit shortlist --switch NVS-4810N --freq 100 --bus 48 --side high --duty-max 0.9 --rg 4R7"})
-final class ShortlistCommand extends CatalogCommand implements Callable<Integer> {
+public final class ShortlistCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--switch", required = true, paramLabel = "PART", description = "The switch to find drivers for.")
     String switchPn;
 
@@ -55,14 +56,38 @@ final class ShortlistCommand extends CatalogCommand implements Callable<Integer>
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
-            List<String> pre = Shortlist.prefilter(op);
-            Shortlist.Ranker ranker = new Shortlist.Ranker(sw, op, m, top, all, all ? List.of() : pre);
-            c.scan(Kind.DRIVER, all ? null : PairSupport.filter(pre), ranker);
-            Shortlist.Result r = ranker.result();
+            Shortlist.Result r = run(c, sw, op, m, top, all, Runtime.getRuntime().availableProcessors());
             try (Writer w = output.open(ctx)) {
                 MatchReports.shortlist(r, output.format, output.colour(ctx), w);
             }
         }
         return ExitCode.OK;
+    }
+
+    /**
+     * The shortlist itself, once the catalog is open and the switch found (the benchmarks call it
+     * too): the prefilter as a Lucene query (none with {@code all}), a doc-value scan split over
+     * {@code threads} partitions, each ranking its drivers on verdict and score, the partitions'
+     * best merged and worded in full.
+     */
+    public static Shortlist.Result run(Catalog c, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
+                                       int threads) throws java.io.IOException, org.gatefit.catalog.BadValueException {
+        PairEvaluator.Prepared p = PairEvaluator.prepare(sw, op, m);
+        Shortlist.Prefilter pre = all ? Shortlist.Prefilter.NONE : Shortlist.prefilter(p);
+        Shortlist.Ranker first = new Shortlist.Ranker(p, top, all, pre.describe(), 0);
+        boolean[] used = {false};
+        List<Shortlist.Ranker> parts = c.scanColumns(Kind.DRIVER, PairSupport.filter(c, pre), threads, () -> {
+            if (!used[0]) {
+                used[0] = true;
+                return first;
+            }
+            return first.sibling();
+        });
+        int scanned = 0;
+        for (Shortlist.Ranker r : parts) {
+            scanned += r.evaluated();
+        }
+        int skipped = pre.require().isEmpty() && pre.exclude().isEmpty() ? 0 : c.count(Kind.DRIVER) - scanned;
+        return Shortlist.Ranker.merge(parts.isEmpty() ? List.of(first) : parts, skipped).result();
     }
 }

@@ -45,6 +45,7 @@ import org.apache.lucene.store.FSDirectory;
 import org.apache.lucene.index.StoredFields;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
+import org.gatefit.catalog.RowCursor;
 
 /**
  * Read side of the catalog: a point-in-time view of the last committed import. Open it in
@@ -58,6 +59,8 @@ public final class Catalog implements AutoCloseable {
     private final Directory directory;
     private final DirectoryReader reader;
     private final IndexSearcher searcher;
+    /** Decoded columns per segment, when {@link #keepColumns} is on; null otherwise. */
+    private volatile java.util.concurrent.ConcurrentHashMap<Long, Object> columns;
 
     private Catalog(Path dir, Directory directory, DirectoryReader reader) {
         this.dir = dir;
@@ -85,6 +88,19 @@ public final class Catalog implements AutoCloseable {
             d.close();
             throw e;
         }
+    }
+
+    /**
+     * Keeps every column that a {@link #scanColumns} reads decoded in memory (a {@code double[]} per
+     * number column, ordinals and a dictionary per text column, per segment) for as long as the
+     * catalog is open, so later scans read arrays instead of doc values. For long-running
+     * processes that ask many questions of one catalog; a one-off command gains nothing (the first
+     * scan decodes every document of a column, not only the candidates). Costs about 8 bytes per
+     * part per column read.
+     */
+    public Catalog keepColumns(boolean keep) {
+        columns = keep ? new java.util.concurrent.ConcurrentHashMap<>() : null;
+        return this;
     }
 
     /** Where the catalog lives. */
@@ -182,8 +198,68 @@ public final class Catalog implements AutoCloseable {
      * words-only text (description) are not included; source file and line are left empty.
      */
     public long scan(Kind kind, Query filter, java.util.function.Consumer<Row> sink) throws IOException {
+        List<Column> cols = Schema.of(kind).columns();
+        String keyColumn = kind == Kind.STAGE ? "stage" : "part_number";
+        long[] n = {0};
+        scanColumns(kind, filter, 1, () -> (java.util.function.Consumer<RowCursor>) r -> {
+            LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2); // no rehash per row
+            for (int i = 0; i < cols.size(); i++) {
+                Column c = cols.get(i);
+                Object v = switch (c.type()) {
+                    case NUMBER -> {
+                        double x = r.number(i);
+                        yield Double.isNaN(x) ? null : (Object) x;
+                    }
+                    case INTEGER -> ((LeafCursor) r).integer(i);
+                    case TEXT, CHOICE -> r.text(i);
+                };
+                if (v != null) {
+                    values.put(c.name(), v);
+                }
+            }
+            Object key = values.get(keyColumn);
+            if (key != null) {
+                sink.accept(new Row(kind, key.toString(), "", 0, Row.owned(values), Map.of()));
+                n[0]++;
+            }
+        });
+        return n[0];
+    }
+
+    /** Parts per partition below which a scan is not split across threads (thread hand-off costs more than it saves). */
+    static final int MIN_PARTITION = 16_384;
+
+    /** Threads that run scan partitions besides the caller's (daemon: they never keep the JVM alive). */
+    private static final java.util.concurrent.ExecutorService SCAN_THREADS =
+            java.util.concurrent.Executors.newCachedThreadPool(r -> {
+                Thread t = new Thread(r, "gatefit-scan");
+                t.setDaemon(true);
+                return t;
+            });
+
+    /**
+     * Streams the parts of a kind that match {@code filter} through a {@link RowCursor} that reads
+     * doc values column by column, only the columns a sink asks for (no row map, no stored
+     * fields). The documents are split into up to {@code parallelism} partitions (ranges of
+     * document ids, at least {@link #MIN_PARTITION} each) that run at once, the first on the
+     * calling thread; each partition feeds its own sink from {@code sinks}, so sinks need no
+     * locking. Deleted documents (replaced by a later import) are skipped.
+     *
+     * @return the sinks, one per partition, in document order, for the caller to merge
+     */
+    public <S extends java.util.function.Consumer<RowCursor>> List<S> scanColumns(Kind kind, Query filter,
+            int parallelism, java.util.function.Supplier<S> sinks) throws IOException {
+        return scanColumns(kind, filter, parallelism, MIN_PARTITION, sinks);
+    }
+
+    /** {@link #scanColumns(Kind, Query, int, java.util.function.Supplier)} with partitions of at least {@code minPartition} documents. */
+    public <S extends java.util.function.Consumer<RowCursor>> List<S> scanColumns(Kind kind, Query filter,
+            int parallelism, int minPartition, java.util.function.Supplier<S> sinks) throws IOException {
+        if (minPartition < 1) {
+            throw new IllegalArgumentException("expected a partition of at least 1 document, got " + minPartition);
+        }
         if (searcher == null) {
-            return 0;
+            return List.of();
         }
         BooleanQuery.Builder b = new BooleanQuery.Builder();
         b.add(new TermQuery(new Term(Fields.KIND, kind.id())), BooleanClause.Occur.FILTER);
@@ -191,73 +267,293 @@ public final class Catalog implements AutoCloseable {
             b.add(filter, BooleanClause.Occur.FILTER);
         }
         Weight w = searcher.createWeight(searcher.rewrite(b.build()), ScoreMode.COMPLETE_NO_SCORES, 1f);
-        Schema schema = Schema.of(kind);
-        List<Column> cols = schema.columns();
-        long n = 0;
-        for (LeafReaderContext leaf : reader.leaves()) {
-            Scorer sc = w.scorer(leaf);
-            if (sc == null) {
-                continue;
+        List<List<int[]>> parts = partitions(Math.max(1, parallelism), minPartition);
+        List<S> out = new ArrayList<>(parts.size());
+        for (int i = 0; i < parts.size(); i++) {
+            out.add(sinks.get());
+        }
+        List<java.util.concurrent.Future<?>> running = new ArrayList<>();
+        try {
+            for (int i = 1; i < parts.size(); i++) {
+                List<int[]> part = parts.get(i);
+                S sink = out.get(i);
+                running.add(SCAN_THREADS.submit(() -> {
+                    scanPartition(kind, w, part, sink);
+                    return null;
+                }));
             }
-            LeafReader lr = leaf.reader();
-            Object[] dv = new Object[cols.size()];
-            // Text of each ord, decoded once per leaf: maker, package, topology, lifecycle and the
-            // like repeat across most rows (unique columns such as part_number are decoded per row).
-            String[][] ordText = new String[cols.size()][];
-            for (int i = 0; i < cols.size(); i++) {
+            if (!parts.isEmpty()) {
+                scanPartition(kind, w, parts.get(0), out.get(0));
+            }
+            for (java.util.concurrent.Future<?> f : running) {
+                f.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.io.InterruptedIOException("scan interrupted");
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable c = e.getCause();
+            if (c instanceof IOException io) {
+                throw io;
+            }
+            if (c instanceof RuntimeException re) {
+                throw re;
+            }
+            if (c instanceof Error er) {
+                throw er;
+            }
+            throw new IOException(c);
+        } finally {
+            for (java.util.concurrent.Future<?> f : running) {
+                f.cancel(true);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * At most {@code parallelism} partitions of about equal document counts, each a list of
+     * {leaf ordinal, first doc, end doc} pieces in document order.
+     */
+    private List<List<int[]>> partitions(int parallelism, int minPartition) {
+        List<LeafReaderContext> leaves = reader.leaves();
+        long total = 0;
+        for (LeafReaderContext l : leaves) {
+            total += l.reader().maxDoc();
+        }
+        int n = (int) Math.max(1, Math.min(parallelism, total / minPartition));
+        long size = Math.max(1, (total + n - 1) / n);
+        List<List<int[]>> out = new ArrayList<>();
+        List<int[]> current = new ArrayList<>();
+        long room = size;
+        for (int li = 0; li < leaves.size(); li++) {
+            int max = leaves.get(li).reader().maxDoc();
+            int from = 0;
+            while (from < max) {
+                int to = (int) Math.min(max, from + room);
+                current.add(new int[] {li, from, to});
+                room -= to - from;
+                from = to;
+                if (room == 0 && out.size() < n - 1) {
+                    out.add(current);
+                    current = new ArrayList<>();
+                    room = size;
+                }
+            }
+        }
+        if (!current.isEmpty() || out.isEmpty()) {
+            out.add(current);
+        }
+        return out;
+    }
+
+    private void scanPartition(Kind kind, Weight w, List<int[]> pieces, java.util.function.Consumer<RowCursor> sink)
+            throws IOException {
+        try {
+            for (int[] part : pieces) {
+                LeafReaderContext leaf = reader.leaves().get(part[0]);
+                Scorer sc = w.scorer(leaf);
+                if (sc == null) {
+                    continue;
+                }
+                LeafReader lr = leaf.reader();
+                Bits live = lr.getLiveDocs();
+                LeafCursor cursor = new LeafCursor(kind, lr, columns, part[0]);
+                DocIdSetIterator it = sc.iterator();
+                int end = part[2];
+                for (int doc = it.advance(part[1]); doc < end; doc = it.nextDoc()) {
+                    if (live != null && !live.get(doc)) {
+                        continue;
+                    }
+                    cursor.doc = doc;
+                    sink.accept(cursor);
+                }
+            }
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    /**
+     * A cursor over one segment's doc values: each column's iterator is opened on first use and
+     * moved forward to the current document only when the column is read; texts of columns with
+     * few distinct values (maker, topology, lifecycle) are decoded once per segment.
+     */
+    private static final class LeafCursor implements RowCursor {
+        private final Kind kind;
+        private final LeafReader lr;
+        private final List<Column> cols;
+        private final Object[] dv;
+        private final boolean[] opened;
+        private final String[][] ordText;
+        private final int[] readAt;
+        private final long[] raw;
+        private final boolean[] present;
+        int doc = -1;
+        /** The catalog's decoded columns (null: read doc values), and this segment's slot in them. */
+        private final java.util.concurrent.ConcurrentHashMap<Long, Object> cache;
+        private final long slot;
+        private final Object[] decoded;
+
+        LeafCursor(Kind kind, LeafReader lr, java.util.concurrent.ConcurrentHashMap<Long, Object> cache, int leaf) {
+            this.kind = kind;
+            this.lr = lr;
+            this.cache = cache;
+            this.slot = ((long) leaf << 32) | ((long) kind.ordinal() << 16);
+            this.cols = Schema.of(kind).columns();
+            int n = cols.size();
+            this.dv = new Object[n];
+            this.opened = new boolean[n];
+            this.ordText = new String[n][];
+            this.readAt = new int[n];
+            java.util.Arrays.fill(readAt, -1);
+            this.raw = new long[n];
+            this.present = new boolean[n];
+            this.decoded = new Object[n];
+        }
+
+        /** Column {@code i} of this segment decoded (built on first use, shared by every scan of the catalog). */
+        private Object decoded(int i) {
+            Object d = decoded[i];
+            if (d == null) {
+                d = cache.computeIfAbsent(slot | i, k -> decode(cols.get(i)));
+                decoded[i] = d;
+            }
+            return d;
+        }
+
+        private Object decode(Column c) {
+            int max = lr.maxDoc();
+            try {
+                switch (c.type()) {
+                    case NUMBER, INTEGER -> {
+                        double[] v = new double[max];
+                        java.util.Arrays.fill(v, Double.NaN);
+                        NumericDocValues nd = lr.getNumericDocValues(c.name());
+                        if (nd != null) {
+                            boolean number = c.type() == ColumnType.NUMBER;
+                            for (int d = nd.nextDoc(); d != DocIdSetIterator.NO_MORE_DOCS; d = nd.nextDoc()) {
+                                long x = nd.longValue();
+                                v[d] = number ? Double.longBitsToDouble(x) : x;
+                            }
+                        }
+                        return v;
+                    }
+                    case TEXT, CHOICE -> {
+                        int[] ords = new int[max];
+                        java.util.Arrays.fill(ords, -1);
+                        SortedDocValues sd = c.wordsOnly() ? null : lr.getSortedDocValues(c.name());
+                        String[] dict = new String[sd == null ? 0 : sd.getValueCount()];
+                        if (sd != null) {
+                            for (int d = sd.nextDoc(); d != DocIdSetIterator.NO_MORE_DOCS; d = sd.nextDoc()) {
+                                ords[d] = sd.ordValue();
+                            }
+                            for (int o = 0; o < dict.length; o++) {
+                                dict[o] = sd.lookupOrd(o).utf8ToString();
+                            }
+                        }
+                        return new Object[] {ords, dict};
+                    }
+                }
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+            throw new AssertionError(c.type());
+        }
+
+        @Override
+        public Kind kind() {
+            return kind;
+        }
+
+        private Object open(int i) {
+            if (!opened[i]) {
+                opened[i] = true;
                 Column c = cols.get(i);
-                dv[i] = switch (c.type()) {
-                    case NUMBER, INTEGER -> lr.getNumericDocValues(c.name());
-                    case TEXT, CHOICE -> c.wordsOnly() ? null : lr.getSortedDocValues(c.name());
-                };
-            }
-            for (int i = 0; i < cols.size(); i++) {
+                try {
+                    dv[i] = switch (c.type()) {
+                        case NUMBER, INTEGER -> lr.getNumericDocValues(c.name());
+                        case TEXT, CHOICE -> c.wordsOnly() ? null : lr.getSortedDocValues(c.name());
+                    };
+                } catch (IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
                 if (dv[i] instanceof SortedDocValues sd && sd.getValueCount() <= ORD_CACHE_MAX) {
                     ordText[i] = new String[sd.getValueCount()];
                 }
             }
-            DocIdSetIterator it = sc.iterator();
-            for (int doc = it.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = it.nextDoc()) {
-                LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2); // no rehash per row
-                for (int i = 0; i < cols.size(); i++) {
-                    Column c = cols.get(i);
-                    Object o = dv[i];
-                    if (o instanceof NumericDocValues nd) {
-                        if (nd.docID() < doc) {
-                            nd.advance(doc);
-                        }
-                        if (nd.docID() == doc) {
-                            long raw = nd.longValue();
-                            values.put(c.name(), c.type() == ColumnType.NUMBER
-                                    ? (Object) Double.longBitsToDouble(raw) : (Object) raw);
-                        }
-                    } else if (o instanceof SortedDocValues sd) {
-                        if (sd.docID() < doc) {
-                            sd.advance(doc);
-                        }
-                        if (sd.docID() == doc) {
-                            int ord = sd.ordValue();
-                            String[] cache = ordText[i];
-                            String text = cache == null ? null : cache[ord];
-                            if (text == null) {
-                                text = sd.lookupOrd(ord).utf8ToString();
-                                if (cache != null) {
-                                    cache[ord] = text;
-                                }
-                            }
-                            values.put(c.name(), text);
-                        }
+            return dv[i];
+        }
+
+        /** Reads column {@code i} at the current document into {@code raw}/{@code present}. */
+        private boolean read(int i) {
+            if (readAt[i] == doc) {
+                return present[i];
+            }
+            readAt[i] = doc;
+            Object o = open(i);
+            boolean has = false;
+            try {
+                if (o instanceof NumericDocValues nd) {
+                    has = nd.advanceExact(doc); // documents only move forward; readAt stops a second read
+                    if (has) {
+                        raw[i] = nd.longValue();
+                    }
+                } else if (o instanceof SortedDocValues sd) {
+                    has = sd.advanceExact(doc);
+                    if (has) {
+                        raw[i] = sd.ordValue();
                     }
                 }
-                Object key = values.get(kind == Kind.STAGE ? "stage" : "part_number");
-                if (key == null) {
-                    continue;
-                }
-                sink.accept(new Row(kind, key.toString(), "", 0, Row.owned(values), Map.of()));
-                n++;
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
             }
+            present[i] = has;
+            return has;
         }
-        return n;
+
+        @Override
+        public double number(int column) {
+            if (cache != null) {
+                return ((double[]) decoded(column))[doc];
+            }
+            if (!read(column)) {
+                return Double.NaN;
+            }
+            return cols.get(column).type() == ColumnType.NUMBER ? Double.longBitsToDouble(raw[column]) : raw[column];
+        }
+
+        /** An INTEGER column as a boxed count, or null when unknown (what a {@link Row} holds). */
+        Long integer(int column) {
+            return read(column) ? raw[column] : null;
+        }
+
+        @Override
+        public String text(int column) {
+            if (cache != null) {
+                Object[] d = (Object[]) decoded(column);
+                int ord = ((int[]) d[0])[doc];
+                return ord < 0 ? null : ((String[]) d[1])[ord];
+            }
+            if (!read(column)) {
+                return null;
+            }
+            SortedDocValues sd = (SortedDocValues) dv[column];
+            int ord = (int) raw[column];
+            String[] cache = ordText[column];
+            String text = cache == null ? null : cache[ord];
+            if (text == null) {
+                try {
+                    text = sd.lookupOrd(ord).utf8ToString();
+                } catch (IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
+                if (cache != null) {
+                    cache[ord] = text;
+                }
+            }
+            return text;
+        }
     }
 
     /** The import history, oldest first. */

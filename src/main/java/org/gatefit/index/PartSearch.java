@@ -144,6 +144,80 @@ public final class PartSearch {
         return q.build();
     }
 
+    /**
+     * Documents to leave out of a filter: those meeting every condition of {@code when}, having a
+     * value in every column of {@code known}, and matching {@code also} (null: no further test).
+     * A point or term query matches only documents that have the value, so a document without it
+     * is never left out.
+     */
+    public record Exclusion(List<Condition> when, List<String> known, Query also) {
+        public Exclusion {
+            when = List.copyOf(when);
+            known = List.copyOf(known);
+            if (when.isEmpty() && known.isEmpty() && also == null) {
+                throw new IllegalArgumentException("expected at least one condition in an exclusion, got none");
+            }
+        }
+    }
+
+    /**
+     * A filter of conditions that must all hold, less the documents of the {@code exclude} groups;
+     * null when there is nothing to filter.
+     */
+    public static Query filter(Kind kind, List<Condition> require, List<Exclusion> exclude) throws BadValueException {
+        if (require.isEmpty() && exclude.isEmpty()) {
+            return null;
+        }
+        BooleanQuery.Builder q = new BooleanQuery.Builder();
+        for (Condition c : require) {
+            addCondition(q, column(kind, c.column()), c);
+        }
+        for (Exclusion e : exclude) {
+            BooleanQuery.Builder g = new BooleanQuery.Builder();
+            for (Condition c : e.when()) {
+                addCondition(g, column(kind, c.column()), c);
+            }
+            for (String k : e.known()) {
+                g.add(new FieldExistsQuery(column(kind, k).name()), Occur.FILTER);
+            }
+            if (e.also() != null) {
+                g.add(e.also(), Occur.FILTER);
+            }
+            q.add(g.build(), Occur.MUST_NOT);
+        }
+        q.add(new MatchAllDocsQuery(), Occur.MUST);
+        return q.build();
+    }
+
+    /**
+     * Parts whose text in {@code column} passes {@code test}: the column's distinct values are read
+     * from the index's term dictionary (a handful for a choice-like column) and the query matches
+     * the ones that pass. For columns whose schema pattern allows lower case only, so the indexed
+     * (lower-cased) term is the text as written.
+     */
+    public static Query textMatching(org.apache.lucene.index.IndexReader reader, Kind kind, String column,
+                                     java.util.function.Predicate<String> test) throws BadValueException, IOException {
+        Column col = column(kind, column);
+        if (col.type() != org.gatefit.catalog.ColumnType.TEXT && col.type() != org.gatefit.catalog.ColumnType.CHOICE) {
+            throw new BadValueException(column + " is not a text column (expected a text or choice column)");
+        }
+        java.util.Set<org.apache.lucene.util.BytesRef> hit = new java.util.TreeSet<>();
+        for (org.apache.lucene.index.LeafReaderContext leaf : reader.leaves()) {
+            org.apache.lucene.index.Terms terms = leaf.reader().terms(col.name());
+            if (terms == null) {
+                continue;
+            }
+            org.apache.lucene.index.TermsEnum te = terms.iterator();
+            for (org.apache.lucene.util.BytesRef t = te.next(); t != null; t = te.next()) {
+                if (test.test(t.utf8ToString())) {
+                    hit.add(org.apache.lucene.util.BytesRef.deepCopyOf(t));
+                }
+            }
+        }
+        return hit.isEmpty() ? new org.apache.lucene.search.MatchNoDocsQuery("no " + column + " value passes")
+                : new org.apache.lucene.search.TermInSetQuery(col.name(), hit);
+    }
+
     /** The column a name refers to for this kind (or either kind); lists the valid names if none. */
     public static Column column(Kind kind, String name) throws BadValueException {
         List<Kind> kinds = kind == null ? List.of(Kind.SWITCH, Kind.DRIVER) : List.of(kind);

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Objects;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
+import org.gatefit.catalog.RowCursor;
+import org.gatefit.catalog.Schema;
 
 /**
  * A gate driver as the rules see it: SI units, NaN where the catalog says nothing; booleans as
@@ -34,23 +36,94 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
         if (r.kind() != Kind.DRIVER) {
             throw new IllegalArgumentException("expected a driver row, got " + r.kind());
         }
+        return of(RowCursor.of(r), r.key());
+    }
+
+    /** From a driver row read column by column (a catalog scan); null when the row has no part number. */
+    public static DriverPart of(RowCursor r) {
+        if (r.kind() != Kind.DRIVER) {
+            throw new IllegalArgumentException("expected a driver row, got " + r.kind());
+        }
+        String key = r.text(C.partNumber);
+        return key == null ? null : of(r, key);
+    }
+
+    /** Column positions in the driver schema, resolved once. */
+    private static final class C {
+        static final Schema S = Schema.of(Kind.DRIVER);
+        static final int partNumber = S.position("part_number");
+        static final int maker = S.position("maker");
+        static final int pinout = S.position("pinout");
+        static final int pkg = S.position("package");
+        static final int topology = S.position("topology");
+        static final int channels = S.position("channels");
+        static final int polarity = S.position("input_polarity");
+        static final int iSource = S.position("i_source_a");
+        static final int iSink = S.position("i_sink_a");
+        static final int rSource = S.position("r_source_ohm");
+        static final int rSink = S.position("r_sink_ohm");
+        static final int vSupplyMin = S.position("v_supply_min_v");
+        static final int vSupplyMax = S.position("v_supply_max_v");
+        static final int uvloOn = S.position("uvlo_on_v");
+        static final int uvloOff = S.position("uvlo_off_v");
+        static final int vIh = S.position("v_ih_v");
+        static final int vIl = S.position("v_il_v");
+        static final int vInMax = S.position("v_in_max_v");
+        static final int vOffsetMax = S.position("v_offset_max_v");
+        static final int bootstrapDiode = S.position("bootstrap_diode");
+        static final int iQbs = S.position("i_qbs_ua");
+        static final int vNegMin = S.position("v_neg_min_v");
+        static final int tProp = S.position("t_prop_ns");
+        static final int tMatch = S.position("t_match_ns");
+        static final int millerClamp = S.position("miller_clamp");
+        static final int isolation = S.position("isolation_vrms");
+        static final int pMax = S.position("p_max_w");
+        static final int lifecycle = S.position("lifecycle");
+        static final int stock = S.position("stock");
+        static final int price = S.position("unit_price");
+    }
+
+    /** Input senses as listed, e.g. {@code non-inverting;inverting}; the few distinct lists are decoded once. */
+    private static final java.util.concurrent.ConcurrentHashMap<String, List<Boolean>> POLARITIES =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static List<Boolean> polarities(String text) {
+        List<Boolean> known = POLARITIES.get(text);
+        if (known != null) {
+            return known;
+        }
         List<Boolean> inv = new ArrayList<>();
-        for (String p : r.text("input_polarity").split(";")) {
+        for (String p : text.split(";")) {
             inv.add(p.strip().equals("inverting"));
         }
-        double ch = r.number("channels");
-        return new DriverPart(r.key(), r.text("maker"), r.text("pinout"), r.text("package"),
-                Topology.of(r.text("topology")), Double.isNaN(ch) ? 0 : (int) ch, inv, r.si("i_source_a"),
-                r.si("i_sink_a"), r.si("r_source_ohm"), r.si("r_sink_ohm"), r.si("v_supply_min_v"),
-                r.si("v_supply_max_v"), r.si("uvlo_on_v"), r.si("uvlo_off_v"), r.si("v_ih_v"), r.si("v_il_v"),
-                r.si("v_in_max_v"), r.si("v_offset_max_v"), yesNo(r.text("bootstrap_diode")), r.si("i_qbs_ua"),
-                r.si("v_neg_min_v"), r.si("t_prop_ns"), r.si("t_match_ns"), yesNo(r.text("miller_clamp")),
-                r.si("isolation_vrms"), r.si("p_max_w"), r.text("lifecycle") == null ? "unknown" : r.text("lifecycle"),
-                Double.isNaN(r.number("stock")) ? -1 : (long) r.number("stock"), r.si("unit_price"));
+        List<Boolean> list = List.copyOf(inv);
+        if (POLARITIES.size() < 256) {
+            POLARITIES.putIfAbsent(text, list);
+        }
+        return list;
+    }
+
+    private static DriverPart of(RowCursor r, String key) {
+        double ch = r.number(C.channels);
+        String life = r.text(C.lifecycle);
+        double stock = r.number(C.stock);
+        return new DriverPart(key, r.text(C.maker), r.text(C.pinout), r.text(C.pkg),
+                Topology.of(r.text(C.topology)), Double.isNaN(ch) ? 0 : (int) ch, polarities(r.text(C.polarity)),
+                r.si(C.iSource), r.si(C.iSink), r.si(C.rSource), r.si(C.rSink), r.si(C.vSupplyMin),
+                r.si(C.vSupplyMax), r.si(C.uvloOn), r.si(C.uvloOff), r.si(C.vIh), r.si(C.vIl),
+                r.si(C.vInMax), r.si(C.vOffsetMax), yesNo(r.text(C.bootstrapDiode)), r.si(C.iQbs),
+                r.si(C.vNegMin), r.si(C.tProp), r.si(C.tMatch), yesNo(r.text(C.millerClamp)),
+                r.si(C.isolation), r.si(C.pMax), life == null ? "unknown" : life,
+                Double.isNaN(stock) ? -1 : (long) stock, r.si(C.price));
     }
 
     private static Boolean yesNo(String s) {
         return s == null ? null : s.equals("yes");
+    }
+
+    /** Whether an input_polarity text (as the catalog writes it) lists a channel of this sense; the driver's own reading. */
+    public static boolean offers(String inputPolarity, boolean invertingInput) {
+        return polarities(inputPolarity).contains(invertingInput);
     }
 
     /** Whether any channel is inverting / non-inverting. */

@@ -32,7 +32,12 @@ public final class PairEvaluator {
 
     /** All checks and figures of a pair. */
     public static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
-        return evaluate(d, s, op, m, true);
+        return evaluate(d, prepare(s, op, m));
+    }
+
+    /** All checks and figures of a pair, with the switch side computed once by {@link #prepare}. */
+    public static PairResult evaluate(DriverPart d, Prepared p) {
+        return evaluate(d, p, true);
     }
 
     /**
@@ -41,33 +46,108 @@ public final class PairEvaluator {
      * evaluates the ones it shows in full; verdict and score are identical.
      */
     public static PairResult rank(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
-        return evaluate(d, s, op, m, false);
+        return evaluate(d, prepare(s, op, m), false);
     }
 
-    private static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m, boolean detail) {
-        if (!s.nChannel()) {
-            return pChannel(d, s, op, m);
+    /** The figures of the switch at the operating point that every driver shares, computed once per question. */
+    public static Prepared prepare(SwitchPart s, OperatingPoint op, Margins m) {
+        return new Prepared(s, op, m);
+    }
+
+    /**
+     * The pair's verdict and score and nothing else (no check objects kept, no sentences, no
+     * figures): what ranking a large catalog needs for every candidate. Identical to the verdict
+     * and score of {@link #evaluate} (the rules run the same code; a property test holds them equal).
+     */
+    public static Quick quick(DriverPart d, Prepared p) {
+        if (!p.s.nChannel()) {
+            PairResult r = pChannel(d, p.s, p.op, p.m);
+            return new Quick(r.verdict(), r.score());
         }
-        Calc c = new Calc(d, s, op, detail);
-        List<Check> checks = new ArrayList<>(11);
-        checks.add(guard(Rule.DRIVE_CURRENT, () -> driveCurrent(c, m)));
-        checks.add(guard(Rule.GATE_VOLTAGE, () -> gateVoltage(c, m)));
-        checks.add(guard(Rule.NEGATIVE_BIAS, () -> negativeBias(c, m)));
-        checks.add(guard(Rule.UVLO, () -> uvlo(c, m)));
-        checks.add(guard(Rule.LOGIC_LEVEL, () -> logicLevel(c, m)));
-        checks.add(guard(Rule.POLARITY, () -> polarity(c)));
-        checks.add(guard(Rule.HIGH_SIDE, () -> highSide(c, m)));
-        checks.add(guard(Rule.BOOTSTRAP, () -> bootstrap(c)));
-        checks.add(guard(Rule.DRIVER_POWER, () -> driverPower(c, m)));
-        checks.add(guard(Rule.DV_DT, () -> dvdt(c, m)));
-        checks.add(lifecycle(d, s));
+        Calc c = new Calc(d, p, false);
+        Verdict v = Verdict.PASS;
+        double sum = 0;
+        int w = 0;
+        for (Rule rule : PAIR_RULES) {
+            Check ch = run(rule, c, p.m);
+            v = v.and(ch.verdict());
+            sum += rule.weight() * ch.score();
+            w += rule.weight();
+        }
+        v = v.forPair();
+        return new Quick(v, Score.combine(sum, w, d, p.s, v));
+    }
+
+    /** Verdict and score of a pair (see {@link #quick}). */
+    public record Quick(Verdict verdict, double score) {
+    }
+
+    /** Keeps nothing: the comparisons of checks that are ranked, not shown. */
+    private static final List<Comparison> DISCARD = new java.util.AbstractList<>() {
+        @Override
+        public boolean add(Comparison c) {
+            return false;
+        }
+
+        @Override
+        public Comparison get(int index) {
+            throw new IndexOutOfBoundsException(index);
+        }
+
+        @Override
+        public int size() {
+            return 0;
+        }
+    };
+
+    /** The rules a pair is checked against, in the order checks are listed ({@code catalog} belongs to stage checks). */
+    private static final Rule[] PAIR_RULES = {Rule.DRIVE_CURRENT, Rule.GATE_VOLTAGE, Rule.NEGATIVE_BIAS, Rule.UVLO,
+        Rule.LOGIC_LEVEL, Rule.POLARITY, Rule.HIGH_SIDE, Rule.BOOTSTRAP, Rule.DRIVER_POWER, Rule.DV_DT, Rule.LIFECYCLE};
+
+    private static PairResult evaluate(DriverPart d, Prepared p, boolean detail) {
+        if (!p.s.nChannel()) {
+            return pChannel(d, p.s, p.op, p.m);
+        }
+        Calc c = new Calc(d, p, detail);
+        List<Check> checks = new ArrayList<>(PAIR_RULES.length);
+        for (Rule rule : PAIR_RULES) {
+            checks.add(run(rule, c, p.m));
+        }
         Verdict v = Verdict.PASS;
         for (Check ch : checks) {
             v = v.and(ch.verdict());
         }
         v = v.forPair();
-        return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks,
-                detail ? c.figures() : List.of(), op, m, Double.NaN);
+        return new PairResult(d.partNumber(), p.s.partNumber(), v, Score.of(checks, d, p.s, v), checks,
+                detail ? c.figures() : List.of(), p.op, p.m, Double.NaN);
+    }
+
+    /**
+     * One rule on one pair. A physics function refusing its inputs means the check cannot be made:
+     * unknown, with the reason.
+     */
+    private static Check run(Rule rule, Calc c, Margins m) {
+        try {
+            return switch (rule) {
+                case DRIVE_CURRENT -> driveCurrent(c, m);
+                case GATE_VOLTAGE -> gateVoltage(c, m);
+                case NEGATIVE_BIAS -> negativeBias(c, m);
+                case UVLO -> uvlo(c, m);
+                case LOGIC_LEVEL -> logicLevel(c, m);
+                case POLARITY -> polarity(c);
+                case HIGH_SIDE -> highSide(c, m);
+                case BOOTSTRAP -> bootstrap(c);
+                case DRIVER_POWER -> driverPower(c, m);
+                case DV_DT -> dvdt(c, m);
+                case LIFECYCLE -> lifecycle(c.d, c.s, c.detail);
+                case CATALOG -> throw new IllegalStateException("the catalog rule belongs to stage checks, not to a pair");
+            };
+        } catch (IllegalArgumentException e) {
+            if (rule == Rule.LIFECYCLE) {
+                throw e;
+            }
+            return new Check(rule, Verdict.UNKNOWN, "cannot estimate: " + e.getMessage(), List.of(), Score.UNKNOWN);
+        }
     }
 
     /**
@@ -90,15 +170,6 @@ public final class PairEvaluator {
         v = v.forPair();
         return new PairResult(d.partNumber(), s.partNumber(), v, Score.of(checks, d, s, v), checks, List.of(), op, m,
                 Double.NaN);
-    }
-
-    /** A physics function refusing its inputs means the check cannot be made: unknown, with the reason. */
-    private static Check guard(Rule rule, java.util.function.Supplier<Check> body) {
-        try {
-            return body.get();
-        } catch (IllegalArgumentException e) {
-            return new Check(rule, Verdict.UNKNOWN, "cannot estimate: " + e.getMessage(), List.of(), Score.UNKNOWN);
-        }
     }
 
     // ---------------------------------------------------------------- drive-current
@@ -162,7 +233,7 @@ public final class PairEvaluator {
             return unknown(c, Rule.GATE_VOLTAGE, () -> "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
                     + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
         }
-        List<Comparison> cmp = new ArrayList<>();
+        List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", c.d.vSupplyMin(), "V"));
         cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", c.d.vSupplyMax(), "V"));
         double limit = s.vGsMax() * (1 - m.gateHeadroom());
@@ -237,7 +308,7 @@ public final class PairEvaluator {
             return unknown(c, Rule.NEGATIVE_BIAS, () -> "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
                     + " off level cannot be checked against it — look up the negative gate limit in the datasheet");
         }
-        List<Comparison> cmp = new ArrayList<>();
+        List<Comparison> cmp = c.comparisons();
         double limit = s.vGsMin() * (1 - m.gateHeadroom());
         cmp.add(new Comparison("off level", off, "≥", limit, "V"));
         if (off < 0) {
@@ -290,7 +361,7 @@ public final class PairEvaluator {
             return unknown(c, Rule.UVLO, () -> "this driver's UVLO thresholds are unknown (uvlo_on_v) — check that it starts at "
                     + Eng.of(supply, "V") + " and what its outputs do when the supply sags");
         }
-        List<Comparison> cmp = new ArrayList<>();
+        List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + m.uvloHeadroom(), "V"));
         if (supply < d.uvloOn()) {
             return fail(c, Rule.UVLO, () -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
@@ -344,7 +415,7 @@ public final class PairEvaluator {
             return unknown(c, Rule.LOGIC_LEVEL, () -> "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");
         }
-        List<Comparison> cmp = new ArrayList<>();
+        List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("noise margin high (V_OH − V_IH)", c.nmHigh, "≥", m.logicNoise(), "V"));
         cmp.add(new Comparison("noise margin low (V_IL − V_OL)", c.nmLow, "≥", m.logicNoise(), "V"));
         if (!Double.isNaN(d.vInMax())) {
@@ -488,7 +559,7 @@ public final class PairEvaluator {
         if (Double.isNaN(c.bootDroop)) {
             return unknown(c, Rule.BOOTSTRAP, () -> "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
         }
-        List<Comparison> cmp = new ArrayList<>();
+        List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("allowed droop (V_drive − V_F − UVLO,off)", c.bootDroop, "≥", 0, "V"));
         if (c.bootDroop <= 0) {
             return fail(c, Rule.BOOTSTRAP, () -> "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
@@ -594,16 +665,22 @@ public final class PairEvaluator {
     // ---------------------------------------------------------------- lifecycle
 
     static Check lifecycle(DriverPart d, SwitchPart s) {
-        Verdict v = Verdict.PASS;
+        return lifecycle(d, s, true);
+    }
+
+    /** Lifecycle and stock of both parts; without {@code detail} only verdict and score (ranking). */
+    static Check lifecycle(DriverPart d, SwitchPart s, boolean detail) {
+        if (!detail) {
+            Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
+            boolean noted = !d.lifecycle().equals("active") || !s.lifecycle().equals("active") || d.stock() == 0
+                    || s.stock() == 0;
+            return new Check(Rule.LIFECYCLE, v, "", List.of(),
+                    !noted ? 1 : v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4);
+        }
+        Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
         List<String> notes = new ArrayList<>();
         for (String[] p : new String[][] {{d.partNumber(), d.lifecycle(), Long.toString(d.stock())},
             {s.partNumber(), s.lifecycle(), Long.toString(s.stock())}}) {
-            Verdict pv = switch (p[1]) {
-                case "active" -> Verdict.PASS;
-                case "nrnd", "ltb", "preview" -> Verdict.WARN;
-                case "obsolete" -> Verdict.FAIL;
-                default -> Verdict.UNKNOWN;
-            };
             String what = switch (p[1]) {
                 case "active" -> null;
                 case "nrnd" -> p[0] + " is not recommended for new designs";
@@ -616,10 +693,8 @@ public final class PairEvaluator {
                 notes.add(what);
             }
             if (p[2].equals("0")) {
-                pv = pv.and(Verdict.WARN);
                 notes.add(p[0] + " is out of stock");
             }
-            v = v.and(pv);
         }
         if (notes.isEmpty()) {
             return new Check(Rule.LIFECYCLE, Verdict.PASS, "both parts are active" + (d.stock() > 0 && s.stock() > 0
@@ -629,6 +704,17 @@ public final class PairEvaluator {
                 : " — check availability or plan a second source";
         return new Check(Rule.LIFECYCLE, v, String.join("; ", notes) + fix, List.of(),
                 v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4);
+    }
+
+    /** Verdict of one part's lifecycle and stock (the same table as the sentences of {@link #lifecycle}). */
+    private static Verdict lifecycleVerdict(String lifecycle, long stock) {
+        Verdict pv = switch (lifecycle) {
+            case "active" -> Verdict.PASS;
+            case "nrnd", "ltb", "preview" -> Verdict.WARN;
+            case "obsolete" -> Verdict.FAIL;
+            default -> Verdict.UNKNOWN;
+        };
+        return stock == 0 ? pv.and(Verdict.WARN) : pv;
     }
 
     // ---------------------------------------------------------------- helpers
@@ -657,10 +743,101 @@ public final class PairEvaluator {
         return Double.isNaN(v) ? 0 : v;
     }
 
+    /**
+     * The switch-side figures of a question — gate charge over the actual swing, the current the
+     * edge needs — which every driver shares: {@link #prepare} computes them once per shortlist.
+     */
+    public static final class Prepared {
+        final SwitchPart s;
+        final OperatingPoint op;
+        final Margins m;
+        final int n;
+        final double rInt;
+        final double qSwing;
+        final boolean qEstimated;
+        final double qTotal;
+        final double iReq;
+        /** Whether the switch has a Miller plateau between the off and on levels (turn-on and turn-off times). */
+        final boolean plateau;
+
+        private Prepared(SwitchPart s, OperatingPoint op, Margins m) {
+            this.s = java.util.Objects.requireNonNull(s, "switch");
+            this.op = java.util.Objects.requireNonNull(op, "operating point");
+            this.m = java.util.Objects.requireNonNull(m, "margins");
+            this.n = op.parallel();
+            this.rInt = s.rGIntOrZero();
+            double qs;
+            boolean est;
+            try {
+                // q_g_vgs_v is the swing Q_g is specified over. When it equals the switch's recommended
+                // bipolar swing (e.g. −5 V to +18 V for SiC), the datasheet curve starts at the negative
+                // level: extrapolate from the recommended on level and take the negative part's charge,
+                // C_iss·|V_off,spec|, back out (REFERENCES.md §1 gate-charge curve; an estimate).
+                double vSpec = s.qGVgs();
+                double specNegCharge = 0;
+                if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
+                        && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5) {
+                    vSpec = s.vGateOn();
+                    double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
+                            : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
+                    specNegCharge = cEq * -s.vGateOff();
+                }
+                Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG() - specNegCharge, s.qGs(), s.qGd(), vSpec,
+                        s.vPlateau(), s.cIss(), op.vDrive(), op.vDriveNeg());
+                if (q.isPresent()) {
+                    qs = q.get().coulombs();
+                    est = q.get().estimated() || specNegCharge > 0;
+                } else {
+                    qs = s.qG();
+                    est = true;
+                }
+            } catch (IllegalArgumentException e) {
+                qs = s.qG();
+                est = true;
+            }
+            this.qSwing = qs;
+            this.qEstimated = est;
+            this.qTotal = n * qs;
+            this.iReq = Double.isNaN(qTotal) ? Double.NaN : DriveCurrent.required(qTotal, op.edge());
+            this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
+                    && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
+        }
+
+        /** The switch asked about. */
+        public SwitchPart switchPart() {
+            return s;
+        }
+
+        /** The operating point after defaults. */
+        public OperatingPoint point() {
+            return op;
+        }
+
+        /** The margins applied. */
+        public Margins margins() {
+            return m;
+        }
+
+        /** Total gate charge over the swing (all switches in parallel), C; NaN when Q_g is unknown. */
+        public double gateCharge() {
+            return qTotal;
+        }
+
+        /** Gate current the target edge needs (before the drive-current margin), A; NaN when Q_g is unknown. */
+        public double currentRequired() {
+            return iReq;
+        }
+    }
+
     /** The pair's figures, computed once and shared by the rules. */
     static final class Calc {
         /** Whether checks get their sentences and comparisons (false while ranking). */
         final boolean detail;
+
+        /** A list for a check's comparisons; while ranking, one that keeps nothing. */
+        List<Comparison> comparisons() {
+            return detail ? new ArrayList<>() : DISCARD;
+        }
         final DriverPart d;
         final SwitchPart s;
         final OperatingPoint op;
@@ -706,42 +883,19 @@ public final class PairEvaluator {
         double vInduced = Double.NaN;
         double dvdtAllowed = Double.NaN;
 
-        Calc(DriverPart d, SwitchPart s, OperatingPoint op, boolean detail) {
+        Calc(DriverPart d, Prepared p, boolean detail) {
             this.detail = detail;
             this.d = d;
-            this.s = s;
-            this.op = op;
-            this.n = op.parallel();
-            this.rInt = s.rGIntOrZero();
+            this.s = p.s;
+            this.op = p.op;
+            this.n = p.n;
+            this.rInt = p.rInt;
+            SwitchPart s = p.s;
+            OperatingPoint op = p.op;
             double swing = op.swing();
-            try {
-                // q_g_vgs_v is the swing Q_g is specified over. When it equals the switch's recommended
-                // bipolar swing (e.g. −5 V to +18 V for SiC), the datasheet curve starts at the negative
-                // level: extrapolate from the recommended on level and take the negative part's charge,
-                // C_iss·|V_off,spec|, back out (REFERENCES.md §1 gate-charge curve; an estimate).
-                double vSpec = s.qGVgs();
-                double specNegCharge = 0;
-                if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
-                        && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5) {
-                    vSpec = s.vGateOn();
-                    double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
-                            : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
-                    specNegCharge = cEq * -s.vGateOff();
-                }
-                Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG() - specNegCharge, s.qGs(), s.qGd(), vSpec,
-                        s.vPlateau(), s.cIss(), op.vDrive(), op.vDriveNeg());
-                if (q.isPresent()) {
-                    qSwing = q.get().coulombs();
-                    qEstimated = q.get().estimated() || specNegCharge > 0;
-                } else {
-                    qSwing = s.qG();
-                    qEstimated = true;
-                }
-            } catch (IllegalArgumentException e) {
-                qSwing = s.qG();
-                qEstimated = true;
-            }
-            qTotal = n * qSwing;
+            qSwing = p.qSwing;
+            qEstimated = p.qEstimated;
+            qTotal = p.qTotal;
             DriveCurrent.DriverResistance src = DriveCurrent.outputResistance(d.rSource(), swing, d.iSource());
             DriveCurrent.DriverResistance snk = DriveCurrent.outputResistance(d.rSink(), swing, d.iSink());
             rSrc = src.ohms();
@@ -753,21 +907,20 @@ public final class PairEvaluator {
             // Q_g is a required column, but a part built elsewhere may lack it: every figure that
             // needs it stays unknown (NaN) and the rules that use them say unknown.
             boolean qKnown = !Double.isNaN(qTotal);
-            iReq = qKnown ? DriveCurrent.required(qTotal, op.edge()) : Double.NaN;
+            iReq = p.iReq;
             iPkSrc = rOnTot > 0 ? Math.min(d.iSource(), swing / rOnTot) : d.iSource();
             iPkSnk = rOffTot > 0 ? Math.min(d.iSink(), swing / rOffTot) : d.iSink();
-            boolean plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
-                    && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
-            if (plateau && rOnTot > 0 && rOffTot > 0) {
+            if (p.plateau && rOnTot > 0 && rOffTot > 0) {
                 plateauOn = SwitchingTimes.plateauOn(n * s.qGd(), rOnTot, op.vDrive(), s.vPlateau());
                 plateauOff = SwitchingTimes.plateauOff(n * s.qGd(), rOffTot, s.vPlateau(), op.vDriveNeg());
-                if (!Double.isNaN(s.cIss())) {
+                // Delay times are figures only (no rule reads them): skipped while ranking.
+                if (detail && !Double.isNaN(s.cIss())) {
                     delayOn = SwitchingTimes.delayOn(rOnTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
                     delayOff = SwitchingTimes.delayOff(rOffTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
                 }
             }
             if (qKnown && rOnTot > 0 && rOffTot > 0) {
-                pGate = GatePower.total(qTotal, swing, op.fSw());
+                pGate = detail ? GatePower.total(qTotal, swing, op.fSw()) : Double.NaN;
                 GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
                         rInt / n);
                 double hs = op.highSide() && d.topology().bootstrapped() && !Double.isNaN(d.iQbs())
@@ -776,7 +929,8 @@ public final class PairEvaluator {
                 pExternal = split.external();
                 pInternal = split.internal();
             }
-            if (!Double.isNaN(s.cIss()) && s.cIss() > 0) {
+            // The gate-loop figures and the recommended resistor are shown, never ruled on: skipped while ranking.
+            if (detail && !Double.isNaN(s.cIss()) && s.cIss() > 0) {
                 double cg = n * s.cIss();
                 rCrit = GateLoop.criticalResistance(op.loop(), cg);
                 zeta = GateLoop.dampingRatio(rOnTot, op.loop(), cg);
@@ -817,7 +971,7 @@ public final class PairEvaluator {
                         bootCRec = Bootstrap.recommended(bootCMin);
                         bootDutyMax = Bootstrap.maxDuty(Bootstrap.refreshTime(op.rBoot(), bootCRec,
                                 Bootstrap.REFRESH_TIME_CONSTANTS), op.fSw());
-                        if (op.rBoot() > 0) {
+                        if (detail && op.rBoot() > 0) {
                             bootInrush = Bootstrap.inrush(op.vDrive(), op.diodeDrop(), op.rBoot());
                         }
                     }
@@ -838,7 +992,7 @@ public final class PairEvaluator {
             if (!Double.isNaN(slew) && !Double.isNaN(s.cRss()) && !Double.isNaN(s.cIss()) && slew > 0) {
                 double step = Double.isNaN(op.bus()) ? slew * 1e-6 : op.bus();
                 vInduced = rOffPath > 0 ? DvDt.induced(s.cRss(), slew, rOffPath, s.cIss(), step) : 0;
-                if (!Double.isNaN(s.vThMin()) && s.vThMin() > 0 && rOffPath > 0 && step > 0) {
+                if (detail && !Double.isNaN(s.vThMin()) && s.vThMin() > 0 && rOffPath > 0 && step > 0) {
                     dvdtAllowed = DvDt.allowedRcLimited(s.cRss(), rOffPath, s.cIss(), step, s.vThMin(), op.vDriveNeg());
                 }
             } else if (!Double.isNaN(slew) && !Double.isNaN(s.cRss())) {

@@ -56,6 +56,11 @@ public final class Score {
             sum += weight * c.score();
             w += weight;
         }
+        return combine(sum, w, d, s, pair);
+    }
+
+    /** The score from the weighted sum of sub-scores and the weights' total (steps 2 to 4 above). */
+    static double combine(double sum, double w, DriverPart d, SwitchPart s, Verdict pair) {
         double electrical = w == 0 ? 0 : sum / w;
         double score = electrical * availability(d.lifecycle(), d.stock()) * availability(s.lifecycle(), s.stock());
         if (pair == Verdict.FAIL) {

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.gatefit.catalog.Numbers;
-import org.gatefit.catalog.Row;
+import org.gatefit.catalog.RowCursor;
 
 /**
  * Ranks the catalog's drivers for one switch at one operating point.
@@ -31,10 +31,11 @@ public final class Shortlist {
      * @param passing      of those, how many pass
      * @param warning      how many warn
      * @param failing      how many fail
+     * @param skipped      drivers the prefilter skipped without evaluating (each certain to fail)
      * @param prefilter    the catalog conditions used to skip drivers that must fail
      */
     public record Result(SwitchPart switchPart, OperatingPoint point, Margins margins, List<PairResult> candidates,
-                         int evaluated, int passing, int warning, int failing, List<String> prefilter) {
+                         int evaluated, int passing, int warning, int failing, int skipped, List<String> prefilter) {
         public Result {
             candidates = List.copyOf(candidates);
             prefilter = List.copyOf(prefilter);
@@ -61,65 +62,241 @@ public final class Shortlist {
     }
 
     /**
-     * Streams drivers through the rules and keeps only the best {@code top} (a bounded heap), so
-     * memory does not grow with the catalog.
+     * What the catalog may skip without evaluating: drivers that a rule is certain to fail on
+     * values they have (never on a value they lack).
+     *
+     * @param require conditions every driver left must meet ({@code column op value}, as {@code find --where})
+     * @param exclude groups of conditions: a driver meeting every condition of a group is skipped
      */
-    public static final class Ranker implements java.util.function.Consumer<Row> {
-        private final SwitchPart sw;
-        private final OperatingPoint op;
-        private final Margins m;
+    public record Prefilter(List<String> require, List<Exclusion> exclude) {
+        public Prefilter {
+            require = List.copyOf(require);
+            exclude = List.copyOf(exclude);
+        }
+
+        /** No prefilter: every driver is evaluated (p-channel switches, {@code --all}). */
+        public static final Prefilter NONE = new Prefilter(List.of(), List.of());
+
+        /** One line per condition, as printed with the results. */
+        public List<String> describe() {
+            List<String> out = new ArrayList<>(require);
+            for (Exclusion e : exclude) {
+                List<String> parts = new ArrayList<>(e.when());
+                for (String k : e.known()) {
+                    parts.add(k + " known");
+                }
+                if (e.text() != null) {
+                    parts.add(e.text().says());
+                }
+                out.add("skip " + String.join(" and ", parts) + " (" + e.rule().id() + " fails)");
+            }
+            return out;
+        }
+    }
+
+    /**
+     * Drivers meeting every condition of {@code when}, with values in the {@code known} columns and
+     * passing {@code text} (null: no text test), fail {@code rule}.
+     */
+    public record Exclusion(Rule rule, List<String> when, List<String> known, TextTest text) {
+        public Exclusion {
+            when = List.copyOf(when);
+            known = List.copyOf(known);
+        }
+
+        Exclusion(Rule rule, List<String> when) {
+            this(rule, when, List.of(), null);
+        }
+    }
+
+    /**
+     * A test of a text column's value as written.
+     *
+     * @param says how it reads in the printed prefilter
+     */
+    public record TextTest(String column, String says, java.util.function.Predicate<String> test) {
+    }
+
+    /**
+     * The prefilter for a question: conditions on a driver's own values that make one of the
+     * rules fail, whatever its other values (each is checked against the rules by
+     * {@code ShortlistPrefilterTest}). A p-channel switch gets none (its electrical checks are
+     * unknown, so no driver is certain to fail).
+     */
+    public static Prefilter prefilter(PairEvaluator.Prepared p) {
+        SwitchPart s = p.switchPart();
+        OperatingPoint op = p.point();
+        Margins m = p.margins();
+        if (!s.nChannel()) {
+            return Prefilter.NONE;
+        }
+        List<String> require = new ArrayList<>();
+        List<Exclusion> exclude = new ArrayList<>();
+        String swing = Numbers.format(op.swing());
+        if (op.highSide()) {
+            require.add("topology != low-side");                    // high-side: cannot float
+        }
+        if (!Double.isNaN(s.vGsMax())) {                              // gate-voltage: supply range
+            require.add("v_supply_max_v >= " + swing);
+            require.add("v_supply_min_v <= " + swing);
+        }
+        double iReq = p.currentRequired();
+        if (!Double.isNaN(iReq) && iReq > 0) {
+            // drive-current: the peak through the loop never exceeds the rated peak, and a ratio
+            // below 1 (or below the margin, when the margin is under 1) fails.
+            String need = Numbers.format(iReq * Math.min(1, m.driveCurrent()));
+            require.add("i_source_a >= " + need);
+            require.add("i_sink_a >= " + need);
+        }
+        if (op.highSide() && !Double.isNaN(op.bus())) {
+            String bus = Numbers.format(op.bus());
+            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = high-side", "v_offset_max_v < " + bus)));
+            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = half-bridge", "v_offset_max_v < " + bus)));
+            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = isolated", "isolation_vrms < " + bus)));
+        }
+        exclude.add(new Exclusion(Rule.UVLO, List.of("uvlo_on_v > " + swing)));
+        if (op.vDriveNeg() < 0 && !Double.isNaN(s.vGsMin()) && op.vDriveNeg() >= s.vGsMin()) {
+            exclude.add(new Exclusion(Rule.NEGATIVE_BIAS, List.of("v_neg_min_v > " + Numbers.format(op.vDriveNeg()))));
+        }
+        // logic-level: with both thresholds known, a negative noise margin or an input maximum below
+        // the controller's high level fails.
+        if (Double.isFinite(op.vOh())) {
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_ih_v > " + Numbers.format(op.vOh())),
+                    List.of("v_il_v"), null));
+        }
+        if (Double.isFinite(op.vOl())) {
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_il_v < " + Numbers.format(op.vOl())),
+                    List.of("v_ih_v"), null));
+        }
+        if (Double.isFinite(op.vOhMax())) {
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_in_max_v < " + Numbers.format(op.vOhMax())),
+                    List.of("v_ih_v", "v_il_v"), null));
+        }
+        // polarity: no channel of the PWM's sense.
+        boolean wantInverting = !op.activeHigh();
+        String sense = wantInverting ? "inverting" : "non-inverting";
+        exclude.add(new Exclusion(Rule.POLARITY, List.of(), List.of(), new TextTest("input_polarity",
+                "input_polarity without a " + sense + " channel", t -> !DriverPart.offers(t, wantInverting))));
+        exclude.add(new Exclusion(Rule.LIFECYCLE, List.of("lifecycle = obsolete")));
+        return new Prefilter(require, exclude);
+    }
+
+    /** Best first, as {@link #RANKING} orders the full results: verdict, score, price (unknown last), part number. */
+    private static final Comparator<Ranked> RANKED = Comparator
+            .comparing((Ranked r) -> r.verdict().ordinal())
+            .thenComparing(Comparator.comparingDouble(Ranked::score).reversed())
+            .thenComparingDouble(r -> Double.isNaN(r.driver().price()) ? Double.MAX_VALUE : r.driver().price())
+            .thenComparing(r -> r.driver().partNumber());
+
+    /** A driver with its verdict and score, before its checks are worded. */
+    private record Ranked(DriverPart driver, Verdict verdict, double score) {
+    }
+
+    /**
+     * Streams drivers through the rules and keeps only the best {@code top} (a bounded heap), so
+     * memory does not grow with the catalog. A catalog scan split across threads gives each
+     * partition its own ranker ({@link #sibling}); {@link #merge} joins them.
+     */
+    public static final class Ranker implements java.util.function.Consumer<RowCursor> {
+        private final PairEvaluator.Prepared prepared;
         private final int top;
         private final boolean all;
         private final List<String> prefilterUsed;
+        private final int skipped;
         private final java.util.PriorityQueue<Ranked> best;
         private int pass;
         private int warn;
         private int fail;
 
         public Ranker(SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all, List<String> prefilterUsed) {
+            this(PairEvaluator.prepare(sw, op, m), top, all, prefilterUsed, 0);
+        }
+
+        /**
+         * @param skipped drivers the catalog skipped by the prefilter (each certain to fail), for the counts
+         */
+        public Ranker(PairEvaluator.Prepared prepared, int top, boolean all, List<String> prefilterUsed, int skipped) {
             if (top < 1) {
                 throw new IllegalArgumentException("expected --top of at least 1, got " + top);
             }
-            this.sw = sw;
-            this.op = op;
-            this.m = m;
+            this.prepared = prepared;
             this.top = top;
             this.all = all;
             this.prefilterUsed = List.copyOf(prefilterUsed);
-            this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1,
-                    java.util.Comparator.comparing(Ranked::result, RANKING).reversed());
+            this.skipped = skipped;
+            this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1, RANKED.reversed());
         }
 
-        /** A driver with its verdict and score, before its checks are worded. */
-        private record Ranked(DriverPart driver, PairResult result) {
+        /** Drivers ranked so far. */
+        public int evaluated() {
+            return pass + warn + fail;
+        }
+
+        /** A ranker for another partition of the same scan. */
+        public Ranker sibling() {
+            return new Ranker(prepared, top, all, prefilterUsed, 0);
         }
 
         @Override
-        public void accept(Row r) {
+        public void accept(RowCursor r) {
             DriverPart d = DriverPart.of(r);
-            PairResult pr = PairEvaluator.rank(d, sw, op, m).withPrice(d.price());
-            switch (pr.verdict()) {
+            if (d != null) {
+                accept(d);
+            }
+        }
+
+        /** Ranks one driver. */
+        public void accept(DriverPart d) {
+            PairEvaluator.Quick q = PairEvaluator.quick(d, prepared);
+            switch (q.verdict()) {
                 case PASS -> pass++;
                 case WARN, UNKNOWN -> warn++;
                 case FAIL -> fail++;
             }
-            if (!all && pr.verdict() == Verdict.FAIL) {
+            if (!all && q.verdict() == Verdict.FAIL) {
                 return;
             }
-            best.add(new Ranked(d, pr));
-            if (best.size() > top) {
+            Ranked x = new Ranked(d, q.verdict(), q.score());
+            if (best.size() < top) {
+                best.add(x);
+            } else if (RANKED.compare(x, best.peek()) < 0) {
                 best.poll();
+                best.add(x);
             }
+        }
+
+        /** The rankers of all partitions as one (this one's settings, everyone's drivers). */
+        public static Ranker merge(List<Ranker> parts, int skipped) {
+            if (parts.isEmpty()) {
+                throw new IllegalArgumentException("expected at least one ranker, got none");
+            }
+            Ranker first = parts.get(0);
+            Ranker all = new Ranker(first.prepared, first.top, first.all, first.prefilterUsed, skipped);
+            for (Ranker r : parts) {
+                all.pass += r.pass;
+                all.warn += r.warn;
+                all.fail += r.fail;
+                for (Ranked x : r.best) {
+                    if (all.best.size() < all.top) {
+                        all.best.add(x);
+                    } else if (RANKED.compare(x, all.best.peek()) < 0) {
+                        all.best.poll();
+                        all.best.add(x);
+                    }
+                }
+            }
+            return all;
         }
 
         /** The best drivers, best first, each evaluated in full (sentences, comparisons, figures). */
         public Result result() {
             List<PairResult> out = new ArrayList<>(best.size());
             for (Ranked x : best) {
-                out.add(PairEvaluator.evaluate(x.driver(), sw, op, m).withPrice(x.driver().price()));
+                out.add(PairEvaluator.evaluate(x.driver(), prepared).withPrice(x.driver().price()));
             }
             out.sort(RANKING);
-            return new Result(sw, op, m, out, pass + warn + fail, pass, warn, fail, prefilterUsed);
+            return new Result(prepared.switchPart(), prepared.point(), prepared.margins(), out, pass + warn + fail, pass,
+                    warn, fail, skipped, prefilterUsed);
         }
     }
 }

@@ -75,6 +75,17 @@ public enum ESeries {
 
     /** m·10^e, computed so that exact decimal values round once (10^e is exact for |e| ≤ 22). */
     private static double scaled(int m, int e) {
-        return e >= 0 ? m * Math.pow(10, e) : m / Math.pow(10, -e);
+        int k = Math.abs(e);
+        double p = k < POW10.length ? POW10[k] : Math.pow(10, k);
+        return e >= 0 ? m * p : m / p;
+    }
+
+    /** Math.pow(10, k) for k = 0 … 308, computed once (rounding runs per candidate while ranking). */
+    private static final double[] POW10 = new double[309];
+
+    static {
+        for (int k = 0; k < POW10.length; k++) {
+            POW10[k] = Math.pow(10, k);
+        }
     }
 }

@@ -49,7 +49,8 @@ final class MatchHtml {
         out.write("<p class=\"summary\">" + Html.esc(MatchReports.switchLine(s)) + (s.maker() == null ? ""
                 : " by " + Html.esc(s.maker())) + ": " + r.evaluated() + " evaluated, " + Html.verdict(Verdict.PASS) + " "
                 + r.passing() + ", " + Html.verdict(Verdict.WARN) + " " + r.warning() + ", " + Html.verdict(Verdict.FAIL)
-                + " " + r.failing() + "</p>\n");
+                + " " + r.failing() + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain"
+                + " to fail)" : "") + "</p>\n");
         out.write(Html.context(context(r.point(), r.margins(), r.prefilter())));
         out.write("<h2>Ranking</h2>\n");
         if (r.candidates().isEmpty()) {

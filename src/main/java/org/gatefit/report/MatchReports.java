@@ -46,7 +46,8 @@ public final class MatchReports {
 
     private static void shortlistText(Shortlist.Result r, Writer out, boolean md, boolean colour) throws IOException {
         String head = "Drivers for " + switchLine(r.switchPart()) + ": " + r.evaluated() + " evaluated, " + r.passing()
-                + " pass, " + r.warning() + " warn, " + r.failing() + " fail";
+                + " pass, " + r.warning() + " warn, " + r.failing() + " fail"
+                + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain to fail)" : "");
         out.write(md ? "## " + Markdown.escape(head) + "\n\n" : Wrap.wrap(head, WIDTH, 2) + "\n");
         context(out, md, r.point(), r.margins(), r.prefilter());
         out.write("\n");
@@ -164,6 +165,7 @@ public final class MatchReports {
             g.writeNumberField("passing", r.passing());
             g.writeNumberField("warning", r.warning());
             g.writeNumberField("failing", r.failing());
+            g.writeNumberField("skipped", r.skipped());
             MatchJson.point(g, r.point());
             MatchJson.margins(g, r.margins());
             g.writeArrayFieldStart("prefilter");
