@@ -29,6 +29,15 @@ public interface RowCursor {
         return u == null ? v : u.toSi(v);
     }
 
+    /**
+     * What {@code make} builds from this row; a catalog that keeps its decoded columns also keeps
+     * this object per part (one per {@code key}), so a later scan gets it without rebuilding.
+     * {@code make} must depend on the row only, and what it returns must not change.
+     */
+    default <T> T memo(Object key, java.util.function.Function<RowCursor, T> make) {
+        return make.apply(this);
+    }
+
     /** A cursor over one row. */
     static RowCursor of(Row row) {
         List<Column> cols = Schema.of(row.kind()).columns();

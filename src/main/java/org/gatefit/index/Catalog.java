@@ -61,6 +61,8 @@ public final class Catalog implements AutoCloseable {
     private final IndexSearcher searcher;
     /** Decoded columns per segment, when {@link #keepColumns} is on; null otherwise. */
     private volatile java.util.concurrent.ConcurrentHashMap<Long, Object> columns;
+    /** Objects built from rows ({@link RowCursor#memo}) per segment and key, when {@link #keepColumns} is on. */
+    private volatile java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos;
 
     private Catalog(Path dir, Directory directory, DirectoryReader reader) {
         this.dir = dir;
@@ -100,6 +102,7 @@ public final class Catalog implements AutoCloseable {
      */
     public Catalog keepColumns(boolean keep) {
         columns = keep ? new java.util.concurrent.ConcurrentHashMap<>() : null;
+        memos = keep ? new java.util.concurrent.ConcurrentHashMap<>() : null;
         return this;
     }
 
@@ -358,7 +361,7 @@ public final class Catalog implements AutoCloseable {
                 }
                 LeafReader lr = leaf.reader();
                 Bits live = lr.getLiveDocs();
-                LeafCursor cursor = new LeafCursor(kind, lr, columns, part[0]);
+                LeafCursor cursor = new LeafCursor(kind, lr, columns, memos, part[0]);
                 DocIdSetIterator it = sc.iterator();
                 int end = part[2];
                 for (int doc = it.advance(part[1]); doc < end; doc = it.nextDoc()) {
@@ -394,8 +397,18 @@ public final class Catalog implements AutoCloseable {
         private final java.util.concurrent.ConcurrentHashMap<Long, Object> cache;
         private final long slot;
         private final Object[] decoded;
+        private final java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos;
+        private final int leaf;
+        /** Objects kept per document for one {@link #memo} key (the last key asked for). */
+        private Object memoKey;
+        private Object[] memoSlots;
+        /** Each column's unit (null: none), for {@link #si} without a schema lookup per value. */
+        private final org.gatefit.catalog.Unit[] units;
 
-        LeafCursor(Kind kind, LeafReader lr, java.util.concurrent.ConcurrentHashMap<Long, Object> cache, int leaf) {
+        LeafCursor(Kind kind, LeafReader lr, java.util.concurrent.ConcurrentHashMap<Long, Object> cache,
+                   java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos, int leaf) {
+            this.memos = memos;
+            this.leaf = leaf;
             this.kind = kind;
             this.lr = lr;
             this.cache = cache;
@@ -410,6 +423,10 @@ public final class Catalog implements AutoCloseable {
             this.raw = new long[n];
             this.present = new boolean[n];
             this.decoded = new Object[n];
+            this.units = new org.gatefit.catalog.Unit[n];
+            for (int i = 0; i < n; i++) {
+                units[i] = cols.get(i).unit();
+            }
         }
 
         /** Column {@code i} of this segment decoded (built on first use, shared by every scan of the catalog). */
@@ -510,6 +527,36 @@ public final class Catalog implements AutoCloseable {
             }
             present[i] = has;
             return has;
+        }
+
+        @Override
+        @SuppressWarnings("unchecked")
+        public <T> T memo(Object key, java.util.function.Function<RowCursor, T> make) {
+            if (memos == null) {
+                return make.apply(this);
+            }
+            if (memoKey != key) {
+                // One array per segment and key, shared by every scan of the catalog; partitions write
+                // disjoint document ranges, and a later scan sees them after the executor hand-off.
+                memoSlots = memos.computeIfAbsent(List.of(leaf, key), k -> new Object[lr.maxDoc()]);
+                memoKey = key;
+            }
+            Object o = memoSlots[doc];
+            if (o == null) {
+                o = make.apply(this);
+                memoSlots[doc] = o;
+            }
+            return (T) o;
+        }
+
+        @Override
+        public double si(int column) {
+            double v = number(column);
+            if (Double.isNaN(v)) {
+                return v;
+            }
+            org.gatefit.catalog.Unit u = units[column];
+            return u == null ? v : u.toSi(v);
         }
 
         @Override

@@ -44,8 +44,10 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
         if (r.kind() != Kind.DRIVER) {
             throw new IllegalArgumentException("expected a driver row, got " + r.kind());
         }
-        String key = r.text(C.partNumber);
-        return key == null ? null : of(r, key);
+        return r.memo(DriverPart.class, x -> {
+            String key = x.text(C.partNumber);
+            return key == null ? null : of(x, key);
+        });
     }
 
     /** Column positions in the driver schema, resolved once. */

@@ -60,27 +60,65 @@ public final class PairEvaluator {
      * and score of {@link #evaluate} (the rules run the same code; a property test holds them equal).
      */
     public static Quick quick(DriverPart d, Prepared p) {
-        if (!p.s.nChannel()) {
-            PairResult r = pChannel(d, p.s, p.op, p.m);
-            return new Quick(r.verdict(), r.score());
+        Ranking r = new Ranking(p);
+        r.rank(d);
+        return new Quick(r.verdict(), r.score());
+    }
+
+    /**
+     * Verdicts and scores for one question, driver after driver, with one calculation reused (a
+     * ranker keeps one per thread, so ranking allocates next to nothing per driver). Not thread-safe.
+     */
+    public static final class Ranking {
+        private final Prepared p;
+        private final Calc c;
+        private Verdict verdict;
+        private double score;
+
+        public Ranking(Prepared p) {
+            this.p = p;
+            this.c = new Calc(p, false);
         }
-        Calc c = new Calc(d, p, false);
-        Verdict v = Verdict.PASS;
-        double sum = 0;
-        int w = 0;
-        for (Rule rule : PAIR_RULES) {
-            Check ch = run(rule, c, p.m);
-            v = v.and(ch.verdict());
-            sum += rule.weight() * ch.score();
-            w += rule.weight();
+
+        /** Ranks one driver; {@link #verdict()} and {@link #score()} then hold its outcome. */
+        public void rank(DriverPart d) {
+            if (!p.s.nChannel()) {
+                PairResult r = pChannel(d, p.s, p.op, p.m);
+                verdict = r.verdict();
+                score = r.score();
+                return;
+            }
+            c.load(d);
+            Verdict v = Verdict.PASS;
+            double sum = 0;
+            int w = 0;
+            for (Rule rule : PAIR_RULES) {
+                Check ch = run(rule, c, p.m);
+                Verdict rv = ch == QUICK ? c.lastVerdict : ch.verdict();
+                double rs = ch == QUICK ? c.lastScore : ch.score();
+                v = v.and(rv);
+                sum += rule.weight() * rs;
+                w += rule.weight();
+            }
+            verdict = v.forPair();
+            score = Score.combine(sum, w, d, p.s, verdict);
         }
-        v = v.forPair();
-        return new Quick(v, Score.combine(sum, w, d, p.s, v));
+
+        public Verdict verdict() {
+            return verdict;
+        }
+
+        public double score() {
+            return score;
+        }
     }
 
     /** Verdict and score of a pair (see {@link #quick}). */
     public record Quick(Verdict verdict, double score) {
     }
+
+    /** Marks a ranked rule whose outcome is in {@link Calc#lastVerdict} and {@link Calc#lastScore}. */
+    private static final Check QUICK = new Check(Rule.CATALOG, Verdict.UNKNOWN, "", List.of(), 0);
 
     /** Keeps nothing: the comparisons of checks that are ranked, not shown. */
     private static final List<Comparison> DISCARD = new java.util.AbstractList<>() {
@@ -111,7 +149,8 @@ public final class PairEvaluator {
         Calc c = new Calc(d, p, detail);
         List<Check> checks = new ArrayList<>(PAIR_RULES.length);
         for (Rule rule : PAIR_RULES) {
-            checks.add(run(rule, c, p.m));
+            Check ch = run(rule, c, p.m);
+            checks.add(ch == QUICK ? new Check(rule, c.lastVerdict, "", List.of(), c.lastScore) : ch);
         }
         Verdict v = Verdict.PASS;
         for (Check ch : checks) {
@@ -176,7 +215,8 @@ public final class PairEvaluator {
 
     static Check driveCurrent(Calc c, Margins m) {
         if (Double.isNaN(c.qTotal)) {
-            return unknown(c, Rule.DRIVE_CURRENT, () -> "gate charge unknown");
+            return !c.detail ? c.quick(Rule.DRIVE_CURRENT, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.DRIVE_CURRENT, () -> "gate charge unknown");
         }
         double need = c.iReq * m.driveCurrent();
         double srcRatio = c.iPkSrc / c.iReq;
@@ -186,7 +226,7 @@ public final class PairEvaluator {
         double rated = sourceWorse ? c.d.iSource() : c.d.iSink();
         double rLoop = sourceWorse ? c.rOnTot : c.rOffTot;
         double ratio = Math.min(srcRatio, snkRatio);
-        List<Comparison> cmp = List.of(
+        List<Comparison> cmp = !c.detail ? List.of() : List.of(
                 new Comparison("peak source current (turn-on)", c.iPkSrc, "≥", need, "A"),
                 new Comparison("peak sink current (turn-off)", c.iPkSnk, "≥", need, "A"));
         String edge = c.detail ? (Eng.of(c.op.edge(), "s")) : "";
@@ -195,15 +235,18 @@ public final class PairEvaluator {
         String gives = c.detail ? ("this driver " + (sourceWorse ? "sources " : "sinks ") + Eng.of(have, "A") + " through "
                 + Eng.of(rLoop, "Ω") + (have >= rated ? " (its rated peak)" : "")) : "";
         if (ratio >= m.driveCurrent()) {
-            return check(c, Rule.DRIVE_CURRENT, Verdict.PASS, () -> what + "; " + gives, cmp,
+            return !c.detail ? c.quick(Rule.DRIVE_CURRENT, Verdict.PASS, Score.pass((ratio - m.driveCurrent()) / m.driveCurrent()))
+                    : check(c, Rule.DRIVE_CURRENT, Verdict.PASS, () -> what + "; " + gives, cmp,
                     Score.pass((ratio - m.driveCurrent()) / m.driveCurrent()));
         }
         String fix = c.detail ? (fixCurrent(c, need, sourceWorse)) : "";
         if (ratio >= 1) {
-            return check(c, Rule.DRIVE_CURRENT, Verdict.WARN, () -> what + "; " + gives + ", less margin than asked — "
+            return !c.detail ? c.quick(Rule.DRIVE_CURRENT, Verdict.WARN, Score.warn((ratio - 1) / (m.driveCurrent() - 1)))
+                    : check(c, Rule.DRIVE_CURRENT, Verdict.WARN, () -> what + "; " + gives + ", less margin than asked — "
                     + fix, cmp, Score.warn((ratio - 1) / (m.driveCurrent() - 1)));
         }
-        return check(c, Rule.DRIVE_CURRENT, Verdict.FAIL, () -> what + "; " + gives + " — " + fix, cmp, 0);
+        return !c.detail ? c.quick(Rule.DRIVE_CURRENT, Verdict.FAIL, 0)
+                : check(c, Rule.DRIVE_CURRENT, Verdict.FAIL, () -> what + "; " + gives + " — " + fix, cmp, 0);
     }
 
     private static String fixCurrent(Calc c, double need, boolean source) {
@@ -230,7 +273,8 @@ public final class PairEvaluator {
         double on = op.vDrive();
         double swing = op.swing();
         if (Double.isNaN(s.vGsMax())) {
-            return unknown(c, Rule.GATE_VOLTAGE, () -> "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.GATE_VOLTAGE, () -> "the switch's V_GS,max (v_gs_max_v) is unknown, so the " + Eng.of(on, "V")
                     + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
         }
         List<Comparison> cmp = c.comparisons();
@@ -246,45 +290,53 @@ public final class PairEvaluator {
             cmp.add(new Comparison("on level (above threshold)", on, "≥", s.vThMax(), "V"));
         }
         if (swing > c.d.vSupplyMax()) {
-            return fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.FAIL, 0)
+                    : fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
                     + Eng.of(op.vDriveNeg(), "V") + ") exceeds this driver's " + Eng.of(c.d.vSupplyMax(), "V")
                     + " maximum — lower the drive levels or pick a driver rated ≥ " + Eng.of(swing, "V"), cmp);
         }
         if (swing < c.d.vSupplyMin()) {
-            return fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply is below this driver's "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.FAIL, 0)
+                    : fail(c, Rule.GATE_VOLTAGE, () -> "the " + Eng.of(swing, "V") + " supply is below this driver's "
                     + Eng.of(c.d.vSupplyMin(), "V") + " minimum — raise the supply or pick a driver that runs from "
                     + Eng.of(swing, "V"), cmp);
         }
         if (on > s.vGsMax()) {
-            return fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.FAIL, 0)
+                    : fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
                     + Eng.of(s.vGsMax(), "V") + " and will damage the gate — drive at " + Eng.of(limit, "V")
                     + " or less" + (Double.isNaN(s.vGateOn()) ? "" : " (recommended " + Eng.of(s.vGateOn(), "V") + ")"), cmp);
         }
         if (!Double.isNaN(s.vThMax()) && on <= s.vThMax()) {
-            return fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " does not exceed V_th,max "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.FAIL, 0)
+                    : fail(c, Rule.GATE_VOLTAGE, () -> "on level " + Eng.of(on, "V") + " does not exceed V_th,max "
                     + Eng.of(s.vThMax(), "V") + ", so the switch may not turn on — drive at "
                     + Eng.of(Double.isNaN(full) ? s.vThMax() * 2 : full, "V") + " or more", cmp);
         }
         if (on > limit) {
-            return check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is within "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.WARN, Score.warn((s.vGsMax() - on) / (s.vGsMax() - limit)))
+                    : check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is within "
                     + Eng.pct(m.gateHeadroom()) + " of V_GS,max " + Eng.of(s.vGsMax(), "V")
                     + ", leaving little room for overshoot — drive at " + Eng.of(limit, "V") + " or less, or damp the gate loop",
                     cmp, Score.warn((s.vGsMax() - on) / (s.vGsMax() - limit)));
         }
         if (Double.isNaN(full)) {
-            return check(c, Rule.GATE_VOLTAGE, Verdict.UNKNOWN, () -> "on level " + Eng.of(on, "V") + " is within the limits,"
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : check(c, Rule.GATE_VOLTAGE, Verdict.UNKNOWN, () -> "on level " + Eng.of(on, "V") + " is within the limits,"
                     + " but the level R_on is specified at (r_on_vgs_v) is unknown — check full enhancement in the datasheet",
                     cmp, Score.UNKNOWN);
         }
         if (on < full) {
             double frac = Double.isNaN(s.vThMax()) ? 0.5 : (on - s.vThMax()) / (full - s.vThMax());
-            return check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is below the "
+            return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.WARN, Score.warn(Math.max(0, Math.min(1, frac))))
+                    : check(c, Rule.GATE_VOLTAGE, Verdict.WARN, () -> "on level " + Eng.of(on, "V") + " is below the "
                     + Eng.of(full, "V") + " that " + (s.technology() == Technology.IGBT ? "V_CE(sat)" : "R_DS(on)")
                     + " is specified at, so conduction loss will be higher than the datasheet figure — drive at "
                     + Eng.of(full, "V") + " or more", cmp, Score.warn(Math.max(0, Math.min(1, frac))));
         }
         double room = Math.min((limit - on) / limit, (on - full) / Math.max(full, 1));
-        return check(c, Rule.GATE_VOLTAGE, Verdict.PASS, () -> "on level " + Eng.of(on, "V") + " fully enhances the switch (≥ "
+        return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.PASS, Score.pass(room * 5))
+                : check(c, Rule.GATE_VOLTAGE, Verdict.PASS, () -> "on level " + Eng.of(on, "V") + " fully enhances the switch (≥ "
                 + Eng.of(full, "V") + ") and stays below " + Eng.of(limit, "V") + " (V_GS,max " + Eng.of(s.vGsMax(), "V")
                 + " less " + Eng.pct(m.gateHeadroom()) + "); the driver runs from " + Eng.of(c.d.vSupplyMin(), "V")
                 + " to " + Eng.of(c.d.vSupplyMax(), "V"), cmp, Score.pass(room * 5));
@@ -305,7 +357,8 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         double off = c.op.vDriveNeg();
         if (Double.isNaN(s.vGsMin())) {
-            return unknown(c, Rule.NEGATIVE_BIAS, () -> "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.NEGATIVE_BIAS, () -> "the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
                     + " off level cannot be checked against it — look up the negative gate limit in the datasheet");
         }
         List<Comparison> cmp = c.comparisons();
@@ -319,21 +372,25 @@ public final class PairEvaluator {
             cmp.add(new Comparison("off level (switch's recommendation)", off, "≤", s.vGateOff(), "V"));
         }
         if (off < s.vGsMin()) {
-            return fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the switch's V_GS,min "
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.FAIL, 0)
+                    : fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the switch's V_GS,min "
                     + Eng.of(s.vGsMin(), "V") + " and will damage the gate — use " + Eng.of(limit, "V") + " or less negative", cmp);
         }
         if (off < 0 && (Double.isNaN(d.vNegMin()) || d.vNegMin() == 0)) {
-            return fail(c, Rule.NEGATIVE_BIAS, () -> "the stage asks for " + Eng.of(off, "V") + " off, but this driver has no"
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.FAIL, 0)
+                    : fail(c, Rule.NEGATIVE_BIAS, () -> "the stage asks for " + Eng.of(off, "V") + " off, but this driver has no"
                     + " negative output rail — pick a driver with a negative rail (v_neg_min_v ≤ " + Eng.of(off, "V")
                     + ") or turn off at 0 V with a Miller clamp", cmp);
         }
         if (off < 0 && off < d.vNegMin()) {
-            return fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the " + Eng.of(d.vNegMin(), "V")
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.FAIL, 0)
+                    : fail(c, Rule.NEGATIVE_BIAS, () -> "off level " + Eng.of(off, "V") + " is below the " + Eng.of(d.vNegMin(), "V")
                     + " this driver's negative rail supports — use " + Eng.of(d.vNegMin(), "V") + " or pick a driver rated for "
                     + Eng.of(off, "V"), cmp);
         }
         if (off < limit) {
-            return check(c, Rule.NEGATIVE_BIAS, Verdict.WARN, () -> "off level " + Eng.of(off, "V") + " is within "
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.WARN, Score.warn(0.5))
+                    : check(c, Rule.NEGATIVE_BIAS, Verdict.WARN, () -> "off level " + Eng.of(off, "V") + " is within "
                     + Eng.pct(m.gateHeadroom()) + " of V_GS,min " + Eng.of(s.vGsMin(), "V") + " — undershoot may exceed it;"
                     + " use " + Eng.of(limit, "V") + " or less negative", cmp, Score.warn(0.5));
         }
@@ -342,10 +399,12 @@ public final class PairEvaluator {
             String msg = c.detail ? ("the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "
                     + Eng.of(off, "V") + (clamp ? "; this driver's Miller clamp holds the gate low, so verify turn-off on the bench"
                     : " — add a negative rail or use a driver with a Miller clamp, or dv/dt and noise may turn it on")) : "";
-            return check(c, Rule.NEGATIVE_BIAS, clamp ? Verdict.PASS : Verdict.WARN, () -> msg, cmp,
+            return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, clamp ? Verdict.PASS : Verdict.WARN, clamp ? Score.pass(0) : Score.warn(0.5))
+                    : check(c, Rule.NEGATIVE_BIAS, clamp ? Verdict.PASS : Verdict.WARN, () -> msg, cmp,
                     clamp ? Score.pass(0) : Score.warn(0.5));
         }
-        return check(c, Rule.NEGATIVE_BIAS, Verdict.PASS, () -> "off level " + Eng.of(off, "V") + " is within the switch's limit "
+        return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.PASS, Score.pass(1))
+                : check(c, Rule.NEGATIVE_BIAS, Verdict.PASS, () -> "off level " + Eng.of(off, "V") + " is within the switch's limit "
                 + Eng.of(s.vGsMin(), "V") + (off < 0 ? " and the driver's negative rail " + Eng.of(d.vNegMin(), "V") : "")
                 + (Double.isNaN(s.vGateOff()) ? "" : " and meets its recommended " + Eng.of(s.vGateOff(), "V")), cmp,
                 Score.pass(1));
@@ -358,13 +417,15 @@ public final class PairEvaluator {
         SwitchPart s = c.s;
         double supply = c.op.swing();
         if (Double.isNaN(d.uvloOn())) {
-            return unknown(c, Rule.UVLO, () -> "this driver's UVLO thresholds are unknown (uvlo_on_v) — check that it starts at "
+            return !c.detail ? c.quick(Rule.UVLO, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.UVLO, () -> "this driver's UVLO thresholds are unknown (uvlo_on_v) — check that it starts at "
                     + Eng.of(supply, "V") + " and what its outputs do when the supply sags");
         }
         List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + m.uvloHeadroom(), "V"));
         if (supply < d.uvloOn()) {
-            return fail(c, Rule.UVLO, () -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
+            return !c.detail ? c.quick(Rule.UVLO, Verdict.FAIL, 0)
+                    : fail(c, Rule.UVLO, () -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
                     + Eng.of(d.uvloOn(), "V") + ", so it stays locked out — raise the supply above " + Eng.of(d.uvloOn()
                     + m.uvloHeadroom(), "V") + " or pick a driver with a lower UVLO", cmp);
         }
@@ -379,26 +440,30 @@ public final class PairEvaluator {
             cmp.add(new Comparison("on level just before lock-out (full enhancement)", gateAtUvlo, "≥", full, "V"));
         }
         if (!Double.isNaN(need) && gateAtUvlo < need) {
-            return fail(c, Rule.UVLO, () -> "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
+            return !c.detail ? c.quick(Rule.UVLO, Verdict.FAIL, 0)
+                    : fail(c, Rule.UVLO, () -> "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
                     + " gate gets only " + Eng.of(gateAtUvlo, "V") + ", below the " + Eng.of(need, "V")
                     + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO falling ≥ "
                     + Eng.of(need - c.op.vDriveNeg(), "V") + (c.op.vDriveNeg() < 0 ? " (the plateau plus the "
                     + Eng.of(-c.op.vDriveNeg(), "V") + " negative rail)" : ""), cmp);
         }
         if (supply < d.uvloOn() + m.uvloHeadroom()) {
-            return check(c, Rule.UVLO, Verdict.WARN, () -> "the " + Eng.of(supply, "V") + " supply is within "
+            return !c.detail ? c.quick(Rule.UVLO, Verdict.WARN, Score.warn((supply - d.uvloOn()) / m.uvloHeadroom()))
+                    : check(c, Rule.UVLO, Verdict.WARN, () -> "the " + Eng.of(supply, "V") + " supply is within "
                     + Eng.of(m.uvloHeadroom(), "V") + " of UVLO rising " + Eng.of(d.uvloOn(), "V")
                     + ", so supply tolerance or droop may lock the driver out — raise the supply or pick a lower UVLO", cmp,
                     Score.warn((supply - d.uvloOn()) / m.uvloHeadroom()));
         }
         if (Double.isNaN(need) && Double.isNaN(full)) {
-            return unknown(c, Rule.UVLO, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + ", but the switch's threshold"
+            return !c.detail ? c.quick(Rule.UVLO, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.UVLO, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + ", but the switch's threshold"
                     + " and plateau are unknown, so the gate level at lock-out cannot be judged");
         }
         String below = c.detail ? (!Double.isNaN(full) && gateAtUvlo < full
                 ? "; between " + Eng.of(gateAtUvlo, "V") + " and full enhancement " + Eng.of(full, "V")
                         + " a sagging supply only raises conduction loss" : "") : "";
-        return check(c, Rule.UVLO, Verdict.PASS, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + " (supply "
+        return !c.detail ? c.quick(Rule.UVLO, Verdict.PASS, Score.pass((supply - d.uvloOn() - m.uvloHeadroom()) / Math.max(1, supply)))
+                : check(c, Rule.UVLO, Verdict.PASS, () -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + " (supply "
                 + Eng.of(supply, "V") + ") and locks out at " + Eng.of(offUvlo, "V") + ", before the gate falls below the "
                 + Eng.of(Double.isNaN(need) ? full : need, "V") + (Double.isNaN(need) ? " full-enhancement level" : " plateau")
                 + below, cmp,
@@ -410,9 +475,10 @@ public final class PairEvaluator {
     static Check logicLevel(Calc c, Margins m) {
         DriverPart d = c.d;
         OperatingPoint op = c.op;
-        String from = op.logic() == null ? "the controller" : "the " + op.logic().id() + " controller";
+        String from = !c.detail ? "" : op.logic() == null ? "the controller" : "the " + op.logic().id() + " controller";
         if (Double.isNaN(d.vIh()) || Double.isNaN(d.vIl())) {
-            return unknown(c, Rule.LOGIC_LEVEL, () -> "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
+            return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.LOGIC_LEVEL, () -> "this driver's input thresholds (v_ih_v, v_il_v) are unknown — check that "
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");
         }
         List<Comparison> cmp = c.comparisons();
@@ -422,28 +488,33 @@ public final class PairEvaluator {
             cmp.add(new Comparison("controller output high", op.vOhMax(), "≤", d.vInMax(), "V"));
         }
         if (!Double.isNaN(d.vInMax()) && op.vOhMax() > d.vInMax()) {
-            return fail(c, Rule.LOGIC_LEVEL, () -> from + " drives up to " + Eng.of(op.vOhMax(), "V") + ", above this driver's "
+            return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.FAIL, 0)
+                    : fail(c, Rule.LOGIC_LEVEL, () -> from + " drives up to " + Eng.of(op.vOhMax(), "V") + ", above this driver's "
                     + Eng.of(d.vInMax(), "V") + " input maximum — add a level shifter or pick a driver with a higher input rating", cmp);
         }
         if (c.nmHigh < 0) {
-            return fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OH " + Eng.of(op.vOh(), "V") + " but this driver needs V_IH "
+            return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.FAIL, 0)
+                    : fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OH " + Eng.of(op.vOh(), "V") + " but this driver needs V_IH "
                     + Eng.of(d.vIh(), "V") + " (margin " + Eng.of(c.nmHigh, "V") + "), so a high may not register — pick a driver"
                     + " with V_IH ≤ " + Eng.of(op.vOh() - m.logicNoise(), "V") + " or add a level shifter", cmp);
         }
         if (c.nmLow < 0) {
-            return fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OL " + Eng.of(op.vOl(), "V") + " but this driver needs V_IL "
+            return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.FAIL, 0)
+                    : fail(c, Rule.LOGIC_LEVEL, () -> from + " gives V_OL " + Eng.of(op.vOl(), "V") + " but this driver needs V_IL "
                     + Eng.of(d.vIl(), "V") + " (margin " + Eng.of(c.nmLow, "V") + "), so a low may not register — pick a driver"
                     + " with V_IL ≥ " + Eng.of(op.vOl() + m.logicNoise(), "V"), cmp);
         }
         double worst = Math.min(c.nmHigh, c.nmLow);
         String margins = c.detail ? ("noise margins " + Eng.of(c.nmHigh, "V") + " high, " + Eng.of(c.nmLow, "V") + " low") : "";
         if (worst < m.logicNoise()) {
-            return check(c, Rule.LOGIC_LEVEL, Verdict.WARN, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
+            return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.WARN, Score.warn(worst / m.logicNoise()))
+                    : check(c, Rule.LOGIC_LEVEL, Verdict.WARN, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
                     + Eng.of(d.vIl(), "V") + ": " + margins + ", under the " + Eng.of(m.logicNoise(), "V")
                     + " asked for — keep the input trace short or pick a driver with lower thresholds", cmp,
                     Score.warn(worst / m.logicNoise()));
         }
-        return check(c, Rule.LOGIC_LEVEL, Verdict.PASS, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
+        return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.PASS, Score.pass(worst / 0.8))
+                : check(c, Rule.LOGIC_LEVEL, Verdict.PASS, () -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
                 + Eng.of(d.vIl(), "V") + ": " + margins, cmp, Score.pass(worst / 0.8));
     }
 
@@ -455,26 +526,31 @@ public final class PairEvaluator {
         String sense = c.op.activeHigh() ? "active-high" : "active-low";
         if (d.offers(false) && d.offers(true)) {
             int ch = d.inverting().indexOf(wantInverting) + 1;
-            return check(c, Rule.POLARITY, Verdict.PASS, () -> "this driver has inverting and non-inverting inputs; use channel "
+            return !c.detail ? c.quick(Rule.POLARITY, Verdict.PASS, Score.pass(1))
+                    : check(c, Rule.POLARITY, Verdict.PASS, () -> "this driver has inverting and non-inverting inputs; use channel "
                     + ch + " (" + (wantInverting ? "inverting" : "non-inverting") + ") for the " + sense + " PWM",
                     List.of(), Score.pass(1));
         }
         boolean inverting = d.offers(true);
         if (inverting == wantInverting) {
             if (inverting) {
-                return check(c, Rule.POLARITY, Verdict.WARN, () -> "inverting input matches the active-low PWM, but the switch turns"
+                return !c.detail ? c.quick(Rule.POLARITY, Verdict.WARN, Score.warn(0.5))
+                        : check(c, Rule.POLARITY, Verdict.WARN, () -> "inverting input matches the active-low PWM, but the switch turns"
                         + " on whenever the controller pin is low or unpowered (reset, boot) — add a pull-up and an enable,"
                         + " or use a non-inverting driver with active-high PWM", List.of(), Score.warn(0.5));
             }
-            return check(c, Rule.POLARITY, Verdict.PASS, () -> "non-inverting input matches the active-high PWM", List.of(),
+            return !c.detail ? c.quick(Rule.POLARITY, Verdict.PASS, Score.pass(1))
+                    : check(c, Rule.POLARITY, Verdict.PASS, () -> "non-inverting input matches the active-high PWM", List.of(),
                     Score.pass(1));
         }
         if (inverting) {
-            return check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is inverting but the PWM is active-high, so the"
+            return !c.detail ? c.quick(Rule.POLARITY, Verdict.FAIL, 0)
+                    : check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is inverting but the PWM is active-high, so the"
                     + " switch is on while the controller holds its pin low (also in reset) — use the non-inverting variant or"
                     + " invert the PWM in the controller", List.of(), 0);
         }
-        return check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is non-inverting but the PWM is active-low, so the"
+        return !c.detail ? c.quick(Rule.POLARITY, Verdict.FAIL, 0)
+                : check(c, Rule.POLARITY, Verdict.FAIL, () -> "this driver's input is non-inverting but the PWM is active-low, so the"
                 + " switch is on when it should be off — use an inverting driver or make the PWM active-high", List.of(), 0);
     }
 
@@ -484,58 +560,70 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         double bus = c.op.bus();
         if (!c.op.highSide()) {
-            return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "low side: the source sits at ground, no floating output needed",
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.PASS, Score.pass(1))
+                    : check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "low side: the source sits at ground, no floating output needed",
                     List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(c, Rule.HIGH_SIDE, () -> "a " + d.topology() + " driver cannot float on the switch node of a high-side switch"
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.FAIL, 0)
+                    : fail(c, Rule.HIGH_SIDE, () -> "a " + d.topology() + " driver cannot float on the switch node of a high-side switch"
                     + " — pick a high-side, half-bridge or isolated driver", List.of());
         }
         if (d.topology() == Topology.ISOLATED) {
             if (Double.isNaN(d.isolationVrms())) {
-                return unknown(c, Rule.HIGH_SIDE, () -> "isolated driver with unknown isolation rating — check it against the "
+                return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.UNKNOWN, Score.UNKNOWN)
+                        : unknown(c, Rule.HIGH_SIDE, () -> "isolated driver with unknown isolation rating — check it against the "
                         + (Double.isNaN(bus) ? "bus" : Eng.of(bus, "V") + " bus"));
             }
             if (Double.isNaN(bus)) {
-                return unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
+                return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.UNKNOWN, Score.UNKNOWN)
+                        : unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
                         + Eng.of(d.isolationVrms(), "V") + " rms isolation");
             }
-            List<Comparison> cmp = List.of(new Comparison("isolation rating (rms)", d.isolationVrms(), "≥",
+            List<Comparison> cmp = !c.detail ? List.of() : List.of(new Comparison("isolation rating (rms)", d.isolationVrms(), "≥",
                     bus * m.isolation(), "V"));
             if (d.isolationVrms() < bus) {
-                return fail(c, Rule.HIGH_SIDE, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is below the "
+                return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.FAIL, 0)
+                        : fail(c, Rule.HIGH_SIDE, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is below the "
                         + Eng.of(bus, "V") + " bus — pick a driver rated ≥ " + Eng.of(bus * m.isolation(), "V"), cmp);
             }
             if (d.isolationVrms() < bus * m.isolation()) {
-                return check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is less than "
+                return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.WARN, Score.warn((d.isolationVrms() - bus) / (bus * (m.isolation() - 1))))
+                        : check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "isolation " + Eng.of(d.isolationVrms(), "V") + " rms is less than "
                         + Eng.num(m.isolation()) + "× the " + Eng.of(bus, "V") + " bus — check the working-voltage rating"
                         + " (VIORM) and creepage for your standard", cmp,
                         Score.warn((d.isolationVrms() - bus) / (bus * (m.isolation() - 1))));
             }
-            return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "isolated output, " + Eng.of(d.isolationVrms(), "V")
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.PASS, Score.pass((d.isolationVrms() / (bus * m.isolation()) - 1)))
+                    : check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "isolated output, " + Eng.of(d.isolationVrms(), "V")
                     + " rms against a " + Eng.of(bus, "V") + " bus; confirm the working-voltage rating for your standard", cmp,
                     Score.pass((d.isolationVrms() / (bus * m.isolation()) - 1)));
         }
         if (Double.isNaN(d.vOffsetMax())) {
-            return unknown(c, Rule.HIGH_SIDE, () -> "this driver's floating offset rating (v_offset_max_v) is unknown");
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.HIGH_SIDE, () -> "this driver's floating offset rating (v_offset_max_v) is unknown");
         }
         if (Double.isNaN(bus)) {
-            return unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.HIGH_SIDE, () -> "bus voltage not given — give --bus or bus_v to check the "
                     + Eng.of(d.vOffsetMax(), "V") + " offset rating");
         }
         double need = bus * (1 + m.offset());
-        List<Comparison> cmp = List.of(new Comparison("floating offset rating", d.vOffsetMax(), "≥", need, "V"));
+        List<Comparison> cmp = !c.detail ? List.of() : List.of(new Comparison("floating offset rating", d.vOffsetMax(), "≥", need, "V"));
         if (d.vOffsetMax() < bus) {
-            return fail(c, Rule.HIGH_SIDE, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " is below the " + Eng.of(bus, "V")
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.FAIL, 0)
+                    : fail(c, Rule.HIGH_SIDE, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " is below the " + Eng.of(bus, "V")
                     + " bus — pick a driver rated ≥ " + Eng.of(need, "V"), cmp);
         }
         if (d.vOffsetMax() < need) {
-            return check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " leaves less than "
+            return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.WARN, Score.warn((d.vOffsetMax() - bus) / (need - bus)))
+                    : check(c, Rule.HIGH_SIDE, Verdict.WARN, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " leaves less than "
                     + Eng.pct(m.offset()) + " above the " + Eng.of(bus, "V") + " bus for switch-node overshoot — pick a driver"
                     + " rated ≥ " + Eng.of(need, "V") + " or measure the overshoot", cmp,
                     Score.warn((d.vOffsetMax() - bus) / (need - bus)));
         }
-        return check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " covers the "
+        return !c.detail ? c.quick(Rule.HIGH_SIDE, Verdict.PASS, Score.pass(d.vOffsetMax() / need - 1))
+                : check(c, Rule.HIGH_SIDE, Verdict.PASS, () -> "offset rating " + Eng.of(d.vOffsetMax(), "V") + " covers the "
                 + Eng.of(bus, "V") + " bus with " + Eng.pct(d.vOffsetMax() / bus - 1) + " to spare", cmp,
                 Score.pass(d.vOffsetMax() / need - 1));
     }
@@ -546,23 +634,28 @@ public final class PairEvaluator {
         DriverPart d = c.d;
         OperatingPoint op = c.op;
         if (!op.highSide()) {
-            return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "low side: no bootstrap supply needed", List.of(), Score.pass(1));
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.PASS, Score.pass(1))
+                    : check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "low side: no bootstrap supply needed", List.of(), Score.pass(1));
         }
         if (!d.topology().floats()) {
-            return fail(c, Rule.BOOTSTRAP, () -> "a low-side driver has no floating supply to bootstrap — pick a high-side,"
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
+                    : fail(c, Rule.BOOTSTRAP, () -> "a low-side driver has no floating supply to bootstrap — pick a high-side,"
                     + " half-bridge or isolated driver", List.of());
         }
         if (!d.topology().bootstrapped()) {
-            return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "isolated output: it needs its own isolated supply of "
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.PASS, Score.pass(1))
+                    : check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> "isolated output: it needs its own isolated supply of "
                     + Eng.of(op.swing(), "V") + " (no bootstrap, no duty limit)", List.of(), Score.pass(1));
         }
         if (Double.isNaN(c.bootDroop)) {
-            return unknown(c, Rule.BOOTSTRAP, () -> "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.BOOTSTRAP, () -> "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
         }
         List<Comparison> cmp = c.comparisons();
         cmp.add(new Comparison("allowed droop (V_drive − V_F − UVLO,off)", c.bootDroop, "≥", 0, "V"));
         if (c.bootDroop <= 0) {
-            return fail(c, Rule.BOOTSTRAP, () -> "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
+                    : fail(c, Rule.BOOTSTRAP, () -> "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
                     + " is already at or below the high side's " + Eng.of(c.bootFloor, "V") + " limit, so no capacitor helps"
                     + " — raise V_drive or pick a driver with a lower UVLO", cmp);
         }
@@ -574,31 +667,37 @@ public final class PairEvaluator {
                 + Eng.of(Double.isNaN(op.bus()) ? Double.NaN : op.bus() * 1.2, "V") : "") : "";
         cmp.add(new Comparison("duty cycle", op.dutyMax(), "≤", c.bootDutyMax, "1"));
         if (!Double.isNaN(op.dutyMax()) && op.dutyMax() >= 1) {
-            return fail(c, Rule.BOOTSTRAP, () -> "100 % duty is impossible with a bootstrap supply (it recharges only while the low"
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
+                    : fail(c, Rule.BOOTSTRAP, () -> "100 % duty is impossible with a bootstrap supply (it recharges only while the low"
                     + " side is on) — cap the duty at " + Eng.pct(c.bootDutyMax) + " or use an isolated supply", cmp);
         }
         if (!Double.isNaN(op.dutyMax()) && op.dutyMax() > c.bootDutyMax) {
-            return fail(c, Rule.BOOTSTRAP, () -> "duty " + Eng.pct(op.dutyMax()) + " leaves too little low-side time to recharge "
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
+                    : fail(c, Rule.BOOTSTRAP, () -> "duty " + Eng.pct(op.dutyMax()) + " leaves too little low-side time to recharge "
                     + Eng.of(c.bootCRec, "F") + " through " + Eng.of(op.rBoot(), "Ω") + " (allowed " + Eng.pct(c.bootDutyMax)
                     + ") — lower the duty, the frequency or the bootstrap resistance", cmp);
         }
         if (Double.isNaN(op.dutyMax())) {
-            return check(c, Rule.BOOTSTRAP, Verdict.UNKNOWN, () -> sizing + diode + "; duty not given — the bootstrap allows at most "
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : check(c, Rule.BOOTSTRAP, Verdict.UNKNOWN, () -> sizing + diode + "; duty not given — the bootstrap allows at most "
                     + Eng.pct(c.bootDutyMax) + " (give --duty-max or duty_max)", cmp, Score.UNKNOWN);
         }
         if (c.bootBelowFull) {
             double full = fullEnhancement(c.s);
-            return check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> "the bootstrap gives the high side at most "
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.WARN, Score.warn(0.5))
+                    : check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> "the bootstrap gives the high side at most "
                     + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F), below the " + Eng.of(full, "V")
                     + " full-enhancement level, so its conduction loss is higher than the low side's; " + sizing
                     + " against UVLO,off " + Eng.of(c.bootFloor, "V") + diode + " — raise V_drive to ≥ "
                     + Eng.of(full + op.diodeDrop(), "V") + " or use an isolated supply", cmp, Score.warn(0.5));
         }
         if (Boolean.FALSE.equals(d.bootstrapDiode()) && Double.isNaN(op.bus())) {
-            return check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> sizing + ", with an external fast diode rated above the bus"
+            return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.WARN, Score.warn(0.5))
+                    : check(c, Rule.BOOTSTRAP, Verdict.WARN, () -> sizing + ", with an external fast diode rated above the bus"
                     + " (bus not given)", cmp, Score.warn(0.5));
         }
-        return check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> sizing + diode + "; duty " + Eng.pct(op.dutyMax()) + " ≤ "
+        return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.PASS, Score.pass((c.bootDutyMax - op.dutyMax()) * 5))
+                : check(c, Rule.BOOTSTRAP, Verdict.PASS, () -> sizing + diode + "; duty " + Eng.pct(op.dutyMax()) + " ≤ "
                 + Eng.pct(c.bootDutyMax) + " allowed", cmp, Score.pass((c.bootDutyMax - op.dutyMax()) * 5));
     }
 
@@ -607,26 +706,31 @@ public final class PairEvaluator {
     static Check driverPower(Calc c, Margins m) {
         DriverPart d = c.d;
         if (Double.isNaN(c.pDriver)) {
-            return unknown(c, Rule.DRIVER_POWER, () -> "gate charge unknown, so driver dissipation cannot be estimated");
+            return !c.detail ? c.quick(Rule.DRIVER_POWER, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.DRIVER_POWER, () -> "gate charge unknown, so driver dissipation cannot be estimated");
         }
         String est = c.detail ? (Eng.of(c.pDriver, "W") + " in the driver (of " + Eng.of(c.pGate, "W") + " gate-drive power at "
                 + Eng.of(c.op.fSw(), "Hz") + (c.rSrcEstimated || c.rSnkEstimated ? ", output resistance estimated as V/I_peak" : "")
                 + ")") : "";
         if (Double.isNaN(d.pMax())) {
-            return unknown(c, Rule.DRIVER_POWER, () -> est + "; the package limit (p_max_w) is unknown — check it against the datasheet");
+            return !c.detail ? c.quick(Rule.DRIVER_POWER, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.DRIVER_POWER, () -> est + "; the package limit (p_max_w) is unknown — check it against the datasheet");
         }
         double allowed = d.pMax() * m.driverPower();
-        List<Comparison> cmp = List.of(new Comparison("driver dissipation", c.pDriver, "≤", allowed, "W"));
+        List<Comparison> cmp = !c.detail ? List.of() : List.of(new Comparison("driver dissipation", c.pDriver, "≤", allowed, "W"));
         if (c.pDriver > d.pMax()) {
-            return fail(c, Rule.DRIVER_POWER, () -> est + " exceeds its " + Eng.of(d.pMax(), "W") + " package limit — add external gate"
+            return !c.detail ? c.quick(Rule.DRIVER_POWER, Verdict.FAIL, 0)
+                    : fail(c, Rule.DRIVER_POWER, () -> est + " exceeds its " + Eng.of(d.pMax(), "W") + " package limit — add external gate"
                     + " resistance to move loss out of the driver, lower the frequency, or add a buffer stage", cmp);
         }
         if (c.pDriver > allowed) {
-            return check(c, Rule.DRIVER_POWER, Verdict.WARN, () -> est + " uses more than " + Eng.pct(m.driverPower()) + " of its "
+            return !c.detail ? c.quick(Rule.DRIVER_POWER, Verdict.WARN, Score.warn((d.pMax() - c.pDriver) / (d.pMax() - allowed)))
+                    : check(c, Rule.DRIVER_POWER, Verdict.WARN, () -> est + " uses more than " + Eng.pct(m.driverPower()) + " of its "
                     + Eng.of(d.pMax(), "W") + " limit — check the temperature rise at your ambient", cmp,
                     Score.warn((d.pMax() - c.pDriver) / (d.pMax() - allowed)));
         }
-        return check(c, Rule.DRIVER_POWER, Verdict.PASS, () -> est + ", within " + Eng.pct(m.driverPower()) + " of its "
+        return !c.detail ? c.quick(Rule.DRIVER_POWER, Verdict.PASS, Score.pass(allowed / Math.max(c.pDriver, 1e-12) - 1))
+                : check(c, Rule.DRIVER_POWER, Verdict.PASS, () -> est + ", within " + Eng.pct(m.driverPower()) + " of its "
                 + Eng.of(d.pMax(), "W") + " limit", cmp, Score.pass(allowed / Math.max(c.pDriver, 1e-12) - 1));
     }
 
@@ -635,31 +739,37 @@ public final class PairEvaluator {
     static Check dvdt(Calc c, Margins m) {
         SwitchPart s = c.s;
         if (Double.isNaN(s.cRss()) || Double.isNaN(s.vThMin())) {
-            return unknown(c, Rule.DV_DT, () -> "C_rss or V_th,min of the switch unknown, so Miller-induced turn-on cannot be judged");
+            return !c.detail ? c.quick(Rule.DV_DT, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.DV_DT, () -> "C_rss or V_th,min of the switch unknown, so Miller-induced turn-on cannot be judged");
         }
         if (Double.isNaN(c.slew)) {
-            return unknown(c, Rule.DV_DT, () -> "switch-node dv/dt unknown (give --bus, or --dvdt, and the switch's Q_gd and plateau)");
+            return !c.detail ? c.quick(Rule.DV_DT, Verdict.UNKNOWN, Score.UNKNOWN)
+                    : unknown(c, Rule.DV_DT, () -> "switch-node dv/dt unknown (give --bus, or --dvdt, and the switch's Q_gd and plateau)");
         }
         double limit = s.vThMin() * m.dvdt();
         double seen = c.vInduced + c.op.vDriveNeg();
-        List<Comparison> cmp = List.of(new Comparison("induced gate voltage + off level", seen, "≤", limit, "V"));
+        List<Comparison> cmp = !c.detail ? List.of() : List.of(new Comparison("induced gate voltage + off level", seen, "≤", limit, "V"));
         boolean clamp = Boolean.TRUE.equals(c.d.millerClamp());
         String what = c.detail ? ("at " + Eng.of(c.slew * 1e-9, "V") + "/ns the Miller current lifts the off gate to " + Eng.of(seen, "V")
                 + " (through " + Eng.of(c.rOffPath, "Ω") + ") against V_th,min " + Eng.of(s.vThMin(), "V")) : "";
         if (seen >= s.vThMin()) {
             if (clamp) {
-                return check(c, Rule.DV_DT, Verdict.WARN, () -> what + "; this driver's Miller clamp should hold it — verify on the bench",
+                return !c.detail ? c.quick(Rule.DV_DT, Verdict.WARN, Score.warn(0.3))
+                        : check(c, Rule.DV_DT, Verdict.WARN, () -> what + "; this driver's Miller clamp should hold it — verify on the bench",
                         cmp, Score.warn(0.3));
             }
-            return fail(c, Rule.DV_DT, () -> what + ", so it may turn on falsely — lower R_g,off, add a negative off level or use a driver"
+            return !c.detail ? c.quick(Rule.DV_DT, Verdict.FAIL, 0)
+                    : fail(c, Rule.DV_DT, () -> what + ", so it may turn on falsely — lower R_g,off, add a negative off level or use a driver"
                     + " with a Miller clamp (allowed " + Eng.of(c.dvdtAllowed * 1e-9, "V") + "/ns as is)", cmp);
         }
         if (seen > limit) {
-            return check(c, Rule.DV_DT, Verdict.WARN, () -> what + ", less than " + Eng.pct(1 - m.dvdt()) + " below it — lower R_g,off"
+            return !c.detail ? c.quick(Rule.DV_DT, Verdict.WARN, Score.warn((s.vThMin() - seen) / (s.vThMin() - limit)))
+                    : check(c, Rule.DV_DT, Verdict.WARN, () -> what + ", less than " + Eng.pct(1 - m.dvdt()) + " below it — lower R_g,off"
                     + " or add negative bias" + (clamp ? " (the Miller clamp helps)" : ""), cmp,
                     Score.warn((s.vThMin() - seen) / (s.vThMin() - limit)));
         }
-        return check(c, Rule.DV_DT, Verdict.PASS, () -> what + ", well below it", cmp, Score.pass((limit - seen) / limit));
+        return !c.detail ? c.quick(Rule.DV_DT, Verdict.PASS, Score.pass((limit - seen) / limit))
+                : check(c, Rule.DV_DT, Verdict.PASS, () -> what + ", well below it", cmp, Score.pass((limit - seen) / limit));
     }
 
     // ---------------------------------------------------------------- lifecycle
@@ -732,11 +842,13 @@ public final class PairEvaluator {
     }
 
     private static Check fail(Calc c, Rule r, Supplier<String> msg, List<Comparison> cmp) {
-        return check(c, r, Verdict.FAIL, msg, cmp, 0);
+        return !c.detail ? c.quick(r, Verdict.FAIL, 0)
+                : check(c, r, Verdict.FAIL, msg, cmp, 0);
     }
 
     private static Check unknown(Calc c, Rule r, Supplier<String> msg) {
-        return check(c, r, Verdict.UNKNOWN, msg, List.of(), Score.UNKNOWN);
+        return !c.detail ? c.quick(r, Verdict.UNKNOWN, Score.UNKNOWN)
+                : check(c, r, Verdict.UNKNOWN, msg, List.of(), Score.UNKNOWN);
     }
 
     private static double nz(double v) {
@@ -834,11 +946,29 @@ public final class PairEvaluator {
         /** Whether checks get their sentences and comparisons (false while ranking). */
         final boolean detail;
 
+        /** Verdict and sub-score of the last rule run while ranking (see {@link #quick(Rule, Verdict, double)}). */
+        Verdict lastVerdict;
+        double lastScore;
+
+        /**
+         * While ranking, a rule's outcome without a check object (nothing allocated per rule): the
+         * verdict and sub-score are kept here and the shared {@link #QUICK} marker returned.
+         */
+        Check quick(Rule r, Verdict v, double score) {
+            if (!(score >= 0 && score <= 1)) {
+                throw new IllegalArgumentException("expected a score in [0,1] for " + r.id() + ", got " + score);
+            }
+            lastVerdict = v;
+            lastScore = score;
+            return QUICK;
+        }
+
         /** A list for a check's comparisons; while ranking, one that keeps nothing. */
         List<Comparison> comparisons() {
             return detail ? new ArrayList<>() : DISCARD;
         }
-        final DriverPart d;
+        DriverPart d;
+        final Prepared p;
         final SwitchPart s;
         final OperatingPoint op;
         final int n;
@@ -883,14 +1013,68 @@ public final class PairEvaluator {
         double vInduced = Double.NaN;
         double dvdtAllowed = Double.NaN;
 
+        /** Every per-driver figure back to its starting value (NaN: not computed), before the next driver. */
+        private void reset() {
+            qSwing = Double.NaN;
+            qEstimated = false;
+            qTotal = Double.NaN;
+            rSrc = 0;
+            rSnk = 0;
+            rSrcEstimated = false;
+            rSnkEstimated = false;
+            rOnTot = 0;
+            rOffTot = 0;
+            iReq = Double.NaN;
+            iPkSrc = 0;
+            iPkSnk = 0;
+            delayOn = Double.NaN;
+            delayOff = Double.NaN;
+            plateauOn = Double.NaN;
+            plateauOff = Double.NaN;
+            pGate = Double.NaN;
+            pDriver = Double.NaN;
+            pExternal = Double.NaN;
+            pInternal = Double.NaN;
+            rCrit = Double.NaN;
+            zeta = Double.NaN;
+            rgMin = Double.NaN;
+            rgMax = Double.NaN;
+            rgRecommended = Double.NaN;
+            bootCharge = Double.NaN;
+            bootDroop = Double.NaN;
+            bootFloor = Double.NaN;
+            bootBelowFull = false;
+            bootCMin = Double.NaN;
+            bootCRec = Double.NaN;
+            bootDutyMax = Double.NaN;
+            bootInrush = Double.NaN;
+            nmHigh = Double.NaN;
+            nmLow = Double.NaN;
+            slew = Double.NaN;
+            rOffPath = 0;
+            vInduced = Double.NaN;
+            dvdtAllowed = Double.NaN;
+        }
+
         Calc(DriverPart d, Prepared p, boolean detail) {
+            this(p, detail);
+            load(d);
+        }
+
+        /** A calculation for one question, to {@link #load} driver after driver (ranking reuses one per thread). */
+        Calc(Prepared p, boolean detail) {
             this.detail = detail;
-            this.d = d;
+            this.p = p;
             this.s = p.s;
             this.op = p.op;
             this.n = p.n;
             this.rInt = p.rInt;
-            SwitchPart s = p.s;
+        }
+
+        /** Computes every figure of the pair with driver {@code d}. */
+        Calc load(DriverPart d) {
+            reset();
+            this.d = d;
             OperatingPoint op = p.op;
             double swing = op.swing();
             qSwing = p.qSwing;
@@ -998,6 +1182,7 @@ public final class PairEvaluator {
             } else if (!Double.isNaN(slew) && !Double.isNaN(s.cRss())) {
                 vInduced = DvDt.inducedBound(s.cRss(), slew, rOffPath);
             }
+            return this;
         }
 
         List<Figure> figures() {

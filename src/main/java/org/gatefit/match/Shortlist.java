@@ -182,11 +182,23 @@ public final class Shortlist {
     }
 
     /** Best first, as {@link #RANKING} orders the full results: verdict, score, price (unknown last), part number. */
-    private static final Comparator<Ranked> RANKED = Comparator
-            .comparing((Ranked r) -> r.verdict().ordinal())
-            .thenComparing(Comparator.comparingDouble(Ranked::score).reversed())
-            .thenComparingDouble(r -> Double.isNaN(r.driver().price()) ? Double.MAX_VALUE : r.driver().price())
-            .thenComparing(r -> r.driver().partNumber());
+    private static int compare(Verdict av, double as, DriverPart a, Verdict bv, double bs, DriverPart b) {
+        int c = Integer.compare(av.ordinal(), bv.ordinal());
+        if (c != 0) {
+            return c;
+        }
+        c = Double.compare(bs, as);
+        if (c != 0) {
+            return c;
+        }
+        double ap = Double.isNaN(a.price()) ? Double.MAX_VALUE : a.price();
+        double bp = Double.isNaN(b.price()) ? Double.MAX_VALUE : b.price();
+        c = Double.compare(ap, bp);
+        return c != 0 ? c : a.partNumber().compareTo(b.partNumber());
+    }
+
+    private static final Comparator<Ranked> RANKED = (x, y) -> compare(x.verdict(), x.score(), x.driver(), y.verdict(),
+            y.score(), y.driver());
 
     /** A driver with its verdict and score, before its checks are worded. */
     private record Ranked(DriverPart driver, Verdict verdict, double score) {
@@ -204,6 +216,7 @@ public final class Shortlist {
         private final List<String> prefilterUsed;
         private final int skipped;
         private final java.util.PriorityQueue<Ranked> best;
+        private final PairEvaluator.Ranking ranking;
         private int pass;
         private int warn;
         private int fail;
@@ -225,6 +238,7 @@ public final class Shortlist {
             this.prefilterUsed = List.copyOf(prefilterUsed);
             this.skipped = skipped;
             this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1, RANKED.reversed());
+            this.ranking = new PairEvaluator.Ranking(prepared);
         }
 
         /** Drivers ranked so far. */
@@ -247,21 +261,25 @@ public final class Shortlist {
 
         /** Ranks one driver. */
         public void accept(DriverPart d) {
-            PairEvaluator.Quick q = PairEvaluator.quick(d, prepared);
-            switch (q.verdict()) {
+            ranking.rank(d);
+            Verdict qv = ranking.verdict();
+            double qs = ranking.score();
+            switch (qv) {
                 case PASS -> pass++;
                 case WARN, UNKNOWN -> warn++;
                 case FAIL -> fail++;
             }
-            if (!all && q.verdict() == Verdict.FAIL) {
+            if (!all && qv == Verdict.FAIL) {
                 return;
             }
-            Ranked x = new Ranked(d, q.verdict(), q.score());
             if (best.size() < top) {
-                best.add(x);
-            } else if (RANKED.compare(x, best.peek()) < 0) {
-                best.poll();
-                best.add(x);
+                best.add(new Ranked(d, qv, qs));
+            } else {
+                Ranked worst = best.peek();
+                if (compare(qv, qs, d, worst.verdict(), worst.score(), worst.driver()) < 0) {
+                    best.poll();
+                    best.add(new Ranked(d, qv, qs));
+                }
             }
         }
 

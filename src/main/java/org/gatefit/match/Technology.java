@@ -34,8 +34,11 @@ public enum Technology {
         return typicalOn;
     }
 
+    /** The constants, copied once ({@code values()} copies on every call; this is read per catalog row). */
+    private static final Technology[] ALL = values();
+
     static Technology of(String id) {
-        for (Technology t : values()) {
+        for (Technology t : ALL) {
             if (t.id.equals(id)) {
                 return t;
             }

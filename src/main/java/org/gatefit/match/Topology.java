@@ -30,8 +30,11 @@ public enum Topology {
         };
     }
 
+    /** The constants, copied once ({@code values()} copies on every call; this is read per catalog row). */
+    private static final Topology[] ALL = values();
+
     static Topology of(String id) {
-        for (Topology t : values()) {
+        for (Topology t : ALL) {
             if (t.id.equals(id)) {
                 return t;
             }

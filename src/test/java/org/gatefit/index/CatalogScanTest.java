@@ -98,6 +98,17 @@ class CatalogScanTest {
         }
     }
 
+    /** Collects the object each row's memo gives. */
+    static final class Memo implements Consumer<RowCursor> {
+        final List<Object> seen = new ArrayList<>();
+        private final int key = Schema.of(Kind.DRIVER).position("part_number");
+
+        @Override
+        public void accept(RowCursor r) {
+            seen.add(r.memo("test", x -> new StringBuilder(x.text(key))));
+        }
+    }
+
     @Test
     void keptColumnsReadTheSameAsDocValues() throws Exception {
         try (Catalog direct = Catalog.open(dir); Catalog kept = Catalog.open(dir).keepColumns(true)) {
@@ -108,6 +119,19 @@ class CatalogScanTest {
                 assertEquals(a, b);
             }
             assertTrue(a.get(0).contains("TST-D"), a.get(0));
+            // Objects built from rows are kept with the columns: the second scan gets the very same ones.
+            List<Object> first = new ArrayList<>();
+            List<Object> second = new ArrayList<>();
+            for (List<Object> into : List.of(first, second)) {
+                kept.scanColumns(Kind.DRIVER, null, 3, 100, Memo::new).forEach(m -> into.addAll(m.seen));
+            }
+            assertEquals(DRIVERS, first.size());
+            for (int i = 0; i < first.size(); i++) {
+                assertTrue(first.get(i) == second.get(i), "kept object " + i);
+            }
+            List<Object> fresh = direct.scanColumns(Kind.DRIVER, null, 1, Memo::new).get(0).seen;
+            assertTrue(fresh.get(0) != first.get(0) && fresh.get(0).toString().equals(first.get(0).toString()),
+                    "without kept columns every scan builds anew");
         }
     }
 

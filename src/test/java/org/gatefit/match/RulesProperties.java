@@ -115,7 +115,7 @@ class RulesProperties {
         }
     }
 
-    @Property(tries = 500)
+    @Property(tries = 3000)
     void rankingModeGivesTheSameVerdictsAndScoresAsTheFullEvaluation(@ForAll("drivers") DriverPart d,
             @ForAll("switches") SwitchPart s, @ForAll("points") OperatingPoint.Spec spec) {
         // The shortlist ranks with PairEvaluator.rank (no sentences) and words only the pairs it shows;
@@ -133,6 +133,40 @@ class RulesProperties {
             assertEquals(full.checks().get(i).verdict(), quick.checks().get(i).verdict(), full.checks().get(i).rule().id());
             assertEquals(full.checks().get(i).score(), quick.checks().get(i).score(), 0.0);
         }
+    }
+
+    @Property(tries = 500)
+    void aReusedCalculationHoldsWhatAFreshOneHolds(@ForAll("drivers") DriverPart first, @ForAll("drivers") DriverPart d,
+            @ForAll("switches") SwitchPart s, @ForAll("points") OperatingPoint.Spec spec) throws Exception {
+        // Ranking loads driver after driver into one calculation; every figure must be the fresh
+        // calculation's, so no value of the previous driver survives (reset() must cover every field).
+        OperatingPoint op = spec.resolve(s);
+        PairEvaluator.Prepared p = PairEvaluator.prepare(s, op, Margins.DEFAULT);
+        for (boolean detail : new boolean[] {false, true}) {
+            PairEvaluator.Calc reused = new PairEvaluator.Calc(p, detail);
+            reused.load(first);
+            reused.load(d);
+            PairEvaluator.Calc fresh = new PairEvaluator.Calc(d, p, detail);
+            for (java.lang.reflect.Field f : PairEvaluator.Calc.class.getDeclaredFields()) {
+                if (java.lang.reflect.Modifier.isStatic(f.getModifiers()) || f.getName().startsWith("last")) {
+                    continue;
+                }
+                f.setAccessible(true);
+                Object a = f.get(fresh);
+                Object b = f.get(reused);
+                if (a instanceof Double x && b instanceof Double y) {
+                    assertEquals(Double.doubleToLongBits(x), Double.doubleToLongBits(y), f.getName());
+                } else {
+                    assertEquals(a, b, f.getName());
+                }
+            }
+        }
+        PairEvaluator.Ranking r = new PairEvaluator.Ranking(p);
+        r.rank(first);
+        r.rank(d);
+        PairResult full = PairEvaluator.evaluate(d, s, op, Margins.DEFAULT);
+        assertEquals(full.verdict(), r.verdict());
+        assertEquals(full.score(), r.score(), 0.0);
     }
 
     @Provide
