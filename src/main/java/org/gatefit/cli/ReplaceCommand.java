@@ -98,10 +98,12 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
             for (String s : Replacement.prefilter(original, includeObsolete)) {
                 pre.add(PartSearch.Condition.parse(s));
             }
-            List<Row> candidates = new ArrayList<>();
-            c.scan(original.kind(), PartSearch.filter(original.kind(), pre), candidates::add);
-            r = Replacement.run(original, candidates, c.count(original.kind()), top, includeObsolete, stages == null ? "" : stages.toString(),
-                    stageRows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn), pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
+            // Candidates stream from the scan into the search, which keeps only the best --top.
+            Replacement.Search search = new Replacement.Search(original, top, includeObsolete,
+                    stages == null ? "" : stages.toString(), stageRows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
+                    pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
+            c.scan(original.kind(), PartSearch.filter(original.kind(), pre), search);
+            r = search.result(c.count(original.kind()));
         }
         try (Writer w = output.open(ctx)) {
             ReplaceReports.render(r, output.format, w);

@@ -216,41 +216,108 @@ public final class Replacement {
                              String stageFile,
                              List<Row> stages, Bom bom, Function<String, Optional<Row>> drivers,
                              Function<String, Optional<Row>> switches, Margins m) {
-        Kind kind = original.kind();
-        List<Param> params = kind == Kind.SWITCH ? SWITCH : DRIVER;
-        String pn = original.key();
-        // Stages that use the part, with the original in place.
-        List<Row> using = new ArrayList<>();
-        List<StageCheck.StageResult> baseline = new ArrayList<>();
-        if (!stages.isEmpty()) {
-            StageCheck.Report all = StageCheck.run(stageFile, stages, bom, drivers, switches, m);
-            for (int i = 0; i < stages.size(); i++) {
-                StageCheck.StageResult r = all.results().get(i);
-                String used = kind == Kind.DRIVER ? r.driver() : r.switchPart();
-                if (used != null && used.equalsIgnoreCase(pn)) {
-                    using.add(stages.get(i));
-                    baseline.add(r);
+        Search s = new Search(original, top, includeObsolete, stageFile, stages, bom, drivers, switches, m);
+        candidates.forEach(s);
+        return s.result(ofKind);
+    }
+
+    /**
+     * A replacement search fed candidate by candidate (a catalog scan streams them in): every
+     * candidate is graded and scored without being worded, the best {@code top} are kept in a
+     * bounded heap (memory does not grow with the catalog) and only those are worded.
+     */
+    public static final class Search implements java.util.function.Consumer<Row> {
+        private record Kept(Candidate quick, Row row) {
+        }
+
+        private final Row original;
+        private final int top;
+        private final boolean includeObsolete;
+        private final String stageFile;
+        private final Bom bom;
+        private final Function<String, Optional<Row>> drivers;
+        private final Function<String, Optional<Row>> switches;
+        private final Margins m;
+        private final List<Param> params;
+        private final String pn;
+        private final List<Row> using = new ArrayList<>();
+        private final List<StageCheck.StageResult> baseline = new ArrayList<>();
+        private final java.util.PriorityQueue<Kept> best;
+        private int offered;
+
+        /** See {@link #run} for the parameters; the stages the original sits in are checked here, once. */
+        public Search(Row original, int top, boolean includeObsolete, String stageFile, List<Row> stages, Bom bom,
+                      Function<String, Optional<Row>> drivers, Function<String, Optional<Row>> switches, Margins m) {
+            this.original = original;
+            this.top = top;
+            this.includeObsolete = includeObsolete;
+            this.stageFile = stageFile;
+            this.bom = bom;
+            this.drivers = drivers;
+            this.switches = switches;
+            this.m = m;
+            Kind kind = original.kind();
+            this.params = kind == Kind.SWITCH ? SWITCH : DRIVER;
+            this.pn = original.key();
+            this.best = new java.util.PriorityQueue<>(Math.min(Math.max(top, 1), 1024) + 1,
+                    Comparator.comparing(Kept::quick, RANKING).reversed());
+            // Stages that use the part, with the original in place.
+            if (!stages.isEmpty()) {
+                StageCheck.Report all = StageCheck.run(stageFile, stages, bom, drivers, switches, m);
+                for (int i = 0; i < stages.size(); i++) {
+                    StageCheck.StageResult r = all.results().get(i);
+                    String used = kind == Kind.DRIVER ? r.driver() : r.switchPart();
+                    if (used != null && used.equalsIgnoreCase(pn)) {
+                        using.add(stages.get(i));
+                        baseline.add(r);
+                    }
                 }
             }
         }
-        List<Candidate> out = new ArrayList<>();
-        for (Row cand : candidates) {
+
+        @Override
+        public void accept(Row cand) {
             if (cand.key().equalsIgnoreCase(pn) || (!includeObsolete && "obsolete".equals(cand.text("lifecycle")))) {
-                continue;
+                return;
             }
-            evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m).ifPresent(out::add);
+            Optional<Candidate> q = evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m,
+                    false);
+            if (q.isEmpty()) {
+                return;
+            }
+            offered++;
+            if (best.size() < top) {
+                best.add(new Kept(q.get(), cand));
+            } else if (top > 0 && RANKING.compare(q.get(), best.peek().quick()) < 0) {
+                best.poll();
+                best.add(new Kept(q.get(), cand));
+            }
         }
-        int considered = Math.max(0, ofKind - 1);
-        int notOffered = Math.max(0, considered - out.size());
-        out.sort(RANKING);
-        List<String> ids = using.stream().map(Row::key).toList();
-        return new Result(pn, kind, original, out.size() > top ? out.subList(0, top) : out, considered, notOffered, ids, m);
+
+        /**
+         * The best candidates, worded, best first.
+         *
+         * @param ofKind parts of the original's kind in the catalog (for the "not offered" count)
+         */
+        public Result result(int ofKind) {
+            List<Candidate> out = new ArrayList<>(best.size());
+            for (Kept k : best) {
+                out.add(evaluate(original, k.row(), params, using, baseline, stageFile, bom, drivers, switches, m, true)
+                        .orElseThrow());
+            }
+            int considered = Math.max(0, ofKind - 1);
+            int notOffered = Math.max(0, considered - offered);
+            out.sort(RANKING);
+            List<String> ids = using.stream().map(Row::key).toList();
+            return new Result(pn, original.kind(), original, out, considered, notOffered, ids, m);
+        }
     }
 
     private static Optional<Candidate> evaluate(Row orig, Row cand, List<Param> params, List<Row> using,
                                                 List<StageCheck.StageResult> baseline, String stageFile, Bom bom,
                                                 Function<String, Optional<Row>> drivers,
-                                                Function<String, Optional<Row>> switches, Margins m) {
+                                                Function<String, Optional<Row>> switches, Margins m,
+                                                boolean describe) {
         Schema schema = Schema.of(orig.kind());
         List<Difference> diffs = new ArrayList<>();
         List<String> reasons = new ArrayList<>();
@@ -263,9 +330,6 @@ public final class Replacement {
             if (a == null) {
                 continue;
             }
-            String unit = col.unitSymbol();
-            String as = show(a);
-            String bs = b == null ? "unknown" : show(b);
             String assessment = assess(p, a, b);
             if (p.essential() && assessment.equals("worse")) {
                 return Optional.empty();
@@ -276,7 +340,10 @@ public final class Replacement {
                 default -> {
                 }
             }
-            diffs.add(new Difference(p.column(), p.label(), as, bs, unit, assessment));
+            if (describe) {
+                diffs.add(new Difference(p.column(), p.label(), show(a), b == null ? "unknown" : show(b), col.unitSymbol(),
+                        assessment));
+            }
         }
         boolean samePinout = orig.text("pinout") != null && cand.text("pinout") != null
                 && orig.text("pinout").equalsIgnoreCase(cand.text("pinout"));

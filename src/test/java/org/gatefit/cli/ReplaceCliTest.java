@@ -347,6 +347,30 @@ class ReplaceCliTest {
     }
 
     @Test
+    void theTopFewAreTheFirstOfTheWholeListWithTheSameCounts() throws Exception {
+        // Replacement grades every candidate but words only the ones it lists: --top 2 must list
+        // exactly the first two of the full list, graded, scored and worded the same.
+        Path c = exampleCatalog();
+        String[] args = {"replace", "CVL-1025TL", "--stages", Project.file("examples/stages.csv").toString(), "--bom",
+            Project.file("examples/bom.csv").toString(), "--format", "json", "--top"};
+        JsonNode all = json(CliRun.on(c, concat(args, "100")));
+        JsonNode two = json(CliRun.on(c, concat(args, "2")));
+        assertTrue(all.get("candidates").size() > 2, all.toString());
+        assertEquals(2, two.get("candidates").size());
+        for (int i = 0; i < 2; i++) {
+            assertEquals(all.get("candidates").get(i), two.get("candidates").get(i), "candidate " + (i + 1));
+        }
+        assertEquals(all.get("not_offered"), two.get("not_offered"));
+        assertEquals(all.get("considered"), two.get("considered"));
+    }
+
+    private static String[] concat(String[] a, String last) {
+        String[] out = java.util.Arrays.copyOf(a, a.length + 1);
+        out[a.length] = last;
+        return out;
+    }
+
+    @Test
     void theExampleInvertingTwinIsNeverOfferedForTheNonInvertingDriver() throws Exception {
         Path c = exampleCatalog();
         JsonNode r = json(CliRun.on(c, "replace", "VHM-4410N", "--include-obsolete", "--top", "100",
