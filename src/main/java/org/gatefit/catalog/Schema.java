@@ -1,13 +1,10 @@
 package org.gatefit.catalog;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.HashSet;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -69,7 +66,7 @@ public final class Schema {
             if (in == null) {
                 throw new IllegalStateException("schema resource missing from the build: " + res);
             }
-            s = parse(k, new ObjectMapper().readTree(in));
+            s = parse(k, MiniJson.parse(new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + res, e);
         }
@@ -77,15 +74,17 @@ public final class Schema {
         return s;
     }
 
-    /** Builds a schema from a parsed JSON Schema document. */
-    static Schema parse(Kind kind, JsonNode root) {
+    /** Builds a schema from a parsed JSON Schema document ({@link MiniJson} values). */
+    @SuppressWarnings("unchecked")
+    static Schema parse(Kind kind, Object document) {
+        Map<String, Object> root = (Map<String, Object>) document;
         Set<String> required = new HashSet<>();
-        root.path("required").forEach(n -> required.add(n.asText()));
+        for (Object n : (List<Object>) root.getOrDefault("required", List.of())) {
+            required.add(text(n));
+        }
         List<Column> cols = new ArrayList<>();
-        Iterator<Map.Entry<String, JsonNode>> it = root.path("properties").fields();
-        while (it.hasNext()) {
-            Map.Entry<String, JsonNode> e = it.next();
-            cols.add(column(e.getKey(), e.getValue(), required.contains(e.getKey())));
+        for (Map.Entry<String, Object> e : ((Map<String, Object>) root.getOrDefault("properties", Map.of())).entrySet()) {
+            cols.add(column(e.getKey(), (Map<String, Object>) e.getValue(), required.contains(e.getKey())));
         }
         for (String r : required) {
             if (cols.stream().noneMatch(c -> c.name().equals(r))) {
@@ -95,13 +94,25 @@ public final class Schema {
         return new Schema(kind, cols);
     }
 
-    private static Column column(String name, JsonNode p, boolean required) {
-        String jsonType = p.path("type").asText();
+    /** A JSON value as text: strings as they are, numbers as written, booleans as true/false. */
+    private static String text(Object v) {
+        return v == null ? "null" : v.toString();
+    }
+
+    private static Double number(Object v) {
+        return v instanceof MiniJson.Num n ? n.doubleValue() : Double.parseDouble(text(v));
+    }
+
+    @SuppressWarnings("unchecked")
+    private static Column column(String name, Map<String, Object> p, boolean required) {
+        String jsonType = p.containsKey("type") ? text(p.get("type")) : "";
         ColumnType type;
         List<String> choices = new ArrayList<>();
-        if (p.has("enum")) {
+        if (p.containsKey("enum")) {
             type = ColumnType.CHOICE;
-            p.get("enum").forEach(n -> choices.add(n.asText()));
+            for (Object n : (List<Object>) p.get("enum")) {
+                choices.add(text(n));
+            }
         } else {
             type = switch (jsonType) {
                 case "string" -> ColumnType.TEXT;
@@ -110,22 +121,24 @@ public final class Schema {
                 default -> throw new IllegalStateException("column " + name + ": unsupported type " + jsonType);
             };
         }
-        Unit unit = p.has("x-unit") ? Unit.parse(p.get("x-unit").asText()) : null;
+        Unit unit = p.containsKey("x-unit") ? Unit.parse(text(p.get("x-unit"))) : null;
         Double min = null;
         boolean minEx = false;
-        if (p.has("exclusiveMinimum")) {
-            min = p.get("exclusiveMinimum").asDouble();
+        if (p.containsKey("exclusiveMinimum")) {
+            min = number(p.get("exclusiveMinimum"));
             minEx = true;
-        } else if (p.has("minimum")) {
-            min = p.get("minimum").asDouble();
+        } else if (p.containsKey("minimum")) {
+            min = number(p.get("minimum"));
         }
-        Double max = p.has("maximum") ? p.get("maximum").asDouble() : null;
-        String def = p.has("default") ? p.get("default").asText() : null;
-        String defFrom = p.has("x-default-from") ? p.get("x-default-from").asText() : null;
-        String example = p.has("examples") && p.get("examples").size() > 0 ? p.get("examples").get(0).asText() : null;
-        Pattern pattern = p.has("pattern") ? Pattern.compile(p.get("pattern").asText()) : null;
+        Double max = p.containsKey("maximum") ? number(p.get("maximum")) : null;
+        String def = p.containsKey("default") ? text(p.get("default")) : null;
+        String defFrom = p.containsKey("x-default-from") ? text(p.get("x-default-from")) : null;
+        List<Object> examples = p.get("examples") instanceof List<?> l ? (List<Object>) l : List.of();
+        String example = examples.isEmpty() ? null : text(examples.get(0));
+        Pattern pattern = p.containsKey("pattern") ? Pattern.compile(text(p.get("pattern"))) : null;
         return new Column(name, type, unit, required, choices, pattern, min, minEx, max, def, defFrom,
-                p.path("description").asText(""), example, p.path("x-words-only").asBoolean(false));
+                p.containsKey("description") ? text(p.get("description")) : "", example,
+                Boolean.TRUE.equals(p.get("x-words-only")));
     }
 
     public Kind kind() {
