@@ -66,12 +66,4 @@ final class PairSupport {
         return PartSearch.filter(Kind.DRIVER, require, exclude);
     }
 
-    /** The prefilter conditions as a catalog query. */
-    static org.apache.lucene.search.Query filter(List<String> conditions) throws BadValueException {
-        List<PartSearch.Condition> parsed = new ArrayList<>();
-        for (String s : conditions) {
-            parsed.add(PartSearch.Condition.parse(s));
-        }
-        return PartSearch.filter(Kind.DRIVER, parsed);
-    }
 }

@@ -3,7 +3,6 @@ package org.gatefit.match;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import org.gatefit.catalog.Numbers;
 import org.gatefit.catalog.RowCursor;
 
 /**
@@ -43,22 +42,6 @@ public final class Shortlist {
     }
 
     private Shortlist() {
-    }
-
-    /**
-     * Catalog conditions ({@code column op value}, as {@code find --where} takes them) that only
-     * remove drivers certain to fail: a low-side driver for a high-side switch, and a supply range
-     * that excludes the swing.
-     */
-    public static List<String> prefilter(OperatingPoint op) {
-        List<String> c = new ArrayList<>();
-        if (op.highSide()) {
-            c.add("topology != low-side");
-        }
-        String swing = Numbers.format(op.swing());
-        c.add("v_supply_max_v >= " + swing);
-        c.add("v_supply_min_v <= " + swing);
-        return c;
     }
 
     /**
@@ -132,44 +115,43 @@ public final class Shortlist {
         }
         List<String> require = new ArrayList<>();
         List<Exclusion> exclude = new ArrayList<>();
-        String swing = Numbers.format(op.swing());
         if (op.highSide()) {
             require.add("topology != low-side");                    // high-side: cannot float
         }
         if (!Double.isNaN(s.vGsMax())) {                              // gate-voltage: supply range
-            require.add("v_supply_max_v >= " + swing);
-            require.add("v_supply_min_v <= " + swing);
+            require.add("v_supply_max_v >= " + down(op.swing()));
+            require.add("v_supply_min_v <= " + up(op.swing()));
         }
         double iReq = p.currentRequired();
         if (!Double.isNaN(iReq) && iReq > 0) {
             // drive-current: the peak through the loop never exceeds the rated peak, and a ratio
             // below 1 (or below the margin, when the margin is under 1) fails.
-            String need = Numbers.format(iReq * Math.min(1, m.driveCurrent()));
+            String need = down(iReq * Math.min(1, m.driveCurrent()));
             require.add("i_source_a >= " + need);
             require.add("i_sink_a >= " + need);
         }
         if (op.highSide() && !Double.isNaN(op.bus())) {
-            String bus = Numbers.format(op.bus());
+            String bus = down(op.bus());
             exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = high-side", "v_offset_max_v < " + bus)));
             exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = half-bridge", "v_offset_max_v < " + bus)));
             exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = isolated", "isolation_vrms < " + bus)));
         }
-        exclude.add(new Exclusion(Rule.UVLO, List.of("uvlo_on_v > " + swing)));
+        exclude.add(new Exclusion(Rule.UVLO, List.of("uvlo_on_v > " + up(op.swing()))));
         if (op.vDriveNeg() < 0 && !Double.isNaN(s.vGsMin()) && op.vDriveNeg() >= s.vGsMin()) {
-            exclude.add(new Exclusion(Rule.NEGATIVE_BIAS, List.of("v_neg_min_v > " + Numbers.format(op.vDriveNeg()))));
+            exclude.add(new Exclusion(Rule.NEGATIVE_BIAS, List.of("v_neg_min_v > " + up(op.vDriveNeg()))));
         }
         // logic-level: with both thresholds known, a negative noise margin or an input maximum below
         // the controller's high level fails.
         if (Double.isFinite(op.vOh())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_ih_v > " + Numbers.format(op.vOh())),
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_ih_v > " + up(op.vOh())),
                     List.of("v_il_v"), null));
         }
         if (Double.isFinite(op.vOl())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_il_v < " + Numbers.format(op.vOl())),
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_il_v < " + down(op.vOl())),
                     List.of("v_ih_v"), null));
         }
         if (Double.isFinite(op.vOhMax())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_in_max_v < " + Numbers.format(op.vOhMax())),
+            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_in_max_v < " + down(op.vOhMax())),
                     List.of("v_ih_v", "v_il_v"), null));
         }
         // polarity: no channel of the PWM's sense.
@@ -179,6 +161,28 @@ public final class Shortlist {
                 "input_polarity without a " + sense + " channel", t -> !DriverPart.offers(t, wantInverting))));
         exclude.add(new Exclusion(Rule.LIFECYCLE, List.of("lifecycle = obsolete")));
         return new Prefilter(require, exclude);
+    }
+
+    /**
+     * A limit for a condition that skips values below it, written with four significant digits and
+     * rounded down: it can only skip fewer drivers than the exact limit, never one the rules pass.
+     */
+    public static String down(double x) {
+        return limit(x, java.math.RoundingMode.FLOOR);
+    }
+
+    /** The same for a condition that skips values above the limit: rounded up. */
+    public static String up(double x) {
+        return limit(x, java.math.RoundingMode.CEILING);
+    }
+
+    /** A short number as it is (it reads back as the same double); a long one rounded to four digits. */
+    private static String limit(double x, java.math.RoundingMode mode) {
+        java.math.BigDecimal shortest = java.math.BigDecimal.valueOf(x).stripTrailingZeros();
+        if (shortest.precision() <= 6) {
+            return shortest.toPlainString();
+        }
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(4, mode)).stripTrailingZeros().toPlainString();
     }
 
     /** Best first, as {@link #RANKING} orders the full results: verdict, score, price (unknown last), part number. */

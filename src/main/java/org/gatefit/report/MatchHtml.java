@@ -35,7 +35,7 @@ final class MatchHtml {
         }
         lines.add(new String[] {"Margins", MatchJson.marginsLine(m)});
         if (prefilter != null && !prefilter.isEmpty()) {
-            lines.add(new String[] {"Prefilter", String.join("; ", prefilter) + " (drivers outside these must fail)"});
+            lines.add(new String[] {"Prefilter", String.join("; ", prefilter) + " (only drivers certain to fail are skipped)"});
         }
         return lines;
     }

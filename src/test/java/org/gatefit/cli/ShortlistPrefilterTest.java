@@ -127,6 +127,22 @@ class ShortlistPrefilterTest {
         assertTrue(skippedSomewhere > DRIVERS, "the prefilter must actually skip drivers in these questions");
     }
 
+    @Test
+    void limitsArePrintedShortAndRoundedTowardsSkippingFewer() {
+        // A limit below which drivers are skipped is rounded down, one above which they are skipped up.
+        assertEquals("0.22", Shortlist.down(0.22000000000000003));
+        assertEquals("0.2201", Shortlist.up(0.22000000000000003));
+        assertEquals("3.1", Shortlist.up(3.0999999999999996));
+        assertEquals("3.099", Shortlist.down(3.0999999999999996));
+        assertEquals("48", Shortlist.down(48));
+        assertEquals("-5", Shortlist.up(-5));
+        assertEquals("4.6", Shortlist.down(4.6), "a short number stays as written (it reads back exactly)");
+        assertEquals("1.356", Shortlist.down(1.3563628691983125));
+        for (double x : new double[] {0.22000000000000003, 3.0999999999999996, 1.3563628691983125, -4.2, 1e-7}) {
+            assertTrue(Double.parseDouble(Shortlist.down(x)) <= x && Double.parseDouble(Shortlist.up(x)) >= x, "" + x);
+        }
+    }
+
     /** Lists equal, or a failure naming the first difference (not thousands of part numbers). */
     private static void same(List<String> expected, List<String> actual, String what) {
         for (int i = 0; i < Math.min(expected.size(), actual.size()); i++) {
