@@ -66,14 +66,17 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
 
     /**
      * The shortlist itself, once the catalog is open and the switch found (the benchmarks call it
-     * too): the prefilter as a Lucene query (none with {@code all}), a doc-value scan split over
+     * too): the prefilter as a Lucene query (none with {@code all}, or for fewer than
+     * {@link Shortlist#PREFILTER_FROM} drivers), a doc-value scan split over
      * {@code threads} partitions, each ranking its drivers on verdict and score, the partitions'
      * best merged and worded in full.
      */
     public static Shortlist.Result run(Catalog c, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
                                        int threads) throws java.io.IOException, org.gatefit.catalog.BadValueException {
         PairEvaluator.Prepared p = PairEvaluator.prepare(sw, op, m);
-        Shortlist.Prefilter pre = all ? Shortlist.Prefilter.NONE : Shortlist.prefilter(p);
+        int drivers = c.count(Kind.DRIVER);
+        Shortlist.Prefilter pre = all || drivers < Shortlist.PREFILTER_FROM ? Shortlist.Prefilter.NONE
+                : Shortlist.prefilter(p);
         Shortlist.Ranker first = new Shortlist.Ranker(p, top, all, pre.describe(), 0);
         boolean[] used = {false};
         List<Shortlist.Ranker> parts = c.scanColumns(Kind.DRIVER, PairSupport.filter(c, pre), threads, () -> {
@@ -87,7 +90,7 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         for (Shortlist.Ranker r : parts) {
             scanned += r.evaluated();
         }
-        int skipped = pre.require().isEmpty() && pre.exclude().isEmpty() ? 0 : c.count(Kind.DRIVER) - scanned;
+        int skipped = pre.require().isEmpty() && pre.exclude().isEmpty() ? 0 : drivers - scanned;
         return Shortlist.Ranker.merge(parts.isEmpty() ? List.of(first) : parts, skipped).result();
     }
 }

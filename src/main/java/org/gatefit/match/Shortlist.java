@@ -45,6 +45,14 @@ public final class Shortlist {
     }
 
     /**
+     * Catalogs with fewer drivers than this are evaluated driver by driver without a prefilter:
+     * building and running the query costs more than evaluating a few hundred drivers (it loads
+     * a good part of Lucene's query classes on a cold start), and the counts then cover every
+     * failure by rule.
+     */
+    public static final int PREFILTER_FROM = 2_000;
+
+    /**
      * What the catalog may skip without evaluating: drivers that a rule is certain to fail on
      * values they have (never on a value they lack).
      *

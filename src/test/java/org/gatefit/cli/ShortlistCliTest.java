@@ -151,6 +151,19 @@ class ShortlistCliTest {
         assertTrue(r.out().replaceAll("\\s+", " ").contains("High voltage can kill"), r.out());
     }
 
+    @Test
+    void aSmallCatalogIsEvaluatedDriverByDriverSoEveryFailureIsCounted() throws Exception {
+        // Fewer drivers than Shortlist.PREFILTER_FROM: no prefilter, every driver evaluated and counted.
+        CliRun r = run(new String[] {"shortlist"}, concat(SIC_HIGH, "--format", "json"));
+        JsonNode root = JSON.readTree(r.out());
+        int n = records(DRIVERS).size();
+        assertTrue(n < org.gatefit.match.Shortlist.PREFILTER_FROM);
+        assertEquals(n, root.get("evaluated").asInt(), r.out());
+        assertEquals(0, root.get("skipped").asInt());
+        assertEquals(0, root.get("prefilter").size());
+        assertEquals(n, root.get("passing").asInt() + root.get("warning").asInt() + root.get("failing").asInt());
+    }
+
     private static String message(JsonNode candidate, String rule) {
         for (JsonNode c : candidate.get("checks")) {
             if (c.get("rule").asText().equals(rule)) {
