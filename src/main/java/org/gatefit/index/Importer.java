@@ -10,6 +10,7 @@ import java.time.Clock;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import org.apache.commons.csv.CSVFormat;
@@ -22,6 +23,7 @@ import org.apache.lucene.document.StringField;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.index.SegmentInfos;
 import org.apache.lucene.index.Term;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
@@ -90,6 +92,8 @@ public final class Importer {
         }
         Files.createDirectories(dir);
         try (Directory directory = FSDirectory.open(dir)) {
+
+            boolean existed = DirectoryReader.indexExists(directory);
             IndexWriter writer;
             IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
                     .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
@@ -105,7 +109,11 @@ public final class Importer {
             Path tmpRejects = null;
             try (RejectsFile rejects = options.rejects() == null ? null
                     : new RejectsFile(tmpRejects = Files.createTempFile(absoluteParent(options.rejects()), ".rejects", ".csv"))) {
+                if (existed) { // the last commit, read under the write lock
+                    Catalog.checkFormat(dir, SegmentInfos.readLatestCommit(directory).getUserData());
+                }
                 Result r = write(writer, files, names, options, listener, rejects);
+                writer.setLiveCommitData(Map.of(Fields.FORMAT_KEY, Fields.FORMAT).entrySet());
                 writer.commit();
                 committed = true;
                 writer.close();
