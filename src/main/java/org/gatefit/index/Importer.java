@@ -98,7 +98,7 @@ public final class Importer {
             IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
                     .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
                     .setCommitOnClose(false)
-                    .setRAMBufferSizeMB(64);
+                    .setRAMBufferSizeMB(ramBufferMb());
             try {
                 writer = new IndexWriter(directory, cfg);
             } catch (LockObtainFailedException e) {
@@ -132,6 +132,15 @@ public final class Importer {
                 }
             }
         }
+    }
+
+    /**
+     * Indexing buffer: 256 MB (about 400,000 parts) so that a big import writes few segments and
+     * Lucene seldom merges during it, but at most a quarter of the heap.
+     */
+    private static double ramBufferMb() {
+        long quarterHeapMb = Runtime.getRuntime().maxMemory() / 4 / (1024 * 1024);
+        return Math.max(16, Math.min(256, quarterHeapMb));
     }
 
     private static Path absoluteParent(Path p) {

@@ -123,6 +123,11 @@ final class IndexPipeline implements AutoCloseable {
             while (true) {
                 List<Task> batch = q.take();
                 if (batch == STOP) {
+                    // Write the rows still in memory as segments here, on every worker at once, rather
+                    // than one buffer after the other on the thread that commits.
+                    while (failure.get() == null && writer.flushNextBuffer()) {
+                        // until no buffer is left
+                    }
                     return;
                 }
                 for (Task t : batch) {
