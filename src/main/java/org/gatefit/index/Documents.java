@@ -116,6 +116,9 @@ final class Documents {
                             wordsOnly = new ArrayList<>(2);
                         }
                         wordsOnly.add(c);
+                    } else if (n.equals(PartNumberQuery.FIELD)) {
+                        // No keyword term: unique per part, costly to write; PartNumberQuery matches it exactly.
+                        d.add(new SortedDocValuesField(n, new BytesRef(s)));
                     } else {
                         String lower = s.toLowerCase(Locale.ROOT);
                         if (lower.equals(s)) {

@@ -18,7 +18,9 @@ import java.util.Locale;
  *   <li>TEXT and CHOICE columns: a lower-cased exact term as {@code StringField} indexes it (exact
  *       filters such as {@code technology = sic-mosfet}) and a {@code SortedDocValuesField} with the
  *       text as written (sorting, ranking by lifecycle or pinout, scans and reading the row); one
- *       field instance carries both when the text is already lower case (every choice).</li>
+ *       field instance carries both when the text is already lower case (every choice). The part
+ *       number has the doc value only: its exact filter ({@code PartNumberQuery}) reads the
+ *       {@link #ID} terms and the doc value, so no unique keyword term per part is written.</li>
  *   <li>Words-only TEXT columns (description): no term or doc value of their own; their words go to
  *       {@link #ALL} and their text to {@link #SOURCE}.</li>
  * </ul>
