@@ -87,19 +87,30 @@ final class Documents {
         }
     }
 
-    static Document toDocument(Row row) {
+    /** @param id the row's {@link Fields#id} (the pipeline has it already) */
+    static Document toDocument(Row row, String id) {
         Document d = new Document();
-        d.add(new StringField(Fields.ID, Fields.id(row.kind().id(), row.key()), Field.Store.NO));
+        d.add(new StringField(Fields.ID, id, Field.Store.NO));
         d.add(new StringField(Fields.KIND, row.kind().id(), Field.Store.NO));
-        StringBuilder all = new StringBuilder();
+        StringBuilder all = new StringBuilder(128);
         Schema schema = Schema.of(row.kind());
+        List<Column> columns = schema.columns();
         List<Column> wordsOnly = null;
-        for (Column c : schema.columns()) {
-            Object v = row.values().get(c.name());
-            if (v == null) {
-                continue;
+        // The values are in schema order (Row's contract), so the columns are found by walking
+        // along the schema, not by a map lookup per column.
+        int at = 0;
+        for (Map.Entry<String, Object> e : row.values().entrySet()) {
+            String n = e.getKey();
+            int from = at;
+            while (at < columns.size() && !columns.get(at).name().equals(n)) {
+                at++;
             }
-            String n = c.name();
+            if (at == columns.size()) {
+                throw new IllegalArgumentException("expected the values of a " + row.kind().id() + " in schema order,"
+                        + " got column " + n + " after " + (from == 0 ? "none" : columns.get(from - 1).name()));
+            }
+            Column c = columns.get(at++);
+            Object v = e.getValue();
             switch (c.type()) {
                 case NUMBER -> {
                     double x = (Double) v;

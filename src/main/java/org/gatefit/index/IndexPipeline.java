@@ -27,7 +27,7 @@ import org.gatefit.catalog.Row;
  * delete-by-term an update costs.
  */
 final class IndexPipeline implements AutoCloseable {
-    private record Task(Row row, boolean update) {
+    private record Task(Row row, String id, boolean update) {
     }
 
     /** Rows travel in batches: one queue hand-off per batch, not per row. */
@@ -81,7 +81,7 @@ final class IndexPipeline implements AutoCloseable {
         boolean update = !seen.add(id) || (!clearedKinds.contains(row.kind().id()) && committed(id));
         int w = Math.floorMod(id.hashCode(), queues.size());
         List<Task> batch = pending.get(w);
-        batch.add(new Task(row, update));
+        batch.add(new Task(row, id, update));
         if (batch.size() >= BATCH) {
             send(w);
         }
@@ -136,10 +136,9 @@ final class IndexPipeline implements AutoCloseable {
                     }
                     Row row = t.row();
                     if (t.update()) {
-                        writer.updateDocument(new Term(Fields.ID, Fields.id(row.kind().id(), row.key())),
-                                Documents.toDocument(row));
+                        writer.updateDocument(new Term(Fields.ID, t.id()), Documents.toDocument(row, t.id()));
                     } else {
-                        writer.addDocument(Documents.toDocument(row));
+                        writer.addDocument(Documents.toDocument(row, t.id()));
                     }
                     long n = written.incrementAndGet();
                     synchronized (listener) {
