@@ -99,10 +99,10 @@ public final class Catalog implements AutoCloseable {
      * Refuses a catalog written in another index layout ({@link Fields#FORMAT}), which this version
      * would misread, with what to do instead.
      */
-    static void checkFormat(Path dir, Map<String, String> commitUserData) throws IOException {
+    static void checkFormat(Path dir, Map<String, String> commitUserData) throws CatalogFormatException {
         String format = commitUserData.get(Fields.FORMAT_KEY);
         if (!Fields.FORMAT.equals(format)) {
-            throw new IOException("the catalog in " + dir + " was written by another version of gatefit (index format "
+            throw new CatalogFormatException("the catalog in " + dir + " was written by another version of gatefit (index format "
                     + (format == null ? "1" : format) + "; expected " + Fields.FORMAT + "): import the CSV files again"
                     + " into a new catalog directory, or delete " + dir + " first");
         }

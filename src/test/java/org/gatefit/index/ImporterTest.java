@@ -310,9 +310,10 @@ class ImporterTest {
         try (Directory d = FSDirectory.open(dir)) {
             generation = SegmentInfos.readLatestCommit(d).getGeneration();
         }
-        IOException open = assertThrows(IOException.class, () -> Catalog.open(dir));
-        IOException imp = assertThrows(IOException.class, () -> run(UPSERT, quiet(), switches("a.csv", 0, 2, 50)));
-        for (IOException e : List.of(open, imp)) {
+        CatalogFormatException open = assertThrows(CatalogFormatException.class, () -> Catalog.open(dir));
+        CatalogFormatException imp = assertThrows(CatalogFormatException.class,
+                () -> run(UPSERT, quiet(), switches("a.csv", 0, 2, 50)));
+        for (CatalogFormatException e : List.of(open, imp)) {
             assertTrue(e.getMessage().contains("index format 1; expected " + Fields.FORMAT), e.getMessage());
             assertTrue(e.getMessage().contains("import the CSV files again into a new catalog directory"), e.getMessage());
             assertTrue(e.getMessage().contains(dir.toString()), e.getMessage());
