@@ -102,9 +102,9 @@ public final class Catalog implements AutoCloseable {
     static void checkFormat(Path dir, Map<String, String> commitUserData) throws CatalogFormatException {
         String format = commitUserData.get(Fields.FORMAT_KEY);
         if (!Fields.FORMAT.equals(format)) {
-            throw new CatalogFormatException("the catalog in " + dir + " was written by another version of gatefit (index format "
-                    + (format == null ? "1" : format) + "; expected " + Fields.FORMAT + "): import the CSV files again"
-                    + " into a new catalog directory, or delete " + dir + " first");
+            throw new CatalogFormatException("the catalog in " + dir + " was written by another version of gatefit"
+                    + " (index format " + (format == null ? "1" : format) + "; expected " + Fields.FORMAT + "):"
+                    + " import the CSV files again into a new catalog directory, or delete " + dir + " first");
         }
     }
 
@@ -210,7 +210,7 @@ public final class Catalog implements AutoCloseable {
             }
             rows[i] = leafRows.row(doc - leaves.get(li).docBase);
         }
-        return java.util.Arrays.asList(rows);
+        return new ArrayList<>(java.util.Arrays.asList(rows));
     }
 
     /**

@@ -92,7 +92,6 @@ public final class Importer {
         }
         Files.createDirectories(dir);
         try (Directory directory = FSDirectory.open(dir)) {
-
             boolean existed = DirectoryReader.indexExists(directory);
             IndexWriter writer;
             IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
@@ -206,7 +205,7 @@ public final class Importer {
                 }
             }
         }
-        pipeline.finish();
+        pipeline.finish(problemTotal[0] == 0); // segments are written only for an import that will commit
         written = pipeline.written();
         }
         if (problemTotal[0] > 0) {

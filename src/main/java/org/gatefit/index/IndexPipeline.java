@@ -45,6 +45,8 @@ final class IndexPipeline implements AutoCloseable {
     private final List<TermsEnum> committedIds = new ArrayList<>();
     private final Set<String> clearedKinds = new HashSet<>();
     private boolean closed;
+    /** Set before the stop marker is queued (the queue hand-off makes it visible to the workers). */
+    private volatile boolean writeSegments;
 
     IndexPipeline(IndexWriter writer, DirectoryReader committed, Importer.Listener listener, int threads)
             throws IOException {
@@ -125,7 +127,7 @@ final class IndexPipeline implements AutoCloseable {
                 if (batch == STOP) {
                     // Write the rows still in memory as segments here, on every worker at once, rather
                     // than one buffer after the other on the thread that commits.
-                    while (failure.get() == null && writer.flushNextBuffer()) {
+                    while (writeSegments && failure.get() == null && writer.flushNextBuffer()) {
                         // until no buffer is left
                     }
                     return;
@@ -162,11 +164,17 @@ final class IndexPipeline implements AutoCloseable {
         }
     }
 
-    /** Waits for every queued row to be written; rethrows a worker's failure. */
-    void finish() throws IOException {
+    /**
+     * Waits for every queued row to be written; rethrows a worker's failure.
+     *
+     * @param segments whether the workers then write what they hold in memory as segments (for an
+     *                 import about to commit; one that will roll back leaves it to be dropped)
+     */
+    void finish(boolean segments) throws IOException {
         for (int w = 0; w < queues.size(); w++) {
             send(w);
         }
+        writeSegments = segments;
         close();
         rethrow();
     }
