@@ -60,7 +60,10 @@ public final class Cells {
     private static String text(Column c, String t) throws BadValueException {
         String v = restoreText(t);
         if (c.pattern() != null) {
-            v = SPACE.matcher(v.toLowerCase(Locale.ROOT)).replaceAll("");
+            v = v.toLowerCase(Locale.ROOT);
+            if (hasWhitespace(v)) {
+                v = SPACE.matcher(v).replaceAll("");
+            }
             if (!c.pattern().matcher(v).matches()) {
                 throw new BadValueException("'" + t + "' is not valid (expected " + c.description()
                         .replaceAll("\\.$", "").toLowerCase(Locale.ROOT) + ")");
@@ -69,9 +72,21 @@ public final class Cells {
         return v;
     }
 
+    /** Whether {@link #SPACE} would find anything (it matches exactly the characters below). */
+    private static boolean hasWhitespace(String v) {
+        for (int i = 0; i < v.length(); i++) {
+            char ch = v.charAt(i);
+            if (ch == ' ' || ch == '\t' || ch == '\n' || ch == 0x0B || ch == '\f' || ch == '\r') {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private static String choice(Column c, String t) throws BadValueException {
         String v = t.toLowerCase(Locale.ROOT);
-        if (c.choices().equals(java.util.List.of("yes", "no"))) {
+        java.util.List<String> choices = c.choices();
+        if (choices.size() == 2 && choices.get(0).equals("yes") && choices.get(1).equals("no")) {
             v = switch (v) {
                 case "y", "true", "1", "yes" -> "yes";
                 case "n", "false", "0", "no" -> "no";
@@ -87,6 +102,9 @@ public final class Cells {
 
     private static double plainNumber(Column c, String t, boolean decimalComma) throws BadValueException {
         String s = decimalComma ? t.replace(',', '.') : t;
+        if (Units.plainDecimal(s)) {
+            return Units.plainDecimalValue(s); // what the pattern and parseDouble below give, without them
+        }
         try {
             if (!PLAIN.matcher(s).matches()) {
                 throw new NumberFormatException();
@@ -102,18 +120,22 @@ public final class Cells {
     }
 
     private static void checkBounds(Column c, double v, String t) throws BadValueException {
-        String unit = c.unitSymbol().isEmpty() ? "" : " " + c.unitSymbol();
         if (c.minimum() != null) {
             double min = c.minimum();
             if (c.minExclusive() ? v <= min : v < min) {
                 String rel = c.minExclusive() ? "above " : "at least ";
                 throw new BadValueException("'" + t + "' is out of range (expected a value " + rel
-                        + Numbers.format(min) + unit + ")");
+                        + Numbers.format(min) + unitSuffix(c) + ")");
             }
         }
         if (c.maximum() != null && v > c.maximum()) {
             throw new BadValueException("'" + t + "' is out of range (expected a value at most "
-                    + Numbers.format(c.maximum()) + unit + ")");
+                    + Numbers.format(c.maximum()) + unitSuffix(c) + ")");
         }
+    }
+
+    /** " nC" for messages, or empty for a column without unit (only built when a bound fails). */
+    private static String unitSuffix(Column c) {
+        return c.unitSymbol().isEmpty() ? "" : " " + c.unitSymbol();
     }
 }

@@ -248,6 +248,8 @@ public final class SheetReader {
         final List<String> unknown = new ArrayList<>();
         final Map<Integer, String> extraIndex = new LinkedHashMap<>();
         final List<Integer> unnamed = new ArrayList<>();
+        /** Header position of each schema column, in schema order; -1 when the file lacks it. */
+        int[] columnAt;
         int width;
 
         int position(String column) {
@@ -312,7 +314,15 @@ public final class SheetReader {
                     + String.join(", ", header) + ")"));
             ok = false;
         }
-        return ok ? l : null;
+        if (!ok) {
+            return null;
+        }
+        l.columnAt = new int[schema.columns().size()];
+        for (int i = 0; i < l.columnAt.length; i++) {
+            Integer at = l.index.get(schema.columns().get(i).name());
+            l.columnAt[i] = at == null ? -1 : at;
+        }
+        return l;
     }
 
     private Row parseRow(Schema schema, Layout l, CSVRecord rec, long line, boolean decimalComma, String keyColumn,
@@ -322,15 +332,17 @@ public final class SheetReader {
                     + " (expected one cell per column; a value holding the separator needs double quotes)"));
             return null;
         }
-        Map<String, Object> values = new LinkedHashMap<>();
-        for (Column c : schema.columns()) {
-            Integer idx = l.index.get(c.name());
-            String cell = idx == null ? "" : rec.get(idx);
+        List<Column> columns = schema.columns();
+        LinkedHashMap<String, Object> values = new LinkedHashMap<>(columns.size() * 2); // no rehash per row
+        for (int ci = 0; ci < columns.size(); ci++) {
+            Column c = columns.get(ci);
+            int at = l.columnAt[ci];
+            String cell = at < 0 ? "" : rec.get(at);
             Object v;
             try {
                 v = Cells.parse(c, cell, decimalComma);
             } catch (BadValueException e) {
-                out.add(new Problem(file, line, c.name(), idx + 1, cell, e.getMessage()));
+                out.add(new Problem(file, line, c.name(), at + 1, cell, e.getMessage())); // an empty cell never fails
                 continue;
             }
             if (v == null && c.defaultFrom() != null) {
@@ -345,7 +357,7 @@ public final class SheetReader {
             }
             if (v == null) {
                 if (c.required()) {
-                    out.add(new Problem(file, line, c.name(), idx == null ? 0 : idx + 1, cell,
+                    out.add(new Problem(file, line, c.name(), at < 0 ? 0 : at + 1, cell,
                             "required value is empty (expected " + c.expectation() + ")"));
                 }
                 continue;
@@ -359,7 +371,7 @@ public final class SheetReader {
                         + " that holds values)"));
             }
         }
-        Map<String, String> extras = new LinkedHashMap<>();
+        Map<String, String> extras = l.extraIndex.isEmpty() ? Map.of() : new LinkedHashMap<>();
         l.extraIndex.forEach((i, name) -> {
             String v = rec.get(i).strip();
             if (!v.isEmpty()) {
@@ -369,7 +381,7 @@ public final class SheetReader {
         if (!out.isEmpty()) {
             return null;
         }
-        return new Row(schema.kind(), values.get(keyColumn).toString(), file, line, values, extras);
+        return new Row(schema.kind(), values.get(keyColumn).toString(), file, line, Row.owned(values), extras);
     }
 
     private static Kind kindOrNull(List<String> header) {
@@ -395,8 +407,8 @@ public final class SheetReader {
     }
 
     private static boolean blank(CSVRecord rec) {
-        for (String s : rec) {
-            if (!s.isBlank()) {
+        for (int i = 0, n = rec.size(); i < n; i++) { // by index: CSVRecord's iterator copies the record
+            if (!rec.get(i).isBlank()) {
                 return false;
             }
         }

@@ -54,7 +54,7 @@ public final class Units {
         String t = text.strip();
         if (plainDecimal(t)) {
             // A bare number is already in the column's unit; parseDouble rounds correctly, as BigDecimal would.
-            double d = Double.parseDouble(t);
+            double d = plainDecimalValue(t);
             return d == 0 ? 0.0 : d;
         }
         if (t.isEmpty()) {
@@ -104,7 +104,7 @@ public final class Units {
     }
 
     /** Digits with an optional sign and one decimal point, nothing else (the common case, parsed fast). */
-    private static boolean plainDecimal(String t) {
+    static boolean plainDecimal(String t) {
         int n = t.length();
         if (n == 0 || n > 18) {
             return false;
@@ -125,9 +125,75 @@ public final class Units {
         return digit;
     }
 
+    /** Exact powers of ten as doubles (10^0 to 10^22 are all exactly representable in binary64). */
+    private static final double[] EXACT_POW10 = new double[23];
+
+    static {
+        double p = 1;
+        for (int i = 0; i < EXACT_POW10.length; i++) {
+            EXACT_POW10[i] = p;
+            p *= 10;
+        }
+    }
+
+    /**
+     * The double nearest a {@link #plainDecimal} text, as {@link Double#parseDouble} gives it. With
+     * at most 15 digits the digits form an integer below 2^53 and the power of ten is exact, so one
+     * IEEE division is correctly rounded (the classic exact fast path); longer texts go to
+     * {@code parseDouble}.
+     */
+    static double plainDecimalValue(String t) {
+        int n = t.length();
+        int i = 0;
+        boolean negative = false;
+        char first = t.charAt(0);
+        if (first == '-' || first == '+') {
+            negative = first == '-';
+            i = 1;
+        }
+        long m = 0;
+        int digits = 0;
+        int fraction = -1;
+        for (; i < n; i++) {
+            char c = t.charAt(i);
+            if (c == '.') {
+                fraction = 0;
+                continue;
+            }
+            m = m * 10 + (c - '0');
+            digits++;
+            if (fraction >= 0) {
+                fraction++;
+            }
+        }
+        if (digits > 15) {
+            return Double.parseDouble(t);
+        }
+        double d = fraction > 0 ? m / EXACT_POW10[fraction] : (double) m;
+        return negative ? -d : d;
+    }
+
     /** Parses a whole non-negative or signed count, e.g. stock; a point with zeros after it is accepted. */
     public static long parseInteger(String text) throws BadValueException {
         String t = text.strip();
+        int n = t.length();
+        if (n > 0 && n <= 18) {
+            // Plain digits with an optional sign (the common case): the same value BigDecimal gives.
+            int i = t.charAt(0) == '-' || t.charAt(0) == '+' ? 1 : 0;
+            long v = 0;
+            boolean digits = i < n;
+            for (int j = i; j < n && digits; j++) {
+                char c = t.charAt(j);
+                if (c >= '0' && c <= '9') {
+                    v = v * 10 + (c - '0');
+                } else {
+                    digits = false;
+                }
+            }
+            if (digits) {
+                return t.charAt(0) == '-' ? -v : v;
+            }
+        }
         try {
             BigDecimal d = new BigDecimal(t);
             return d.longValueExact();

@@ -105,7 +105,7 @@ public final class Cli {
         } else if (ex instanceof NoSuchFileException e) {
             err.println("gatefit " + cmd.getCommandName() + ": no such file: " + e.getFile());
             code = ExitCode.BAD_DATA;
-        } else if (ex instanceof CatalogBusyException) {
+        } else if (ex instanceof CatalogBusyException || ex instanceof org.gatefit.index.CatalogFormatException) {
             err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
             code = ExitCode.ENVIRONMENT;
         } else if (ex instanceof java.io.IOException) {

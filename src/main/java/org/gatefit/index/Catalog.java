@@ -14,6 +14,7 @@ import java.util.LinkedHashMap;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.index.LeafReader;
 import org.apache.lucene.index.PostingsEnum;
+import org.apache.lucene.index.ReaderUtil;
 import org.apache.lucene.index.Terms;
 import org.apache.lucene.index.TermsEnum;
 import org.apache.lucene.util.Bits;
@@ -82,7 +83,14 @@ public final class Catalog implements AutoCloseable {
                 d.close();
                 return new Catalog(dir, null, null);
             }
-            return new Catalog(dir, d, DirectoryReader.open(d));
+            DirectoryReader r = DirectoryReader.open(d);
+            try {
+                checkFormat(dir, r.getIndexCommit().getUserData());
+            } catch (IOException e) {
+                r.close();
+                throw e;
+            }
+            return new Catalog(dir, d, r);
         } catch (IndexNotFoundException e) {
             d.close();
             return new Catalog(dir, null, null);
@@ -104,6 +112,19 @@ public final class Catalog implements AutoCloseable {
         columns = keep ? new java.util.concurrent.ConcurrentHashMap<>() : null;
         memos = keep ? new java.util.concurrent.ConcurrentHashMap<>() : null;
         return this;
+    }
+
+    /**
+     * Refuses a catalog written in another index layout ({@link Fields#FORMAT}), which this version
+     * would misread, with what to do instead.
+     */
+    static void checkFormat(Path dir, Map<String, String> commitUserData) throws CatalogFormatException {
+        String format = commitUserData.get(Fields.FORMAT_KEY);
+        if (!Fields.FORMAT.equals(format)) {
+            throw new CatalogFormatException("the catalog in " + dir + " was written by another version of gatefit"
+                    + " (index format " + (format == null ? "1" : format) + "; expected " + Fields.FORMAT + "):"
+                    + " import the CSV files again into a new catalog directory, or delete " + dir + " first");
+        }
     }
 
     /** Where the catalog lives. */
@@ -162,7 +183,7 @@ public final class Catalog implements AutoCloseable {
             Bits live = leaf.reader().getLiveDocs();
             for (int doc = pe.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = pe.nextDoc()) {
                 if (live == null || live.get(doc)) {
-                    return Optional.of(Documents.toRow(leaf.reader().storedFields().document(doc)));
+                    return Optional.of(new Documents.LeafRows(leaf.reader()).row(doc));
                 }
             }
         }
@@ -187,12 +208,28 @@ public final class Catalog implements AutoCloseable {
         }
         int n = Math.max(1, Math.min(limit, Math.max(1, reader.maxDoc())));
         TopDocs td = sort == null ? searcher.search(query, n) : searcher.search(query, n, sort);
-        List<Row> out = new ArrayList<>(td.scoreDocs.length);
-        StoredFields sf = searcher.storedFields();
-        for (ScoreDoc sd : td.scoreDocs) {
-            out.add(Documents.toRow(sf.document(sd.doc)));
+        // Rows are read from doc values, whose iterators only go forward: read the hits in index
+        // order, one segment after the other, and put each row back at its rank.
+        ScoreDoc[] hits = td.scoreDocs;
+        Integer[] byDoc = new Integer[hits.length];
+        for (int i = 0; i < hits.length; i++) {
+            byDoc[i] = i;
         }
-        return out;
+        java.util.Arrays.sort(byDoc, Comparator.comparingInt(i -> hits[i].doc));
+        Row[] rows = new Row[hits.length];
+        List<LeafReaderContext> leaves = reader.leaves();
+        Documents.LeafRows leafRows = null;
+        int leafIndex = -1;
+        for (int i : byDoc) {
+            int doc = hits[i].doc;
+            int li = ReaderUtil.subIndex(doc, leaves);
+            if (li != leafIndex) {
+                leafIndex = li;
+                leafRows = new Documents.LeafRows(leaves.get(li).reader());
+            }
+            rows[i] = leafRows.row(doc - leaves.get(li).docBase);
+        }
+        return new ArrayList<>(java.util.Arrays.asList(rows));
     }
 
     /**

@@ -1,101 +1,274 @@
 package org.gatefit.index;
 
+import java.io.IOException;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.apache.lucene.document.Document;
-import org.apache.lucene.document.DoubleDocValuesField;
-import org.apache.lucene.document.DoublePoint;
 import org.apache.lucene.document.Field;
-import org.apache.lucene.document.LongPoint;
-import org.apache.lucene.document.NumericDocValuesField;
+import org.apache.lucene.document.FieldType;
 import org.apache.lucene.document.SortedDocValuesField;
 import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
 import org.apache.lucene.document.TextField;
+import org.apache.lucene.index.DocValuesType;
+import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.index.IndexableField;
+import org.apache.lucene.index.LeafReader;
+import org.apache.lucene.index.NumericDocValues;
+import org.apache.lucene.index.SortedDocValues;
+import org.apache.lucene.store.ByteArrayDataInput;
+import org.apache.lucene.store.ByteBuffersDataOutput;
 import org.apache.lucene.util.BytesRef;
+import org.apache.lucene.util.NumericUtils;
 import org.gatefit.catalog.Column;
+import org.gatefit.catalog.ColumnType;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.catalog.Schema;
 
-/** Maps catalog rows to Lucene documents and back (see {@link Fields} for the field types). */
+/**
+ * Maps catalog rows to Lucene documents and back (see {@link Fields} for the field types). A row
+ * is read back from its doc values plus the one stored {@link Fields#SOURCE} record, so every
+ * value is written once for reading, not once more as a stored field per column.
+ */
 final class Documents {
+    /** A one-dimensional point and a numeric doc value in one field (as Lucene's own {@code LongField}). */
+    private static final FieldType POINT_AND_NUMERIC = new FieldType();
+    /** An exact (not analyzed) term and a sorted doc value of the same bytes in one field. */
+    private static final FieldType TERM_AND_SORTED = new FieldType();
+    /** {@code _all}: analyzed like {@link TextField}, without positions (only term and prefix queries read it). */
+    private static final FieldType WORDS = new FieldType(TextField.TYPE_NOT_STORED);
+    /** Version of {@link Fields#SOURCE}'s layout. */
+    private static final byte SOURCE_VERSION = 1;
+
+    static {
+        POINT_AND_NUMERIC.setDimensions(1, Long.BYTES);
+        POINT_AND_NUMERIC.setDocValuesType(DocValuesType.NUMERIC);
+        POINT_AND_NUMERIC.freeze();
+        TERM_AND_SORTED.setIndexOptions(IndexOptions.DOCS);
+        TERM_AND_SORTED.setOmitNorms(true);
+        TERM_AND_SORTED.setTokenized(false);
+        TERM_AND_SORTED.setDocValuesType(DocValuesType.SORTED);
+        TERM_AND_SORTED.freeze();
+        WORDS.setIndexOptions(IndexOptions.DOCS_AND_FREQS);
+        WORDS.freeze();
+    }
+
+    /** Scratch for the stored record, one per indexing thread (the bytes are copied out per row). */
+    private static final ThreadLocal<ByteBuffersDataOutput> SCRATCH =
+            ThreadLocal.withInitial(ByteBuffersDataOutput::newResettableInstance);
+
     private Documents() {
     }
 
-    static Document toDocument(Row row) {
+    /**
+     * The value of a NUMBER or INTEGER column: its point (what {@code DoublePoint} or {@code LongPoint}
+     * would index) and its numeric doc value (what {@code DoubleDocValuesField}, i.e. the raw bits of
+     * the double, or {@code NumericDocValuesField} would write), without a second field per value.
+     */
+    private static final class PointAndNumeric extends Field {
+        private final long sortable;
+
+        PointAndNumeric(String name, long docValue, long sortable) {
+            super(name, POINT_AND_NUMERIC);
+            this.fieldsData = docValue;
+            this.sortable = sortable;
+        }
+
+        @Override
+        public BytesRef binaryValue() {
+            byte[] b = new byte[Long.BYTES];
+            NumericUtils.longToSortableBytes(sortable, b, 0);
+            return new BytesRef(b);
+        }
+    }
+
+    /** @param id the row's {@link Fields#id} (the pipeline has it already) */
+    static Document toDocument(Row row, String id) {
         Document d = new Document();
-        d.add(new StringField(Fields.ID, Fields.id(row.kind().id(), row.key()), Field.Store.NO));
-        d.add(new StringField(Fields.KIND, row.kind().id(), Field.Store.YES));
-        d.add(new StoredField(Fields.SOURCE_FILE, row.file() == null ? "" : row.file()));
-        d.add(new StoredField(Fields.SOURCE_LINE, row.line()));
-        StringBuilder all = new StringBuilder();
+        d.add(new StringField(Fields.ID, id, Field.Store.NO));
+        d.add(new StringField(Fields.KIND, row.kind().id(), Field.Store.NO));
+        StringBuilder all = new StringBuilder(128);
         Schema schema = Schema.of(row.kind());
-        for (Column c : schema.columns()) {
-            Object v = row.values().get(c.name());
-            if (v == null) {
-                continue;
+        List<Column> columns = schema.columns();
+        List<Column> wordsOnly = null;
+        // The values are in schema order (Row's contract), so the columns are found by walking
+        // along the schema, not by a map lookup per column.
+        int at = 0;
+        for (Map.Entry<String, Object> e : row.values().entrySet()) {
+            String n = e.getKey();
+            int from = at;
+            while (at < columns.size() && !columns.get(at).name().equals(n)) {
+                at++;
             }
-            String n = c.name();
+            if (at == columns.size()) {
+                throw new IllegalArgumentException("expected the values of a " + row.kind().id() + " in schema order,"
+                        + " got column " + n + " after " + (from == 0 ? "none" : columns.get(from - 1).name()));
+            }
+            Column c = columns.get(at++);
+            Object v = e.getValue();
             switch (c.type()) {
                 case NUMBER -> {
                     double x = (Double) v;
-                    d.add(new DoublePoint(n, x));
-                    d.add(new DoubleDocValuesField(n, x));
-                    d.add(new StoredField(n, x));
+                    d.add(new PointAndNumeric(n, Double.doubleToRawLongBits(x), NumericUtils.doubleToSortableLong(x)));
                 }
                 case INTEGER -> {
                     long x = (Long) v;
-                    d.add(new LongPoint(n, x));
-                    d.add(new NumericDocValuesField(n, x));
-                    d.add(new StoredField(n, x));
+                    d.add(new PointAndNumeric(n, x, x));
                 }
                 case TEXT, CHOICE -> {
                     String s = (String) v;
-                    if (!c.wordsOnly()) {
-                        d.add(new StringField(n, s.toLowerCase(Locale.ROOT), Field.Store.NO));
+                    if (c.wordsOnly()) {
+                        if (wordsOnly == null) {
+                            wordsOnly = new ArrayList<>(2);
+                        }
+                        wordsOnly.add(c);
+                    } else if (n.equals(PartNumberQuery.FIELD)) {
+                        // No keyword term: unique per part, costly to write; PartNumberQuery matches it exactly.
                         d.add(new SortedDocValuesField(n, new BytesRef(s)));
+                    } else {
+                        String lower = s.toLowerCase(Locale.ROOT);
+                        if (lower.equals(s)) {
+                            d.add(new Field(n, new BytesRef(s), TERM_AND_SORTED));
+                        } else {
+                            d.add(new StringField(n, lower, Field.Store.NO));
+                            d.add(new SortedDocValuesField(n, new BytesRef(s)));
+                        }
                     }
-                    d.add(new StoredField(n, s));
-                    if (c.type() == org.gatefit.catalog.ColumnType.TEXT) {
+                    if (c.type() == ColumnType.TEXT) {
                         all.append(s).append(' ');
                     }
                 }
             }
         }
-        row.extras().forEach((k, v) -> {
-            d.add(new StoredField(Fields.EXTRA_NAME, k));
-            d.add(new StoredField(Fields.EXTRA_VALUE, v));
-        });
-        d.add(new TextField(Fields.ALL, all.toString(), Field.Store.NO));
+        d.add(new StoredField(Fields.SOURCE, source(row, wordsOnly)));
+        d.add(new Field(Fields.ALL, all.toString(), WORDS));
         return d;
     }
 
-    static Row toRow(Document d) {
-        Kind kind = Kind.fromId(d.get(Fields.KIND));
-        Schema schema = Schema.of(kind);
-        Map<String, Object> values = new LinkedHashMap<>();
-        for (Column c : schema.columns()) {
-            IndexableField f = d.getField(c.name());
+    /** The stored record: kind, file, line, words-only texts and extra columns (everything not in doc values). */
+    private static byte[] source(Row row, List<Column> wordsOnly) {
+        ByteBuffersDataOutput out = SCRATCH.get();
+        out.reset();
+        try {
+            out.writeByte(SOURCE_VERSION);
+            out.writeString(row.kind().id());
+            out.writeString(row.file() == null ? "" : row.file());
+            out.writeVLong(row.line());
+            out.writeVInt(wordsOnly == null ? 0 : wordsOnly.size());
+            if (wordsOnly != null) {
+                for (Column c : wordsOnly) {
+                    out.writeString(c.name());
+                    out.writeString((String) row.values().get(c.name()));
+                }
+            }
+            out.writeVInt(row.extras().size());
+            for (Map.Entry<String, String> e : row.extras().entrySet()) {
+                out.writeString(e.getKey());
+                out.writeString(e.getValue());
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException("in-memory output failed", e);
+        }
+        return out.toArrayCopy();
+    }
+
+    /**
+     * Reads rows of one segment back from doc values and the stored record. Ask for documents in
+     * increasing order (doc-value iterators only go forward; going back re-opens them).
+     */
+    static final class LeafRows {
+        private static final Set<String> SOURCE_ONLY = Set.of(Fields.SOURCE);
+        private final LeafReader reader;
+        private final Map<String, NumericDocValues> numeric = new java.util.HashMap<>();
+        private final Map<String, SortedDocValues> sorted = new java.util.HashMap<>();
+        private int last = -1;
+
+        LeafRows(LeafReader reader) {
+            this.reader = reader;
+        }
+
+        Row row(int doc) throws IOException {
+            if (doc <= last) {
+                numeric.clear();
+                sorted.clear();
+            }
+            last = doc;
+            Document stored = reader.storedFields().document(doc, SOURCE_ONLY);
+            IndexableField f = stored.getField(Fields.SOURCE);
             if (f == null) {
-                continue;
+                throw new IOException("document " + doc + " has no " + Fields.SOURCE + " record (expected a part written by"
+                        + " gatefit's importer)");
             }
-            switch (c.type()) {
-                case NUMBER -> values.put(c.name(), f.numericValue().doubleValue());
-                case INTEGER -> values.put(c.name(), f.numericValue().longValue());
-                case TEXT, CHOICE -> values.put(c.name(), f.stringValue());
+            BytesRef b = f.binaryValue();
+            ByteArrayDataInput in = new ByteArrayDataInput(b.bytes, b.offset, b.length);
+            byte version = in.readByte();
+            if (version != SOURCE_VERSION) {
+                throw new IOException("document " + doc + ": stored record version " + version + " (expected " + SOURCE_VERSION + ")");
             }
+            Kind kind = Kind.fromId(in.readString());
+            String file = in.readString();
+            long line = in.readVLong();
+            int nWords = in.readVInt();
+            Map<String, String> words = nWords == 0 ? Map.of() : new java.util.HashMap<>();
+            for (int i = 0; i < nWords; i++) {
+                words.put(in.readString(), in.readString());
+            }
+            int nExtras = in.readVInt();
+            Map<String, String> extras = new LinkedHashMap<>();
+            for (int i = 0; i < nExtras; i++) {
+                extras.put(in.readString(), in.readString());
+            }
+            List<Column> cols = Schema.of(kind).columns();
+            LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2);
+            for (Column c : cols) {
+                String n = c.name();
+                switch (c.type()) {
+                    case NUMBER, INTEGER -> {
+                        NumericDocValues dv = numeric(n);
+                        if (dv != null && dv.advanceExact(doc)) {
+                            long raw = dv.longValue();
+                            values.put(n, c.type() == ColumnType.NUMBER ? (Object) Double.longBitsToDouble(raw) : (Object) raw);
+                        }
+                    }
+                    case TEXT, CHOICE -> {
+                        if (c.wordsOnly()) {
+                            String s = words.get(n);
+                            if (s != null) {
+                                values.put(n, s);
+                            }
+                        } else {
+                            SortedDocValues dv = sorted(n);
+                            if (dv != null && dv.advanceExact(doc)) {
+                                values.put(n, dv.lookupOrd(dv.ordValue()).utf8ToString());
+                            }
+                        }
+                    }
+                }
+            }
+            return new Row(kind, (String) values.get("part_number"), file, line, Row.owned(values), extras);
         }
-        Map<String, String> extras = new LinkedHashMap<>();
-        String[] names = d.getValues(Fields.EXTRA_NAME);
-        String[] vals = d.getValues(Fields.EXTRA_VALUE);
-        for (int i = 0; i < names.length && i < vals.length; i++) {
-            extras.put(names[i], vals[i]);
+
+        private NumericDocValues numeric(String field) throws IOException {
+            NumericDocValues dv = numeric.get(field);
+            if (dv == null && !numeric.containsKey(field)) {
+                dv = reader.getNumericDocValues(field);
+                numeric.put(field, dv);
+            }
+            return dv;
         }
-        IndexableField line = d.getField(Fields.SOURCE_LINE);
-        return new Row(kind, (String) values.get("part_number"), d.get(Fields.SOURCE_FILE),
-                line == null ? 0 : line.numericValue().longValue(), values, extras);
+
+        private SortedDocValues sorted(String field) throws IOException {
+            SortedDocValues dv = sorted.get(field);
+            if (dv == null && !sorted.containsKey(field)) {
+                dv = reader.getSortedDocValues(field);
+                sorted.put(field, dv);
+            }
+            return dv;
+        }
     }
 }

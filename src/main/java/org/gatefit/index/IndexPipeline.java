@@ -27,7 +27,7 @@ import org.gatefit.catalog.Row;
  * delete-by-term an update costs.
  */
 final class IndexPipeline implements AutoCloseable {
-    private record Task(Row row, boolean update) {
+    private record Task(Row row, String id, boolean update) {
     }
 
     /** Rows travel in batches: one queue hand-off per batch, not per row. */
@@ -45,6 +45,8 @@ final class IndexPipeline implements AutoCloseable {
     private final List<TermsEnum> committedIds = new ArrayList<>();
     private final Set<String> clearedKinds = new HashSet<>();
     private boolean closed;
+    /** Set before the stop marker is queued (the queue hand-off makes it visible to the workers). */
+    private volatile boolean writeSegments;
 
     IndexPipeline(IndexWriter writer, DirectoryReader committed, Importer.Listener listener, int threads)
             throws IOException {
@@ -81,7 +83,7 @@ final class IndexPipeline implements AutoCloseable {
         boolean update = !seen.add(id) || (!clearedKinds.contains(row.kind().id()) && committed(id));
         int w = Math.floorMod(id.hashCode(), queues.size());
         List<Task> batch = pending.get(w);
-        batch.add(new Task(row, update));
+        batch.add(new Task(row, id, update));
         if (batch.size() >= BATCH) {
             send(w);
         }
@@ -123,6 +125,11 @@ final class IndexPipeline implements AutoCloseable {
             while (true) {
                 List<Task> batch = q.take();
                 if (batch == STOP) {
+                    // Write the rows still in memory as segments here, on every worker at once, rather
+                    // than one buffer after the other on the thread that commits.
+                    while (writeSegments && failure.get() == null && writer.flushNextBuffer()) {
+                        // until no buffer is left
+                    }
                     return;
                 }
                 for (Task t : batch) {
@@ -131,10 +138,9 @@ final class IndexPipeline implements AutoCloseable {
                     }
                     Row row = t.row();
                     if (t.update()) {
-                        writer.updateDocument(new Term(Fields.ID, Fields.id(row.kind().id(), row.key())),
-                                Documents.toDocument(row));
+                        writer.updateDocument(new Term(Fields.ID, t.id()), Documents.toDocument(row, t.id()));
                     } else {
-                        writer.addDocument(Documents.toDocument(row));
+                        writer.addDocument(Documents.toDocument(row, t.id()));
                     }
                     long n = written.incrementAndGet();
                     synchronized (listener) {
@@ -158,11 +164,17 @@ final class IndexPipeline implements AutoCloseable {
         }
     }
 
-    /** Waits for every queued row to be written; rethrows a worker's failure. */
-    void finish() throws IOException {
+    /**
+     * Waits for every queued row to be written; rethrows a worker's failure.
+     *
+     * @param segments whether the workers then write what they hold in memory as segments (for an
+     *                 import about to commit; one that will roll back leaves it to be dropped)
+     */
+    void finish(boolean segments) throws IOException {
         for (int w = 0; w < queues.size(); w++) {
             send(w);
         }
+        writeSegments = segments;
         close();
         rethrow();
     }

@@ -281,7 +281,8 @@ public final class PartSearch {
                 }
             }
             case TEXT, CHOICE -> {
-                Query eq = new TermQuery(new Term(n, v.toString().toLowerCase(Locale.ROOT)));
+                String lower = v.toString().toLowerCase(Locale.ROOT);
+                Query eq = n.equals(PartNumberQuery.FIELD) ? new PartNumberQuery(lower) : new TermQuery(new Term(n, lower));
                 switch (c.op()) {
                     case EQ -> q.add(eq, Occur.FILTER);
                     case NE -> {

@@ -6,12 +6,14 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.util.ArrayList;
 import java.util.List;
+import org.gatefit.index.Fields;
 import org.gatefit.index.Importer;
 
 /**
  * Synthetic catalogs imported once and kept under a folder (by default {@code target/bench-data},
  * or the system property {@code gatefit.bench.data}), so benchmark forks and repeated runs do not
- * re-import a million rows. A catalog is rebuilt when its folder lacks the {@code complete} marker.
+ * re-import a million rows. A catalog is rebuilt when its folder lacks the {@code complete} marker
+ * or the marker names another index format ({@link Fields#FORMAT}).
  */
 public final class BenchCatalogs {
     private BenchCatalogs() {
@@ -49,8 +51,16 @@ public final class BenchCatalogs {
     /** A catalog of {@code switches} switches and {@code drivers} drivers, imported if missing. */
     public static Path catalog(long switches, long drivers) throws Exception {
         Path dir = root().resolve("catalog-s" + switches + "-d" + drivers);
-        if (Files.exists(dir.resolve("complete"))) {
+        Path marker = dir.resolve("complete");
+        if (Files.exists(marker) && Files.readString(marker).equals(Fields.FORMAT)) {
             return dir;
+        }
+        if (Files.exists(dir)) { // unfinished, or written in another index format: start again
+            try (java.util.stream.Stream<Path> s = Files.walk(dir)) {
+                for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                    Files.delete(p);
+                }
+            }
         }
         List<Path> files = new ArrayList<>();
         if (switches > 0) {
@@ -61,7 +71,7 @@ public final class BenchCatalogs {
         }
         List<String> names = files.stream().map(Path::toString).toList();
         new Importer(dir, Clock.systemUTC()).run(files, names, new Importer.Options(null, true, null), x -> { });
-        Files.writeString(dir.resolve("complete"), "");
+        Files.writeString(marker, Fields.FORMAT);
         return dir;
     }
 }

@@ -6,10 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.ExecutorService;
@@ -25,6 +27,7 @@ import org.apache.lucene.store.FSDirectory;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
+import org.gatefit.catalog.SheetReader;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -255,6 +258,68 @@ class ImporterTest {
         run(UPSERT, quiet(), d);
         try (Catalog c = Catalog.open(dir)) {
             assertEquals(2, c.lookup("tst-0").size());
+        }
+    }
+
+    @Test
+    void aPartReadsBackExactlyAsTheFileReadIt() throws Exception {
+        // Every column type, a unit-suffixed number, a mixed-case text, a default from another column,
+        // a description with a comma and non-ASCII text, and extra columns in a non-alphabetical order.
+        Path f = Files.writeString(tmp.resolve("all.csv"), "part_number,maker,package,pinout,lifecycle,stock,unit_price,"
+                + "description,technology,channel,v_block_v,q_g_nc,v_gs_max_v,v_gs_min_v,r_g_int_ohm,zeta_note,alpha_note\n"
+                + "TST-A1,TestMaker,TO-247-4,,NRND,12,1.25,\"Kelvin-source, 4 µm² die\",SiC-MOSFET,n,1.2kV,0.13 uC,22,-8,4R7,z1,a1\n"
+                + "tst-b2,Testmaker,SO-8,SO-8-B,,,,,si-mosfet,,100,57.7,20,-20,,,only alpha\n"
+                + "TST-C3,Testmaker,DFN-8x8,,active,0,0,plain,gan-hemt,,650,5.8,7,-10,0.78,z3,\n", StandardCharsets.UTF_8);
+        List<Row> read = new ArrayList<>();
+        SheetReader.Summary s = SheetReader.read(f, f.toString(), null, new SheetReader.Sink() {
+            @Override
+            public void accept(Row row) {
+                read.add(row);
+            }
+        });
+        assertTrue(s.clean(), s.problems().toString());
+        run(UPSERT, quiet(), f);
+        try (Catalog c = Catalog.open(dir)) {
+            List<Row> found = PartSearch.find(c, Kind.SWITCH, List.of(), List.of(), null, 10);
+            assertEquals(read.size(), found.size());
+            for (Row expected : read) {
+                Row got = c.get(Kind.SWITCH, expected.key()).orElseThrow();
+                Row searched = found.stream().filter(r -> r.key().equals(expected.key())).findFirst().orElseThrow();
+                for (Row r : List.of(got, searched)) {
+                    assertEquals(expected, r, "values (with their types), extras, file and line");
+                    assertEquals(List.copyOf(expected.values().keySet()), List.copyOf(r.values().keySet()), "schema order");
+                    assertEquals(List.copyOf(expected.extras().keySet()), List.copyOf(r.extras().keySet()), "extras in file order");
+                }
+            }
+            assertEquals(List.of("TST-A1", "TST-C3", "tst-b2"), found.stream().map(Row::key).toList(),
+                    "sorted by part number as written, in UTF-8 byte order");
+        }
+    }
+
+    @Test
+    void aCatalogInAnotherIndexFormatIsRefusedWithWhatToDo() throws Exception {
+        Files.createDirectories(dir);
+        try (Directory d = FSDirectory.open(dir);
+             IndexWriter w = new IndexWriter(d, new IndexWriterConfig(new StandardAnalyzer()))) {
+            org.apache.lucene.document.Document doc = new org.apache.lucene.document.Document();
+            doc.add(new org.apache.lucene.document.StringField(Fields.KIND, "switch", org.apache.lucene.document.Field.Store.YES));
+            w.addDocument(doc);
+            w.commit();
+        }
+        long generation;
+        try (Directory d = FSDirectory.open(dir)) {
+            generation = SegmentInfos.readLatestCommit(d).getGeneration();
+        }
+        CatalogFormatException open = assertThrows(CatalogFormatException.class, () -> Catalog.open(dir));
+        CatalogFormatException imp = assertThrows(CatalogFormatException.class,
+                () -> run(UPSERT, quiet(), switches("a.csv", 0, 2, 50)));
+        for (CatalogFormatException e : List.of(open, imp)) {
+            assertTrue(e.getMessage().contains("index format 1; expected " + Fields.FORMAT), e.getMessage());
+            assertTrue(e.getMessage().contains("import the CSV files again into a new catalog directory"), e.getMessage());
+            assertTrue(e.getMessage().contains(dir.toString()), e.getMessage());
+        }
+        try (Directory d = FSDirectory.open(dir)) {
+            assertEquals(generation, SegmentInfos.readLatestCommit(d).getGeneration(), "nothing was written");
         }
     }
 }
