@@ -120,24 +120,6 @@ public final class PairEvaluator {
     /** Marks a ranked rule whose outcome is in {@link Calc#lastVerdict} and {@link Calc#lastScore}. */
     private static final Check QUICK = new Check(Rule.CATALOG, Verdict.UNKNOWN, "", List.of(), 0);
 
-    /** Keeps nothing: the comparisons of checks that are ranked, not shown. */
-    private static final List<Comparison> DISCARD = new java.util.AbstractList<>() {
-        @Override
-        public boolean add(Comparison c) {
-            return false;
-        }
-
-        @Override
-        public Comparison get(int index) {
-            throw new IndexOutOfBoundsException(index);
-        }
-
-        @Override
-        public int size() {
-            return 0;
-        }
-    };
-
     /** The rules a pair is checked against, in the order checks are listed ({@code catalog} belongs to stage checks). */
     private static final Rule[] PAIR_RULES = {Rule.DRIVE_CURRENT, Rule.GATE_VOLTAGE, Rule.NEGATIVE_BIAS, Rule.UVLO,
         Rule.LOGIC_LEVEL, Rule.POLARITY, Rule.HIGH_SIDE, Rule.BOOTSTRAP, Rule.DRIVER_POWER, Rule.DV_DT, Rule.LIFECYCLE};
@@ -178,7 +160,7 @@ public final class PairEvaluator {
                 case BOOTSTRAP -> bootstrap(c);
                 case DRIVER_POWER -> driverPower(c, m);
                 case DV_DT -> dvdt(c, m);
-                case LIFECYCLE -> lifecycle(c.d, c.s, c.detail);
+                case LIFECYCLE -> c.detail ? lifecycle(c.d, c.s, true) : quickLifecycle(c);
                 case CATALOG -> throw new IllegalStateException("the catalog rule belongs to stage checks, not to a pair");
             };
         } catch (IllegalArgumentException e) {
@@ -278,16 +260,24 @@ public final class PairEvaluator {
                     + " on level cannot be checked against it — look up the absolute gate limit in the datasheet");
         }
         List<Comparison> cmp = c.comparisons();
-        cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", c.d.vSupplyMin(), "V"));
-        cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", c.d.vSupplyMax(), "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", c.d.vSupplyMin(), "V"));
+            cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", c.d.vSupplyMax(), "V"));
+        }
         double limit = s.vGsMax() * (1 - m.gateHeadroom());
-        cmp.add(new Comparison("on level", on, "≤", limit, "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("on level", on, "≤", limit, "V"));
+        }
         double full = fullEnhancement(s);
         if (!Double.isNaN(full)) {
-            cmp.add(new Comparison("on level (full enhancement)", on, "≥", full, "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("on level (full enhancement)", on, "≥", full, "V"));
+            }
         }
         if (!Double.isNaN(s.vThMax())) {
-            cmp.add(new Comparison("on level (above threshold)", on, "≥", s.vThMax(), "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("on level (above threshold)", on, "≥", s.vThMax(), "V"));
+            }
         }
         if (swing > c.d.vSupplyMax()) {
             return !c.detail ? c.quick(Rule.GATE_VOLTAGE, Verdict.FAIL, 0)
@@ -363,13 +353,19 @@ public final class PairEvaluator {
         }
         List<Comparison> cmp = c.comparisons();
         double limit = s.vGsMin() * (1 - m.gateHeadroom());
-        cmp.add(new Comparison("off level", off, "≥", limit, "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("off level", off, "≥", limit, "V"));
+        }
         if (off < 0) {
-            cmp.add(new Comparison("off level (driver's negative rail)", off, "≥",
-                    Double.isNaN(d.vNegMin()) ? 0 : d.vNegMin(), "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("off level (driver's negative rail)", off, "≥",
+                        Double.isNaN(d.vNegMin()) ? 0 : d.vNegMin(), "V"));
+            }
         }
         if (!Double.isNaN(s.vGateOff())) {
-            cmp.add(new Comparison("off level (switch's recommendation)", off, "≤", s.vGateOff(), "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("off level (switch's recommendation)", off, "≤", s.vGateOff(), "V"));
+            }
         }
         if (off < s.vGsMin()) {
             return !c.detail ? c.quick(Rule.NEGATIVE_BIAS, Verdict.FAIL, 0)
@@ -422,7 +418,9 @@ public final class PairEvaluator {
                     + Eng.of(supply, "V") + " and what its outputs do when the supply sags");
         }
         List<Comparison> cmp = c.comparisons();
-        cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + m.uvloHeadroom(), "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + m.uvloHeadroom(), "V"));
+        }
         if (supply < d.uvloOn()) {
             return !c.detail ? c.quick(Rule.UVLO, Verdict.FAIL, 0)
                     : fail(c, Rule.UVLO, () -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
@@ -434,10 +432,14 @@ public final class PairEvaluator {
         double gateAtUvlo = offUvlo + c.op.vDriveNeg();
         double need = Double.isNaN(s.vPlateau()) ? s.vThMax() : Math.max(s.vPlateau(), nz(s.vThMax()));
         if (!Double.isNaN(need)) {
-            cmp.add(new Comparison("on level just before lock-out", gateAtUvlo, "≥", need, "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("on level just before lock-out", gateAtUvlo, "≥", need, "V"));
+            }
         }
         if (!Double.isNaN(full)) {
-            cmp.add(new Comparison("on level just before lock-out (full enhancement)", gateAtUvlo, "≥", full, "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("on level just before lock-out (full enhancement)", gateAtUvlo, "≥", full, "V"));
+            }
         }
         if (!Double.isNaN(need) && gateAtUvlo < need) {
             return !c.detail ? c.quick(Rule.UVLO, Verdict.FAIL, 0)
@@ -482,10 +484,14 @@ public final class PairEvaluator {
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");
         }
         List<Comparison> cmp = c.comparisons();
-        cmp.add(new Comparison("noise margin high (V_OH − V_IH)", c.nmHigh, "≥", m.logicNoise(), "V"));
-        cmp.add(new Comparison("noise margin low (V_IL − V_OL)", c.nmLow, "≥", m.logicNoise(), "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("noise margin high (V_OH − V_IH)", c.nmHigh, "≥", m.logicNoise(), "V"));
+            cmp.add(new Comparison("noise margin low (V_IL − V_OL)", c.nmLow, "≥", m.logicNoise(), "V"));
+        }
         if (!Double.isNaN(d.vInMax())) {
-            cmp.add(new Comparison("controller output high", op.vOhMax(), "≤", d.vInMax(), "V"));
+            if (c.detail) {
+                cmp.add(new Comparison("controller output high", op.vOhMax(), "≤", d.vInMax(), "V"));
+            }
         }
         if (!Double.isNaN(d.vInMax()) && op.vOhMax() > d.vInMax()) {
             return !c.detail ? c.quick(Rule.LOGIC_LEVEL, Verdict.FAIL, 0)
@@ -652,7 +658,9 @@ public final class PairEvaluator {
                     : unknown(c, Rule.BOOTSTRAP, () -> "cannot size the bootstrap capacitor: gate charge or UVLO unknown");
         }
         List<Comparison> cmp = c.comparisons();
-        cmp.add(new Comparison("allowed droop (V_drive − V_F − UVLO,off)", c.bootDroop, "≥", 0, "V"));
+        if (c.detail) {
+            cmp.add(new Comparison("allowed droop (V_drive − V_F − UVLO,off)", c.bootDroop, "≥", 0, "V"));
+        }
         if (c.bootDroop <= 0) {
             return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
                     : fail(c, Rule.BOOTSTRAP, () -> "the bootstrap supply " + Eng.of(op.vDrive() - op.diodeDrop(), "V") + " (V_drive − V_F)"
@@ -665,7 +673,9 @@ public final class PairEvaluator {
                 + " assumed)" : "")) : "";
         String diode = c.detail ? (Boolean.FALSE.equals(d.bootstrapDiode()) ? ", with an external fast diode rated ≥ "
                 + Eng.of(Double.isNaN(op.bus()) ? Double.NaN : op.bus() * 1.2, "V") : "") : "";
-        cmp.add(new Comparison("duty cycle", op.dutyMax(), "≤", c.bootDutyMax, "1"));
+        if (c.detail) {
+            cmp.add(new Comparison("duty cycle", op.dutyMax(), "≤", c.bootDutyMax, "1"));
+        }
         if (!Double.isNaN(op.dutyMax()) && op.dutyMax() >= 1) {
             return !c.detail ? c.quick(Rule.BOOTSTRAP, Verdict.FAIL, 0)
                     : fail(c, Rule.BOOTSTRAP, () -> "100 % duty is impossible with a bootstrap supply (it recharges only while the low"
@@ -782,10 +792,7 @@ public final class PairEvaluator {
     static Check lifecycle(DriverPart d, SwitchPart s, boolean detail) {
         if (!detail) {
             Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
-            boolean noted = !d.lifecycle().equals("active") || !s.lifecycle().equals("active") || d.stock() == 0
-                    || s.stock() == 0;
-            return new Check(Rule.LIFECYCLE, v, "", List.of(),
-                    !noted ? 1 : v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4);
+            return new Check(Rule.LIFECYCLE, v, "", List.of(), lifecycleScore(d, s, v));
         }
         Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
         List<String> notes = new ArrayList<>();
@@ -814,6 +821,19 @@ public final class PairEvaluator {
                 : " — check availability or plan a second source";
         return new Check(Rule.LIFECYCLE, v, String.join("; ", notes) + fix, List.of(),
                 v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4);
+    }
+
+    /** The lifecycle rule while ranking: verdict and sub-score only. */
+    private static Check quickLifecycle(Calc c) {
+        Verdict v = lifecycleVerdict(c.d.lifecycle(), c.d.stock()).and(lifecycleVerdict(c.s.lifecycle(), c.s.stock()));
+        return c.quick(Rule.LIFECYCLE, v, lifecycleScore(c.d, c.s, v));
+    }
+
+    /** Sub-score of the lifecycle rule: 1 with nothing to note, else by the verdict (the worded check's table). */
+    private static double lifecycleScore(DriverPart d, SwitchPart s, Verdict v) {
+        boolean noted = !d.lifecycle().equals("active") || !s.lifecycle().equals("active") || d.stock() == 0
+                || s.stock() == 0;
+        return !noted ? 1 : v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4;
     }
 
     /** Verdict of one part's lifecycle and stock (the same table as the sentences of {@link #lifecycle}). */
@@ -963,9 +983,9 @@ public final class PairEvaluator {
             return QUICK;
         }
 
-        /** A list for a check's comparisons; while ranking, one that keeps nothing. */
+        /** A list for a check's comparisons (filled only when {@link #detail}); while ranking, an empty one. */
         List<Comparison> comparisons() {
-            return detail ? new ArrayList<>() : DISCARD;
+            return detail ? new ArrayList<>() : List.of();
         }
         DriverPart d;
         final Prepared p;

@@ -228,10 +228,26 @@ public final class Shortlist {
         private final List<String> prefilterUsed;
         private final int skipped;
         private final java.util.PriorityQueue<Ranked> best;
-        private final PairEvaluator.Ranking ranking;
+        /**
+         * What a partition writes for every driver, allocated by the thread that ranks (on first
+         * use): rankers of one scan are made together on one thread, and state written per driver
+         * in neighbouring objects would share cache lines between the cores.
+         */
+        private Tally tally;
         private int pass;
         private int warn;
         private int fail;
+
+        private static final class Tally {
+            final PairEvaluator.Ranking ranking;
+            int pass;
+            int warn;
+            int fail;
+
+            Tally(PairEvaluator.Prepared p) {
+                ranking = new PairEvaluator.Ranking(p);
+            }
+        }
 
         public Ranker(SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all, List<String> prefilterUsed) {
             this(PairEvaluator.prepare(sw, op, m), top, all, prefilterUsed, 0);
@@ -250,12 +266,23 @@ public final class Shortlist {
             this.prefilterUsed = List.copyOf(prefilterUsed);
             this.skipped = skipped;
             this.best = new java.util.PriorityQueue<>(Math.min(top, 1024) + 1, RANKED.reversed());
-            this.ranking = new PairEvaluator.Ranking(prepared);
         }
 
         /** Drivers ranked so far. */
         public int evaluated() {
-            return pass + warn + fail;
+            return passing() + warning() + failing();
+        }
+
+        private int passing() {
+            return pass + (tally == null ? 0 : tally.pass);
+        }
+
+        private int warning() {
+            return warn + (tally == null ? 0 : tally.warn);
+        }
+
+        private int failing() {
+            return fail + (tally == null ? 0 : tally.fail);
         }
 
         /** A ranker for another partition of the same scan. */
@@ -273,13 +300,18 @@ public final class Shortlist {
 
         /** Ranks one driver. */
         public void accept(DriverPart d) {
-            ranking.rank(d);
-            Verdict qv = ranking.verdict();
-            double qs = ranking.score();
+            Tally t = tally;
+            if (t == null) {
+                t = new Tally(prepared);
+                tally = t;
+            }
+            t.ranking.rank(d);
+            Verdict qv = t.ranking.verdict();
+            double qs = t.ranking.score();
             switch (qv) {
-                case PASS -> pass++;
-                case WARN, UNKNOWN -> warn++;
-                case FAIL -> fail++;
+                case PASS -> t.pass++;
+                case WARN, UNKNOWN -> t.warn++;
+                case FAIL -> t.fail++;
             }
             if (!all && qv == Verdict.FAIL) {
                 return;
@@ -303,9 +335,9 @@ public final class Shortlist {
             Ranker first = parts.get(0);
             Ranker all = new Ranker(first.prepared, first.top, first.all, first.prefilterUsed, skipped);
             for (Ranker r : parts) {
-                all.pass += r.pass;
-                all.warn += r.warn;
-                all.fail += r.fail;
+                all.pass += r.passing();
+                all.warn += r.warning();
+                all.fail += r.failing();
                 for (Ranked x : r.best) {
                     if (all.best.size() < all.top) {
                         all.best.add(x);
@@ -325,8 +357,8 @@ public final class Shortlist {
                 out.add(PairEvaluator.evaluate(x.driver(), prepared).withPrice(x.driver().price()));
             }
             out.sort(RANKING);
-            return new Result(prepared.switchPart(), prepared.point(), prepared.margins(), out, pass + warn + fail, pass,
-                    warn, fail, skipped, prefilterUsed);
+            return new Result(prepared.switchPart(), prepared.point(), prepared.margins(), out, evaluated(), passing(),
+                    warning(), failing(), skipped, prefilterUsed);
         }
     }
 }
