@@ -32,8 +32,8 @@ import org.gatefit.catalog.Schema;
 
 /**
  * Maps catalog rows to Lucene documents and back (see {@link Fields} for the field types). A row
- * is read back from its doc values plus the one stored {@link Fields#SOURCE} record, so every
- * value is written once for reading, not once more as a stored field per column.
+ * is read back from the one stored {@link Fields#SOURCE} record that holds all its values (one
+ * stored field per part, not one per column); scans read the doc values instead.
  */
 final class Documents {
     /** A one-dimensional point and a numeric doc value in one field (as Lucene's own {@code LongField}). */
@@ -43,7 +43,7 @@ final class Documents {
     /** {@code _all}: analyzed like {@link TextField}, without positions (only term and prefix queries read it). */
     private static final FieldType WORDS = new FieldType(TextField.TYPE_NOT_STORED);
     /** Version of {@link Fields#SOURCE}'s layout. */
-    private static final byte SOURCE_VERSION = 1;
+    private static final byte SOURCE_VERSION = 2;
 
     static {
         POINT_AND_NUMERIC.setDimensions(1, Long.BYTES);
@@ -95,7 +95,6 @@ final class Documents {
         StringBuilder all = new StringBuilder(128);
         Schema schema = Schema.of(row.kind());
         List<Column> columns = schema.columns();
-        List<Column> wordsOnly = null;
         // The values are in schema order (Row's contract), so the columns are found by walking
         // along the schema, not by a map lookup per column.
         int at = 0;
@@ -123,10 +122,7 @@ final class Documents {
                 case TEXT, CHOICE -> {
                     String s = (String) v;
                     if (c.wordsOnly()) {
-                        if (wordsOnly == null) {
-                            wordsOnly = new ArrayList<>(2);
-                        }
-                        wordsOnly.add(c);
+                        // In the stored record and _all only: searched by its words, never compared.
                     } else if (n.equals(PartNumberQuery.FIELD)) {
                         // No keyword term: unique per part, costly to write; PartNumberQuery matches it exactly.
                         d.add(new SortedDocValuesField(n, new BytesRef(s)));
@@ -145,13 +141,17 @@ final class Documents {
                 }
             }
         }
-        d.add(new StoredField(Fields.SOURCE, source(row, wordsOnly)));
+        d.add(new StoredField(Fields.SOURCE, source(row)));
         d.add(new Field(Fields.ALL, all.toString(), WORDS));
         return d;
     }
 
-    /** The stored record: kind, file, line, words-only texts and extra columns (everything not in doc values). */
-    private static byte[] source(Row row, List<Column> wordsOnly) {
+    /**
+     * The stored record: kind, file, line, every value (column position and value, in schema
+     * order) and the extra columns. Reading a part by its number then takes one stored-record
+     * read, not a doc-value iterator per column (which costs far more for a single document).
+     */
+    private static byte[] source(Row row) {
         ByteBuffersDataOutput out = SCRATCH.get();
         out.reset();
         try {
@@ -159,12 +159,21 @@ final class Documents {
             out.writeString(row.kind().id());
             out.writeString(row.file() == null ? "" : row.file());
             out.writeVLong(row.line());
-            out.writeVInt(wordsOnly == null ? 0 : wordsOnly.size());
-            if (wordsOnly != null) {
-                for (Column c : wordsOnly) {
-                    out.writeString(c.name());
-                    out.writeString((String) row.values().get(c.name()));
+            List<Column> columns = Schema.of(row.kind()).columns();
+            out.writeVInt(row.values().size());
+            int at = 0;
+            for (Map.Entry<String, Object> e : row.values().entrySet()) {
+                while (!columns.get(at).name().equals(e.getKey())) {
+                    at++; // values are in schema order (checked by toDocument)
                 }
+                Column c = columns.get(at);
+                out.writeVInt(at);
+                switch (c.type()) {
+                    case NUMBER -> out.writeLong(Double.doubleToRawLongBits((Double) e.getValue()));
+                    case INTEGER -> out.writeZLong((Long) e.getValue());
+                    case TEXT, CHOICE -> out.writeString((String) e.getValue());
+                }
+                at++;
             }
             out.writeVInt(row.extras().size());
             for (Map.Entry<String, String> e : row.extras().entrySet()) {
@@ -177,27 +186,16 @@ final class Documents {
         return out.toArrayCopy();
     }
 
-    /**
-     * Reads rows of one segment back from doc values and the stored record. Ask for documents in
-     * increasing order (doc-value iterators only go forward; going back re-opens them).
-     */
+    /** Reads rows of one segment back from their stored records, in any order. */
     static final class LeafRows {
         private static final Set<String> SOURCE_ONLY = Set.of(Fields.SOURCE);
         private final LeafReader reader;
-        private final Map<String, NumericDocValues> numeric = new java.util.HashMap<>();
-        private final Map<String, SortedDocValues> sorted = new java.util.HashMap<>();
-        private int last = -1;
 
         LeafRows(LeafReader reader) {
             this.reader = reader;
         }
 
         Row row(int doc) throws IOException {
-            if (doc <= last) {
-                numeric.clear();
-                sorted.clear();
-            }
-            last = doc;
             Document stored = reader.storedFields().document(doc, SOURCE_ONLY);
             IndexableField f = stored.getField(Fields.SOURCE);
             if (f == null) {
@@ -213,62 +211,23 @@ final class Documents {
             Kind kind = Kind.fromId(in.readString());
             String file = in.readString();
             long line = in.readVLong();
-            int nWords = in.readVInt();
-            Map<String, String> words = nWords == 0 ? Map.of() : new java.util.HashMap<>();
-            for (int i = 0; i < nWords; i++) {
-                words.put(in.readString(), in.readString());
+            List<Column> cols = Schema.of(kind).columns();
+            int n = in.readVInt();
+            LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2);
+            for (int i = 0; i < n; i++) {
+                Column c = cols.get(in.readVInt());
+                values.put(c.name(), switch (c.type()) {
+                    case NUMBER -> (Object) Double.longBitsToDouble(in.readLong());
+                    case INTEGER -> (Object) in.readZLong();
+                    case TEXT, CHOICE -> in.readString();
+                });
             }
             int nExtras = in.readVInt();
             Map<String, String> extras = new LinkedHashMap<>();
             for (int i = 0; i < nExtras; i++) {
                 extras.put(in.readString(), in.readString());
             }
-            List<Column> cols = Schema.of(kind).columns();
-            LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2);
-            for (Column c : cols) {
-                String n = c.name();
-                switch (c.type()) {
-                    case NUMBER, INTEGER -> {
-                        NumericDocValues dv = numeric(n);
-                        if (dv != null && dv.advanceExact(doc)) {
-                            long raw = dv.longValue();
-                            values.put(n, c.type() == ColumnType.NUMBER ? (Object) Double.longBitsToDouble(raw) : (Object) raw);
-                        }
-                    }
-                    case TEXT, CHOICE -> {
-                        if (c.wordsOnly()) {
-                            String s = words.get(n);
-                            if (s != null) {
-                                values.put(n, s);
-                            }
-                        } else {
-                            SortedDocValues dv = sorted(n);
-                            if (dv != null && dv.advanceExact(doc)) {
-                                values.put(n, dv.lookupOrd(dv.ordValue()).utf8ToString());
-                            }
-                        }
-                    }
-                }
-            }
             return new Row(kind, (String) values.get("part_number"), file, line, Row.owned(values), extras);
-        }
-
-        private NumericDocValues numeric(String field) throws IOException {
-            NumericDocValues dv = numeric.get(field);
-            if (dv == null && !numeric.containsKey(field)) {
-                dv = reader.getNumericDocValues(field);
-                numeric.put(field, dv);
-            }
-            return dv;
-        }
-
-        private SortedDocValues sorted(String field) throws IOException {
-            SortedDocValues dv = sorted.get(field);
-            if (dv == null && !sorted.containsKey(field)) {
-                dv = reader.getSortedDocValues(field);
-                sorted.put(field, dv);
-            }
-            return dv;
         }
     }
 }

@@ -37,8 +37,9 @@ public final class Fields {
      */
     public static final String ALL = "_all";
     /**
-     * Stored, one binary value per part: kind, source file and line, words-only texts and extra
-     * columns in their order (layout in {@code Documents}); the rest of a row comes from doc values.
+     * Stored, one binary value per part: kind, source file and line, every value of the row and
+     * the extra columns in their order (layout in {@code Documents}), so a part is read back with
+     * one stored-record load; scans read the same values from doc values.
      */
     public static final String SOURCE = "_src";
     /** Stored: file of an import record. */
@@ -57,7 +58,7 @@ public final class Fields {
      * Layout of the index this version writes and reads; a catalog of another layout is refused
      * with an instruction to import again (there is no conversion).
      */
-    public static final String FORMAT = "2";
+    public static final String FORMAT = "3";
 
     private Fields() {
     }
