@@ -20,9 +20,20 @@ public enum ESeries {
     private static final double EPS = 1e-9;
 
     private final int[] mantissas;
+    /** Every series value from 10^{@value #E_MIN} up, ascending, as {@link #scaled} gives them. */
+    private final double[] table;
+    private static final int E_MIN = -18;
+    private static final int E_MAX = 15;
 
     ESeries(int... mantissas) {
         this.mantissas = mantissas;
+        this.table = new double[(E_MAX - E_MIN + 1) * mantissas.length];
+        int i = 0;
+        for (int e = E_MIN; e <= E_MAX; e++) {
+            for (int m : mantissas) {
+                table[i++] = scaled(m, e);
+            }
+        }
     }
 
     /** The two-digit values of one decade (10 … 91), in order. */
@@ -37,8 +48,23 @@ public enum ESeries {
         return Math.log(up / value) <= Math.log(value / down) ? up : down;
     }
 
-    /** Round up to the smallest series value ≥ {@code value} (for a minimum capacitance). */
+    /**
+     * Round up to the smallest series value ≥ {@code value} (for a minimum capacitance): a binary
+     * search of the table (ranking rounds per candidate), the decade walk outside it; both give
+     * the same value (ESeriesTest).
+     */
     public double roundUp(double value) {
+        Require.positive("value to round", "", value);
+        double t = value * (1 - EPS);
+        if (t > table[0] && t <= table[table.length - 1]) {
+            int i = java.util.Arrays.binarySearch(table, t);
+            return table[i >= 0 ? i : -i - 1];
+        }
+        return roundUpByDecades(value);
+    }
+
+    /** {@link #roundUp} by walking the decades around the value. */
+    double roundUpByDecades(double value) {
         Require.positive("value to round", "", value);
         int decade = (int) Math.floor(Math.log10(value));
         for (int d = decade - 1; d <= decade + 1; d++) {
@@ -52,8 +78,19 @@ public enum ESeries {
         throw new AssertionError("no series value above " + value);
     }
 
-    /** Round down to the largest series value ≤ {@code value} (for a maximum resistance). */
+    /** Round down to the largest series value ≤ {@code value} (for a maximum resistance); as {@link #roundUp}. */
     public double roundDown(double value) {
+        Require.positive("value to round", "", value);
+        double t = value * (1 + EPS);
+        if (t >= table[0] && t < table[table.length - 1]) {
+            int i = java.util.Arrays.binarySearch(table, t);
+            return table[i >= 0 ? i : -i - 2];
+        }
+        return roundDownByDecades(value);
+    }
+
+    /** {@link #roundDown} by walking the decades around the value. */
+    double roundDownByDecades(double value) {
         Require.positive("value to round", "", value);
         int decade = (int) Math.floor(Math.log10(value));
         for (int d = decade + 1; d >= decade - 1; d--) {
@@ -76,16 +113,21 @@ public enum ESeries {
     /** m·10^e, computed so that exact decimal values round once (10^e is exact for |e| ≤ 22). */
     private static double scaled(int m, int e) {
         int k = Math.abs(e);
-        double p = k < POW10.length ? POW10[k] : Math.pow(10, k);
+        double p = k < Pow10.TABLE.length ? Pow10.TABLE[k] : Math.pow(10, k);
         return e >= 0 ? m * p : m / p;
     }
 
-    /** Math.pow(10, k) for k = 0 … 308, computed once (rounding runs per candidate while ranking). */
-    private static final double[] POW10 = new double[309];
+    /**
+     * Math.pow(10, k) for k = 0 … 308, computed once (rounding runs per candidate while ranking);
+     * a holder class, because the constants' constructors run before the enum's own statics.
+     */
+    private static final class Pow10 {
+        static final double[] TABLE = new double[309];
 
-    static {
-        for (int k = 0; k < POW10.length; k++) {
-            POW10[k] = Math.pow(10, k);
+        static {
+            for (int k = 0; k < TABLE.length; k++) {
+                TABLE[k] = Math.pow(10, k);
+            }
         }
     }
 }

@@ -42,6 +42,28 @@ class ESeriesTest {
     }
 
     @Test
+    void theTableSearchGivesWhatTheDecadeWalkGives() {
+        // Rounding searches a precomputed table; the decade walk it replaced is the reference.
+        java.util.Random r = new java.util.Random(60063);
+        for (ESeries s : ESeries.values()) {
+            for (int i = 0; i < 200_000; i++) {
+                double v = Math.pow(10, -20 + 40 * r.nextDouble());
+                assertEquals(s.roundUpByDecades(v), s.roundUp(v), 0.0, s + " up " + v);
+                assertEquals(s.roundDownByDecades(v), s.roundDown(v), 0.0, s + " down " + v);
+            }
+            for (int e = -17; e <= 15; e++) {
+                for (int m : s.decade()) {
+                    double v = m * Math.pow(10, e - 1); // on a series value, and just either side of it
+                    for (double x : new double[] {v, Math.nextUp(v), Math.nextDown(v), v * (1 + 1e-9), v * (1 - 1e-9)}) {
+                        assertEquals(s.roundUpByDecades(x), s.roundUp(x), 0.0, s + " up " + x);
+                        assertEquals(s.roundDownByDecades(x), s.roundDown(x), 0.0, s + " down " + x);
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void containsOnlySeriesValues() {
         assertTrue(ESeries.E12.contains(68e-9));
         assertFalse(ESeries.E12.contains(75e-9));
