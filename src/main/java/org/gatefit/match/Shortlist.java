@@ -249,10 +249,6 @@ public final class Shortlist {
             }
         }
 
-        public Ranker(SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all, List<String> prefilterUsed) {
-            this(PairEvaluator.prepare(sw, op, m), top, all, prefilterUsed, 0);
-        }
-
         /**
          * @param skipped drivers the catalog skipped by the prefilter (each certain to fail), for the counts
          */
