@@ -77,20 +77,13 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         int drivers = c.count(Kind.DRIVER);
         Shortlist.Prefilter pre = all || drivers < Shortlist.PREFILTER_FROM ? Shortlist.Prefilter.NONE
                 : Shortlist.prefilter(p);
-        Shortlist.Ranker first = new Shortlist.Ranker(p, top, all, pre.describe(), 0);
-        boolean[] used = {false};
-        List<Shortlist.Ranker> parts = c.scanColumns(Kind.DRIVER, PairSupport.filter(c, pre), threads, () -> {
-            if (!used[0]) {
-                used[0] = true;
-                return first;
-            }
-            return first.sibling();
-        });
+        Shortlist.Ranker template = new Shortlist.Ranker(p, top, all, pre.describe(), 0);
+        List<Shortlist.Ranker> parts = c.scanColumns(Kind.DRIVER, PairSupport.filter(c, pre), threads, template::sibling);
         int scanned = 0;
         for (Shortlist.Ranker r : parts) {
             scanned += r.evaluated();
         }
-        int skipped = pre.require().isEmpty() && pre.exclude().isEmpty() ? 0 : drivers - scanned;
-        return Shortlist.Ranker.merge(parts.isEmpty() ? List.of(first) : parts, skipped).result();
+        // Without a prefilter every live driver is scanned, so this is 0.
+        return Shortlist.Ranker.merge(parts.isEmpty() ? List.of(template) : parts, drivers - scanned).result();
     }
 }

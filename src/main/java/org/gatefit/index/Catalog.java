@@ -183,7 +183,7 @@ public final class Catalog implements AutoCloseable {
             Bits live = leaf.reader().getLiveDocs();
             for (int doc = pe.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = pe.nextDoc()) {
                 if (live == null || live.get(doc)) {
-                    return Optional.of(new Documents.LeafRows(leaf.reader()).row(doc));
+                    return Optional.of(Documents.row(leaf.reader(), doc));
                 }
             }
         }
@@ -208,28 +208,14 @@ public final class Catalog implements AutoCloseable {
         }
         int n = Math.max(1, Math.min(limit, Math.max(1, reader.maxDoc())));
         TopDocs td = sort == null ? searcher.search(query, n) : searcher.search(query, n, sort);
-        // Rows are read from doc values, whose iterators only go forward: read the hits in index
-        // order, one segment after the other, and put each row back at its rank.
-        ScoreDoc[] hits = td.scoreDocs;
-        Integer[] byDoc = new Integer[hits.length];
-        for (int i = 0; i < hits.length; i++) {
-            byDoc[i] = i;
-        }
-        java.util.Arrays.sort(byDoc, Comparator.comparingInt(i -> hits[i].doc));
-        Row[] rows = new Row[hits.length];
+        // Each row comes from its stored record, so the hits are read in rank order.
         List<LeafReaderContext> leaves = reader.leaves();
-        Documents.LeafRows leafRows = null;
-        int leafIndex = -1;
-        for (int i : byDoc) {
-            int doc = hits[i].doc;
-            int li = ReaderUtil.subIndex(doc, leaves);
-            if (li != leafIndex) {
-                leafIndex = li;
-                leafRows = new Documents.LeafRows(leaves.get(li).reader());
-            }
-            rows[i] = leafRows.row(doc - leaves.get(li).docBase);
+        List<Row> rows = new ArrayList<>(td.scoreDocs.length);
+        for (ScoreDoc hit : td.scoreDocs) {
+            LeafReaderContext leaf = leaves.get(ReaderUtil.subIndex(hit.doc, leaves));
+            rows.add(Documents.row(leaf.reader(), hit.doc - leaf.docBase));
         }
-        return new ArrayList<>(java.util.Arrays.asList(rows));
+        return rows;
     }
 
     /**

@@ -1,7 +1,6 @@
 package org.gatefit.index;
 
 import java.io.IOException;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -18,8 +17,6 @@ import org.apache.lucene.index.DocValuesType;
 import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.index.IndexableField;
 import org.apache.lucene.index.LeafReader;
-import org.apache.lucene.index.NumericDocValues;
-import org.apache.lucene.index.SortedDocValues;
 import org.apache.lucene.store.ByteArrayDataInput;
 import org.apache.lucene.store.ByteBuffersDataOutput;
 import org.apache.lucene.util.BytesRef;
@@ -186,48 +183,41 @@ final class Documents {
         return out.toArrayCopy();
     }
 
-    /** Reads rows of one segment back from their stored records, in any order. */
-    static final class LeafRows {
-        private static final Set<String> SOURCE_ONLY = Set.of(Fields.SOURCE);
-        private final LeafReader reader;
+    private static final Set<String> SOURCE_ONLY = Set.of(Fields.SOURCE);
 
-        LeafRows(LeafReader reader) {
-            this.reader = reader;
+    /** A part of a segment read back from its stored record. */
+    static Row row(LeafReader reader, int doc) throws IOException {
+        Document stored = reader.storedFields().document(doc, SOURCE_ONLY);
+        IndexableField f = stored.getField(Fields.SOURCE);
+        if (f == null) {
+            throw new IOException("document " + doc + " has no " + Fields.SOURCE + " record (expected a part written by"
+                    + " gatefit's importer)");
         }
-
-        Row row(int doc) throws IOException {
-            Document stored = reader.storedFields().document(doc, SOURCE_ONLY);
-            IndexableField f = stored.getField(Fields.SOURCE);
-            if (f == null) {
-                throw new IOException("document " + doc + " has no " + Fields.SOURCE + " record (expected a part written by"
-                        + " gatefit's importer)");
-            }
-            BytesRef b = f.binaryValue();
-            ByteArrayDataInput in = new ByteArrayDataInput(b.bytes, b.offset, b.length);
-            byte version = in.readByte();
-            if (version != SOURCE_VERSION) {
-                throw new IOException("document " + doc + ": stored record version " + version + " (expected " + SOURCE_VERSION + ")");
-            }
-            Kind kind = Kind.fromId(in.readString());
-            String file = in.readString();
-            long line = in.readVLong();
-            List<Column> cols = Schema.of(kind).columns();
-            int n = in.readVInt();
-            LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2);
-            for (int i = 0; i < n; i++) {
-                Column c = cols.get(in.readVInt());
-                values.put(c.name(), switch (c.type()) {
-                    case NUMBER -> (Object) Double.longBitsToDouble(in.readLong());
-                    case INTEGER -> (Object) in.readZLong();
-                    case TEXT, CHOICE -> in.readString();
-                });
-            }
-            int nExtras = in.readVInt();
-            Map<String, String> extras = new LinkedHashMap<>();
-            for (int i = 0; i < nExtras; i++) {
-                extras.put(in.readString(), in.readString());
-            }
-            return new Row(kind, (String) values.get("part_number"), file, line, Row.owned(values), extras);
+        BytesRef b = f.binaryValue();
+        ByteArrayDataInput in = new ByteArrayDataInput(b.bytes, b.offset, b.length);
+        byte version = in.readByte();
+        if (version != SOURCE_VERSION) {
+            throw new IOException("document " + doc + ": stored record version " + version + " (expected " + SOURCE_VERSION + ")");
         }
+        Kind kind = Kind.fromId(in.readString());
+        String file = in.readString();
+        long line = in.readVLong();
+        List<Column> cols = Schema.of(kind).columns();
+        int n = in.readVInt();
+        LinkedHashMap<String, Object> values = new LinkedHashMap<>(cols.size() * 2);
+        for (int i = 0; i < n; i++) {
+            Column c = cols.get(in.readVInt());
+            values.put(c.name(), switch (c.type()) {
+                case NUMBER -> (Object) Double.longBitsToDouble(in.readLong());
+                case INTEGER -> (Object) in.readZLong();
+                case TEXT, CHOICE -> in.readString();
+            });
+        }
+        int nExtras = in.readVInt();
+        Map<String, String> extras = new LinkedHashMap<>();
+        for (int i = 0; i < nExtras; i++) {
+            extras.put(in.readString(), in.readString());
+        }
+        return new Row(kind, (String) values.get("part_number"), file, line, Row.owned(values), extras);
     }
 }

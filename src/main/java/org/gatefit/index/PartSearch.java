@@ -133,15 +133,7 @@ public final class PartSearch {
 
     /** A filter of {@code --where} conditions (all must hold) for {@link Catalog#scan}; null when there are none. */
     public static Query filter(Kind kind, List<Condition> where) throws BadValueException {
-        if (where.isEmpty()) {
-            return null;
-        }
-        BooleanQuery.Builder q = new BooleanQuery.Builder();
-        for (Condition c : where) {
-            addCondition(q, column(kind, c.column()), c);
-        }
-        q.add(new MatchAllDocsQuery(), Occur.MUST);
-        return q.build();
+        return filter(kind, where, List.of());
     }
 
     /**

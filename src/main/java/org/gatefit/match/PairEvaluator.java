@@ -55,17 +55,6 @@ public final class PairEvaluator {
     }
 
     /**
-     * The pair's verdict and score and nothing else (no check objects kept, no sentences, no
-     * figures): what ranking a large catalog needs for every candidate. Identical to the verdict
-     * and score of {@link #evaluate} (the rules run the same code; a property test holds them equal).
-     */
-    public static Quick quick(DriverPart d, Prepared p) {
-        Ranking r = new Ranking(p);
-        r.rank(d);
-        return new Quick(r.verdict(), r.score());
-    }
-
-    /**
      * Verdicts and scores for one question, driver after driver, with one calculation reused (a
      * ranker keeps one per thread, so ranking allocates next to nothing per driver). Not thread-safe.
      */
@@ -111,10 +100,6 @@ public final class PairEvaluator {
         public double score() {
             return score;
         }
-    }
-
-    /** Verdict and score of a pair (see {@link #quick}). */
-    public record Quick(Verdict verdict, double score) {
     }
 
     /** Marks a ranked rule whose outcome is in {@link Calc#lastVerdict} and {@link Calc#lastScore}. */

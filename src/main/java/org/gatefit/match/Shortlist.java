@@ -312,14 +312,22 @@ public final class Shortlist {
             if (!all && qv == Verdict.FAIL) {
                 return;
             }
-            if (best.size() < top) {
-                best.add(new Ranked(d, qv, qs));
-            } else {
+            if (best.size() == top) {
                 Ranked worst = best.peek();
-                if (compare(qv, qs, d, worst.verdict(), worst.score(), worst.driver()) < 0) {
-                    best.poll();
-                    best.add(new Ranked(d, qv, qs));
+                if (compare(qv, qs, d, worst.verdict(), worst.score(), worst.driver()) >= 0) {
+                    return; // decided before allocating: most drivers end here once the heap is full
                 }
+            }
+            keep(new Ranked(d, qv, qs));
+        }
+
+        /** Adds to the best {@code top}, dropping the worst when full. */
+        private void keep(Ranked x) {
+            if (best.size() < top) {
+                best.add(x);
+            } else if (RANKED.compare(x, best.peek()) < 0) {
+                best.poll();
+                best.add(x);
             }
         }
 
@@ -334,14 +342,7 @@ public final class Shortlist {
                 all.pass += r.passing();
                 all.warn += r.warning();
                 all.fail += r.failing();
-                for (Ranked x : r.best) {
-                    if (all.best.size() < all.top) {
-                        all.best.add(x);
-                    } else if (RANKED.compare(x, all.best.peek()) < 0) {
-                        all.best.poll();
-                        all.best.add(x);
-                    }
-                }
+                r.best.forEach(all::keep);
             }
             return all;
         }

@@ -125,7 +125,8 @@ class RulesProperties {
         PairResult quick = PairEvaluator.rank(d, s, op, Margins.DEFAULT);
         assertEquals(full.verdict(), quick.verdict());
         assertEquals(full.score(), quick.score(), 0.0);
-        PairEvaluator.Quick bare = PairEvaluator.quick(d, PairEvaluator.prepare(s, op, Margins.DEFAULT));
+        PairEvaluator.Ranking bare = new PairEvaluator.Ranking(PairEvaluator.prepare(s, op, Margins.DEFAULT));
+        bare.rank(d);
         assertEquals(full.verdict(), bare.verdict(), "verdict without check objects");
         assertEquals(full.score(), bare.score(), 0.0, "score without check objects");
         for (int i = 0; i < full.checks().size(); i++) {
