@@ -148,7 +148,7 @@ final class Documents {
      * order) and the extra columns. Reading a part by its number then takes one stored-record
      * read, not a doc-value iterator per column (which costs far more for a single document).
      */
-    private static byte[] source(Row row) {
+    static byte[] source(Row row) {
         ByteBuffersDataOutput out = SCRATCH.get();
         out.reset();
         try {
