@@ -293,7 +293,7 @@ public final class Catalog implements AutoCloseable {
             b.add(filter, BooleanClause.Occur.FILTER);
         }
         Weight w = searcher.createWeight(searcher.rewrite(b.build()), ScoreMode.COMPLETE_NO_SCORES, 1f);
-        List<List<int[]>> parts = partitions(Math.max(1, parallelism), minPartition);
+        List<List<int[]>> parts = partitions(kind, Math.max(1, parallelism), minPartition);
         List<S> out = new ArrayList<>(parts.size());
         for (int i = 0; i < parts.size(); i++) {
             out.add(sinks.get());
@@ -337,15 +337,46 @@ public final class Catalog implements AutoCloseable {
         return out;
     }
 
+    /** Partitions computed for this catalog's reader, by kind, parallelism and minimum size. */
+    private final java.util.concurrent.ConcurrentHashMap<String, List<List<int[]>>> partitionCache =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
     /**
-     * At most {@code parallelism} partitions of about equal document counts, each a list of
-     * {leaf ordinal, first doc, end doc} pieces in document order.
+     * At most {@code parallelism} partitions holding about equal numbers of the kind's live parts
+     * (deleted documents and other kinds do not count: an import that replaced the first half of a
+     * segment leaves it half dead), each a list of {leaf ordinal, first doc, end doc} pieces in
+     * document order.
      */
-    private List<List<int[]>> partitions(int parallelism, int minPartition) {
+    private List<List<int[]>> partitions(Kind kind, int parallelism, int minPartition) throws IOException {
+        String key = kind.id() + "/" + parallelism + "/" + minPartition;
+        List<List<int[]>> cached = partitionCache.get(key);
+        if (cached == null) {
+            cached = computePartitions(kind, parallelism, minPartition);
+            partitionCache.putIfAbsent(key, cached);
+        }
+        return cached;
+    }
+
+    private List<List<int[]>> computePartitions(Kind kind, int parallelism, int minPartition) throws IOException {
         List<LeafReaderContext> leaves = reader.leaves();
+        Term t = new Term(Fields.KIND, kind.id());
+        long[] live = new long[leaves.size()];
         long total = 0;
-        for (LeafReaderContext l : leaves) {
-            total += l.reader().maxDoc();
+        for (int li = 0; li < leaves.size(); li++) {
+            LeafReader lr = leaves.get(li).reader();
+            Bits liveDocs = lr.getLiveDocs();
+            if (liveDocs == null) {
+                live[li] = lr.docFreq(t);
+            } else {
+                PostingsEnum pe = lr.postings(t, PostingsEnum.NONE);
+                for (int d = pe == null ? DocIdSetIterator.NO_MORE_DOCS : pe.nextDoc(); d != DocIdSetIterator.NO_MORE_DOCS;
+                     d = pe.nextDoc()) {
+                    if (liveDocs.get(d)) {
+                        live[li]++;
+                    }
+                }
+            }
+            total += live[li];
         }
         int n = (int) Math.max(1, Math.min(parallelism, total / minPartition));
         long size = Math.max(1, (total + n - 1) / n);
@@ -353,24 +384,40 @@ public final class Catalog implements AutoCloseable {
         List<int[]> current = new ArrayList<>();
         long room = size;
         for (int li = 0; li < leaves.size(); li++) {
-            int max = leaves.get(li).reader().maxDoc();
+            LeafReader lr = leaves.get(li).reader();
+            int max = lr.maxDoc();
+            if (live[li] == 0) {
+                continue;
+            }
+            if (live[li] < room || out.size() == n - 1) {
+                current.add(new int[] {li, 0, max});
+                room -= live[li];
+                continue;
+            }
+            // a cut falls in this segment: walk its parts of the kind to find where
+            Bits liveDocs = lr.getLiveDocs();
+            PostingsEnum pe = lr.postings(t, PostingsEnum.NONE);
             int from = 0;
-            while (from < max) {
-                int to = (int) Math.min(max, from + room);
-                current.add(new int[] {li, from, to});
-                room -= to - from;
-                from = to;
-                if (room == 0 && out.size() < n - 1) {
+            for (int d = pe.nextDoc(); d != DocIdSetIterator.NO_MORE_DOCS; d = pe.nextDoc()) {
+                if (liveDocs != null && !liveDocs.get(d)) {
+                    continue;
+                }
+                if (--room == 0 && out.size() < n - 1) {
+                    current.add(new int[] {li, from, d + 1});
                     out.add(current);
                     current = new ArrayList<>();
                     room = size;
+                    from = d + 1;
                 }
+            }
+            if (from < max) {
+                current.add(new int[] {li, from, max});
             }
         }
         if (!current.isEmpty() || out.isEmpty()) {
             out.add(current);
         }
-        return out;
+        return List.copyOf(out);
     }
 
     private void scanPartition(Kind kind, Weight w, List<int[]> pieces, java.util.function.Consumer<RowCursor> sink)

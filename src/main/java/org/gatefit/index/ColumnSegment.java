@@ -49,13 +49,14 @@ final class ColumnSegment extends LeafReader {
     private final String normsField;
     private final long[] norms;
     private final String storedField;
-    private final byte[][] stored;
+    private final byte[] stored;
+    private final int[] storedStart;
     private final FixedBitSet live;
     private final int numDocs;
 
     ColumnSegment(int maxDoc, List<FieldInfo> infos, Map<String, Postings> postings, Map<String, Numeric> numerics,
-                  Map<String, Sorted> sorted, String normsField, long[] norms, String storedField, byte[][] stored,
-                  FixedBitSet live) {
+                  Map<String, Sorted> sorted, String normsField, long[] norms, String storedField, byte[] stored,
+                  int[] storedStart, FixedBitSet live) {
         this.maxDoc = maxDoc;
         this.infos = new FieldInfos(infos.toArray(new FieldInfo[0]));
         this.postings = Map.copyOf(postings);
@@ -65,6 +66,7 @@ final class ColumnSegment extends LeafReader {
         this.norms = norms;
         this.storedField = storedField;
         this.stored = stored;
+        this.storedStart = storedStart;
         this.live = live;
         this.numDocs = live == null ? maxDoc : live.cardinality();
     }
@@ -347,7 +349,7 @@ final class ColumnSegment extends LeafReader {
             @Override
             public void document(int docID, StoredFieldVisitor visitor) throws IOException {
                 if (visitor.needsField(fi) == StoredFieldVisitor.Status.YES) {
-                    visitor.binaryField(fi, stored[docID]);
+                    visitor.binaryField(fi, java.util.Arrays.copyOfRange(stored, storedStart[docID], storedStart[docID + 1]));
                 }
             }
         };

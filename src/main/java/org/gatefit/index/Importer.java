@@ -20,6 +20,7 @@ import org.apache.lucene.document.Document;
 import org.apache.lucene.document.Field;
 import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
+import org.apache.lucene.index.ConcurrentMergeScheduler;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
@@ -72,10 +73,23 @@ public final class Importer {
 
     private final Path dir;
     private final Clock clock;
+    private final int threads;
+    private final int chunkRows;
 
     public Importer(Path dir, Clock clock) {
+        this(dir, clock, THREADS, IndexPipeline.chunkRows(THREADS));
+    }
+
+    /** With {@code threads} segment writers and at most {@code chunkRows} parts per segment (tests use small chunks). */
+    Importer(Path dir, Clock clock, int threads, int chunkRows) {
         this.dir = Objects.requireNonNull(dir, "dir");
         this.clock = Objects.requireNonNull(clock, "clock");
+        if (threads < 1 || chunkRows < 1) {
+            throw new IllegalArgumentException("expected at least one thread and one part per segment, got " + threads
+                    + " and " + chunkRows);
+        }
+        this.threads = threads;
+        this.chunkRows = chunkRows;
     }
 
     /**
@@ -94,10 +108,16 @@ public final class Importer {
         try (Directory directory = FSDirectory.open(dir)) {
             boolean existed = DirectoryReader.indexExists(directory);
             IndexWriter writer;
+            ConcurrentMergeScheduler merges = new ConcurrentMergeScheduler();
+            // Each chunk's segment is written as a merge (addIndexes): let every indexing thread write
+            // one at once, at full speed (the import is what the user waits for).
+            merges.setMaxMergesAndThreads(threads + 4, threads);
+            merges.disableAutoIOThrottle();
             IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
                     .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
                     .setCommitOnClose(false)
-                    .setRAMBufferSizeMB(ramBufferMb());
+                    .setCodec(new ColumnCodec())
+                    .setMergeScheduler(merges);
             try {
                 writer = new IndexWriter(directory, cfg);
             } catch (LockObtainFailedException e) {
@@ -133,14 +153,8 @@ public final class Importer {
         }
     }
 
-    /**
-     * Indexing buffer: 256 MB, so that a big import writes few segments (a million synthetic parts:
-     * five, against thirteen at 64 MB) and Lucene seldom merges during it; at most a quarter of the heap.
-     */
-    private static double ramBufferMb() {
-        long quarterHeapMb = Runtime.getRuntime().maxMemory() / 4 / (1024 * 1024);
-        return Math.max(16, Math.min(256, quarterHeapMb));
-    }
+    /** Segments written at once: one per core, at most four. */
+    private static final int THREADS = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
 
     private static Path absoluteParent(Path p) {
         Path parent = p.toAbsolutePath().getParent();
@@ -156,10 +170,9 @@ public final class Importer {
         long[] problemTotal = {0};
         long rejected = 0;
         long written;
-        int threads = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
         DirectoryReader committed = DirectoryReader.indexExists(writer.getDirectory())
                 ? DirectoryReader.open(writer.getDirectory()) : null;
-        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, listener, threads)) {
+        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, listener, threads, chunkRows)) {
         for (int i = 0; i < files.size(); i++) {
             String name = names.get(i);
             boolean[] stop = {false};

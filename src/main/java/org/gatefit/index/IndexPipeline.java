@@ -2,56 +2,114 @@ package org.gatefit.index;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
+import java.util.EnumMap;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.BlockingQueue;
-import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.SlowCodecReaderWrapper;
 import org.apache.lucene.index.Term;
 import org.apache.lucene.index.Terms;
 import org.apache.lucene.index.TermsEnum;
+import org.apache.lucene.util.ArrayUtil;
 import org.apache.lucene.util.BytesRef;
+import org.apache.lucene.util.BytesRefHash;
+import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 
 /**
- * Indexes rows on worker threads while the reader thread parses the next ones (Lucene's
- * {@link IndexWriter} takes documents from several threads at once). Rows with the same id always
- * go to the same worker, in order, so "the later row wins" holds as in a single thread. A row
- * whose id is neither in the committed catalog nor earlier in this import is added without the
- * delete-by-term an update costs.
+ * Writes an import's rows as column segments. The reading thread deals rows out in small batches
+ * to worker threads, a chunk (the rows of one future segment, one kind) to one worker; the worker
+ * puts them into its {@link SegmentBuilder}'s columns at once (a parsed row lives only moments) and,
+ * when the chunk is sealed, writes the segment with {@code addIndexes} while the other workers fill
+ * the next chunks.
+ *
+ * <p>"The later row wins" holds as with one document at a time. A row whose id was already written
+ * in an earlier import is deleted by its id term before the chunk holding the new row is added (a
+ * delete reaches only segments present when it is made). A row whose id came earlier in this import
+ * replaces that row: withdrawn from its chunk if that chunk is still open, otherwise deleted by term
+ * once every chunk sealed before has been written.
  */
 final class IndexPipeline implements AutoCloseable {
-    private record Task(Row row, String id, boolean update) {
+    /** Most rows per chunk (memory bounds it further; see {@link #chunkRows}). */
+    static final int MAX_CHUNK = 131_072;
+    /** Rows per hand-off to a worker. */
+    private static final int BATCH = 512;
+
+    /** What the reading thread knows of a chunk: where its rows went and what must precede its writing. */
+    private static final class Chunk {
+        final Kind kind;
+        final Worker worker;
+        final int number;
+        int rows;
+        List<Row> batch = new ArrayList<>(BATCH);
+        List<String> batchIds = new ArrayList<>(BATCH);
+        final List<Integer> withdrawn = new ArrayList<>();
+        /** Ids to delete from the catalog (earlier imports, or chunks sealed before) before this one is added. */
+        final List<Term> deletes = new ArrayList<>();
+        /** Whether some of {@link #deletes} hit chunks sealed before: they must be written first. */
+        boolean afterSealed;
+        final CompletableFuture<Void> done = new CompletableFuture<>();
+
+        Chunk(Kind kind, Worker worker, int number) {
+            this.kind = kind;
+            this.worker = worker;
+            this.number = number;
+        }
     }
 
-    /** Rows travel in batches: one queue hand-off per batch, not per row. */
-    private static final int BATCH = 256;
-    private static final List<Task> STOP = List.of();
+    /** Messages to a worker, in order: rows of a chunk, then the chunk sealed (write it). */
+    private record Message(Chunk chunk, List<Row> rows, List<String> ids, boolean seal) {
+    }
+
+    private static final Message STOP = new Message(null, null, null, false);
 
     private final IndexWriter writer;
     private final Importer.Listener listener;
-    private final List<BlockingQueue<List<Task>>> queues = new ArrayList<>();
-    private final List<List<Task>> pending = new ArrayList<>();
-    private final List<Thread> workers = new ArrayList<>();
-    private final AtomicLong written = new AtomicLong();
-    private final AtomicReference<Throwable> failure = new AtomicReference<>();
-    private final Set<String> seen = new HashSet<>();
+    private final int chunkRows;
+    private final List<Worker> workers = new ArrayList<>();
+    private final Deque<Chunk> sealed = new ArrayDeque<>();
+    private final Map<Kind, Chunk> open = new EnumMap<>(Kind.class);
+    /**
+     * Ids seen in this import (bytes in pooled blocks, not an object per id: they live as long as
+     * the import) and, per id, where its latest row went: chunk number in the high half, document
+     * number in the low.
+     */
+    private final BytesRefHash seen = new BytesRefHash();
+    private long[] placeOf = new long[1024];
     private final List<TermsEnum> committedIds = new ArrayList<>();
     private final Set<String> clearedKinds = new HashSet<>();
+    private final AtomicReference<Throwable> failure = new AtomicReference<>();
+    private int chunks;
+    private long written;
     private boolean closed;
-    /** Set before the stop marker is queued (the queue hand-off makes it visible to the workers). */
-    private volatile boolean writeSegments;
 
-    IndexPipeline(IndexWriter writer, DirectoryReader committed, Importer.Listener listener, int threads)
+    /**
+     * @param threads   segments written at once
+     * @param chunkRows most rows per segment
+     */
+    IndexPipeline(IndexWriter writer, DirectoryReader committed, Importer.Listener listener, int threads, int chunkRows)
             throws IOException {
+        if (threads < 1 || chunkRows < 1) {
+            throw new IllegalArgumentException("expected at least one thread and one row per chunk, got " + threads
+                    + " and " + chunkRows);
+        }
         this.writer = writer;
         this.listener = listener;
+        this.chunkRows = chunkRows;
         if (committed != null) {
             for (LeafReaderContext leaf : committed.leaves()) {
                 Terms t = leaf.reader().terms(Fields.ID);
@@ -61,14 +119,19 @@ final class IndexPipeline implements AutoCloseable {
             }
         }
         for (int i = 0; i < threads; i++) {
-            BlockingQueue<List<Task>> q = new ArrayBlockingQueue<>(16);
-            queues.add(q);
-            pending.add(new ArrayList<>(BATCH));
-            Thread th = new Thread(() -> work(q), "gatefit-index-" + i);
-            th.setDaemon(true);
-            workers.add(th);
-            th.start();
+            workers.add(new Worker("gatefit-index-" + i));
         }
+    }
+
+    /**
+     * Rows per chunk for {@code threads} writers: at most {@link #MAX_CHUNK}, and small enough that
+     * the chunks held at once (one filling and one being written per worker) take at most a quarter
+     * of the heap at some 1.5 KB a row in columns.
+     */
+    static int chunkRows(int threads) {
+        long quarterHeap = Runtime.getRuntime().maxMemory() / 4;
+        long rows = quarterHeap / (1536L * 2 * threads);
+        return (int) Math.max(1024, Math.min(MAX_CHUNK, rows));
     }
 
     /** The kind's committed parts were deleted in this import (--replace): their ids no longer exist. */
@@ -76,42 +139,55 @@ final class IndexPipeline implements AutoCloseable {
         clearedKinds.add(kind);
     }
 
-    /** Queues a row; rethrows a worker's failure. */
+    /** Takes a row; rethrows a worker's failure. */
     void submit(Row row) throws IOException {
-        rethrow();
+        ensureOpen();
         String id = Fields.id(row.kind().id(), row.key());
-        boolean update = !seen.add(id) || (!clearedKinds.contains(row.kind().id()) && committed(id));
-        int w = Math.floorMod(id.hashCode(), queues.size());
-        List<Task> batch = pending.get(w);
-        batch.add(new Task(row, id, update));
-        if (batch.size() >= BATCH) {
-            send(w);
+        Chunk chunk = open.get(row.kind());
+        if (chunk == null) {
+            Worker w = workers.get(chunks % workers.size());
+            chunk = new Chunk(row.kind(), w, chunks++);
+            open.put(row.kind(), chunk);
         }
-    }
-
-    private void send(int w) throws IOException {
-        List<Task> batch = pending.get(w);
-        if (batch.isEmpty()) {
-            return;
-        }
-        pending.set(w, new ArrayList<>(BATCH));
-        try {
-            while (!queues.get(w).offer(batch, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) {
-                rethrow();
+        BytesRef idBytes = new BytesRef(id);
+        int slot = seen.add(idBytes);
+        if (slot < 0) { // seen before in this import; the same id is the same kind, so the same open chunk if any
+            slot = -slot - 1;
+            int before = (int) (placeOf[slot] >>> 32);
+            if (before == chunk.number) {
+                chunk.withdrawn.add((int) placeOf[slot]);
+            } else {
+                chunk.deletes.add(new Term(Fields.ID, idBytes));
+                chunk.afterSealed = true;
             }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IOException("import interrupted", e);
+        } else if (!clearedKinds.contains(row.kind().id()) && committed(idBytes)) {
+            chunk.deletes.add(new Term(Fields.ID, idBytes));
+        }
+        if (slot >= placeOf.length) {
+            placeOf = ArrayUtil.grow(placeOf, slot + 1);
+        }
+        placeOf[slot] = ((long) chunk.number << 32) | chunk.rows++;
+        chunk.batch.add(row);
+        chunk.batchIds.add(id);
+        written++;
+        listener.rowWritten(written);
+        if (chunk.batch.size() >= BATCH) {
+            flushBatch(chunk);
+        }
+        if (chunk.rows >= chunkRows) {
+            seal(chunk);
         }
     }
 
-    /** Rows written so far. */
+    /** Rows taken so far. */
     long written() {
-        return written.get();
+        return written;
     }
 
-    private boolean committed(String id) throws IOException {
-        BytesRef b = new BytesRef(id);
+    private boolean committed(BytesRef b) throws IOException {
+        if (committedIds.isEmpty()) {
+            return false;
+        }
         for (TermsEnum te : committedIds) {
             if (te.seekExact(b)) {
                 return true;
@@ -120,92 +196,93 @@ final class IndexPipeline implements AutoCloseable {
         return false;
     }
 
-    private void work(BlockingQueue<List<Task>> q) {
-        try {
-            while (true) {
-                List<Task> batch = q.take();
-                if (batch == STOP) {
-                    // Write the rows still in memory as segments here, on every worker at once, rather
-                    // than one buffer after the other on the thread that commits.
-                    while (writeSegments && failure.get() == null && writer.flushNextBuffer()) {
-                        // until no buffer is left
-                    }
-                    return;
-                }
-                for (Task t : batch) {
-                    if (failure.get() != null) {
-                        break;
-                    }
-                    Row row = t.row();
-                    if (t.update()) {
-                        writer.updateDocument(new Term(Fields.ID, t.id()), Documents.toDocument(row, t.id()));
-                    } else {
-                        writer.addDocument(Documents.toDocument(row, t.id()));
-                    }
-                    long n = written.incrementAndGet();
-                    synchronized (listener) {
-                        listener.rowWritten(n);
-                    }
-                }
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            failure.compareAndSet(null, e);
-        } catch (Throwable e) {
-            failure.compareAndSet(null, e);
-            // keep draining so the producer never blocks
-            try {
-                while (q.take() != STOP) {
-                    // discard
-                }
-            } catch (InterruptedException ie) {
-                Thread.currentThread().interrupt();
-            }
+    private void flushBatch(Chunk chunk) throws IOException {
+        if (chunk.batch.isEmpty()) {
+            return;
         }
+        rethrow();
+        Message m = new Message(chunk, chunk.batch, chunk.batchIds, false);
+        chunk.batch = new ArrayList<>(BATCH);
+        chunk.batchIds = new ArrayList<>(BATCH);
+        chunk.worker.send(m);
     }
 
-    /**
-     * Waits for every queued row to be written; rethrows a worker's failure.
-     *
-     * @param segments whether the workers then write what they hold in memory as segments (for an
-     *                 import about to commit; one that will roll back leaves it to be dropped)
-     */
-    void finish(boolean segments) throws IOException {
-        for (int w = 0; w < queues.size(); w++) {
-            send(w);
+    private void seal(Chunk chunk) throws IOException {
+        flushBatch(chunk);
+        open.remove(chunk.kind);
+        if (chunk.afterSealed) {
+            waitFor(0); // the rows these deletes replace must be in the index first
         }
-        writeSegments = segments;
-        close();
+        if (!chunk.deletes.isEmpty()) {
+            writer.deleteDocuments(chunk.deletes.toArray(new Term[0]));
+        }
+        chunk.worker.send(new Message(chunk, null, null, true));
+        sealed.add(chunk);
+        waitFor(workers.size()); // bounds the chunks in memory; a worker never idles for want of one
+    }
+
+    /** Waits until at most {@code most} sealed chunks are unwritten; rethrows the first failure. */
+    private void waitFor(int most) throws IOException {
+        while (!sealed.isEmpty() && (sealed.size() > most || sealed.peekFirst().done.isDone())) {
+            Chunk c = sealed.removeFirst();
+            try {
+                c.done.get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IOException("import interrupted", e);
+            } catch (ExecutionException e) {
+                rethrow(e.getCause());
+            }
+        }
         rethrow();
     }
 
+    /**
+     * Writes what is left and waits for every chunk; rethrows a worker's failure.
+     *
+     * @param segments whether the open chunks are written (for an import about to commit; one that
+     *                 will roll back drops them)
+     */
+    void finish(boolean segments) throws IOException {
+        ensureOpen();
+        for (Chunk c : new ArrayList<>(open.values())) {
+            if (segments && c.rows > 0) {
+                seal(c);
+            }
+        }
+        open.clear();
+        waitFor(0);
+    }
+
+    private void ensureOpen() {
+        if (closed) {
+            throw new IllegalStateException("the index pipeline is closed");
+        }
+    }
+
+    /** Stops the workers; a segment being written is let finish (the writer must stay usable for a rollback). */
     @Override
     public void close() {
         if (closed) {
             return;
         }
         closed = true;
-        for (BlockingQueue<List<Task>> q : queues) {
-            try {
-                q.put(STOP);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
+        for (Worker w : workers) {
+            w.stop();
         }
-        for (Thread t : workers) {
-            try {
-                t.join();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
+        for (Worker w : workers) {
+            w.join();
         }
     }
 
     private void rethrow() throws IOException {
         Throwable t = failure.get();
-        if (t == null) {
-            return;
+        if (t != null) {
+            rethrow(t);
         }
+    }
+
+    private static void rethrow(Throwable t) throws IOException {
         if (t instanceof IOException io) {
             throw io;
         }
@@ -219,5 +296,92 @@ final class IndexPipeline implements AutoCloseable {
             throw e;
         }
         throw new IOException(t);
+    }
+
+    /** One indexing thread: fills the builders of its chunks and writes each sealed one. */
+    private final class Worker {
+        private final BlockingQueue<Message> queue = new ArrayBlockingQueue<>(4);
+        private final Map<Integer, SegmentBuilder> builders = new HashMap<>();
+        private final Thread thread;
+
+        Worker(String name) {
+            thread = new Thread(this::run, name);
+            thread.setDaemon(true);
+            thread.start();
+        }
+
+        void send(Message m) throws IOException {
+            try {
+                while (!queue.offer(m, 100, TimeUnit.MILLISECONDS)) {
+                    rethrow();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IOException("import interrupted", e);
+            }
+        }
+
+        void stop() {
+            queue.clear(); // rows not yet in a builder are dropped: the import is over or failing
+            boolean put = false;
+            while (!put) {
+                try {
+                    queue.put(STOP);
+                    put = true;
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+
+        void join() {
+            try {
+                thread.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }
+
+        private void run() {
+            while (true) {
+                Message m;
+                try {
+                    m = queue.take();
+                } catch (InterruptedException e) {
+                    failure.compareAndSet(null, e);
+                    return;
+                }
+                if (m == STOP) {
+                    return;
+                }
+                Chunk c = m.chunk();
+                if (failure.get() != null) {
+                    c.done.completeExceptionally(failure.get());
+                    builders.remove(c.number);
+                    continue;
+                }
+                try {
+                    if (m.seal()) {
+                        SegmentBuilder b = builders.remove(c.number);
+                        if (b != null) { // null: every row of the chunk was dropped
+                            for (int doc : c.withdrawn) {
+                                b.withdraw(doc);
+                            }
+                            writer.addIndexes(SlowCodecReaderWrapper.wrap(b.build()));
+                        }
+                        c.done.complete(null);
+                    } else {
+                        SegmentBuilder b = builders.computeIfAbsent(c.number, k -> new SegmentBuilder(c.kind, chunkRows, writer.getAnalyzer()));
+                        for (int i = 0; i < m.rows().size(); i++) {
+                            b.add(m.rows().get(i), m.ids().get(i));
+                        }
+                    }
+                } catch (Throwable e) {
+                    failure.compareAndSet(null, e);
+                    c.done.completeExceptionally(e);
+                }
+            }
+        }
     }
 }

@@ -49,17 +49,34 @@ final class SegmentBuilder {
     private final List<Column> columns;
     /** Per schema column: its values, or null for a words-only column (no field of its own). */
     private final ColumnValues[] values;
-    /** Schema positions of the TEXT columns (their words go to {@link Fields#ALL}). */
-    private final int[] textColumns;
-    /** Per TEXT column (as {@link #textColumns}), the text of each part, null for none. */
-    private String[][] texts;
-    private String[] ids;
-    private byte[][] sources;
+    /** Ids ({@link Fields#ID} terms) and each part's id in the hash. */
+    private final BytesRefHash idTerms = new BytesRefHash();
+    private int[] idOf;
+    /** The words of {@link Fields#ALL}: term hash, (term, document, frequency) triples, norms. */
+    private final BytesRefHash words = new BytesRefHash();
+    private int[] pairTerm;
+    private int[] pairDoc;
+    private int[] pairFreq;
+    private int pairs;
+    private long[] norms;
+    private final Tokens tokens;
+    /** Texts seen before (makers, packages, descriptions), analyzed once; bounded. */
+    private final Map<String, int[]> known = new HashMap<>();
+    private int[] docTerms = new int[32];
+    /** Stored records, one after the other: part {@code d}'s is {@code source[sourceStart[d] .. sourceStart[d + 1]]}. */
+    private byte[] source;
+    private int[] sourceStart;
     private FixedBitSet withdrawn;
     private int size;
 
-    /** @param capacity the most parts it takes */
-    SegmentBuilder(Kind kind, int capacity) {
+    /** Texts kept as analyzed, at most. */
+    private static final int KNOWN_TEXTS = 8192;
+
+    /**
+     * @param capacity the most parts it takes
+     * @param analyzer the index's analyzer, for {@link Fields#ALL} (used from one thread at a time)
+     */
+    SegmentBuilder(Kind kind, int capacity, Analyzer analyzer) {
         if (kind == Kind.STAGE) {
             throw new IllegalArgumentException("expected switch or driver parts, got stages");
         }
@@ -75,28 +92,29 @@ final class SegmentBuilder {
                         : new Texts(c.name(), Math.min(capacity, INITIAL), !c.name().equals(PartNumberQuery.FIELD));
             };
         }
-        textColumns = java.util.stream.IntStream.range(0, columns.size())
-                .filter(i -> columns.get(i).type() == ColumnType.TEXT).toArray();
         int initial = Math.min(capacity, INITIAL);
-        texts = new String[textColumns.length][initial];
-        ids = new String[initial];
-        sources = new byte[initial][];
+        idOf = new int[initial];
+        norms = new long[initial];
+        pairTerm = new int[initial * 4];
+        pairDoc = new int[initial * 4];
+        pairFreq = new int[initial * 4];
+        source = new byte[initial * 256];
+        sourceStart = new int[initial + 1];
         withdrawn = new FixedBitSet(initial);
+        tokens = new Tokens(analyzer, words);
     }
 
     /** Arrays start this long and grow as parts arrive (a small import allocates little). */
     private static final int INITIAL = 1024;
 
     private void ensureRoom() {
-        if (size < ids.length) {
+        if (size < idOf.length) {
             return;
         }
         int len = Math.min(capacity, ArrayUtil.oversize(size + 1, Integer.BYTES));
-        ids = Arrays.copyOf(ids, len);
-        sources = Arrays.copyOf(sources, len);
-        for (int t = 0; t < texts.length; t++) {
-            texts[t] = Arrays.copyOf(texts[t], len);
-        }
+        idOf = Arrays.copyOf(idOf, len);
+        norms = Arrays.copyOf(norms, len);
+        sourceStart = Arrays.copyOf(sourceStart, len + 1);
         withdrawn = FixedBitSet.ensureCapacity(withdrawn, len);
         for (ColumnValues v : values) {
             if (v != null) {
@@ -132,9 +150,10 @@ final class SegmentBuilder {
         ensureRoom();
         int doc = size;
         checkTerm(Fields.ID, id);
-        ids[doc] = id;
+        int idInHash = idTerms.add(new BytesRef(id));
+        idOf[doc] = idInHash < 0 ? -idInHash - 1 : idInHash; // a withdrawn part shares its id with its successor
         int at = 0;
-        int text = 0;
+        int count = 0;
         for (Map.Entry<String, Object> e : row.values().entrySet()) {
             String n = e.getKey();
             int from = at;
@@ -158,16 +177,20 @@ final class SegmentBuilder {
                         ((Texts) v).set(doc, s);
                     }
                     if (c.type() == ColumnType.TEXT) {
-                        while (textColumns[text] != at) {
-                            text++;
-                        }
-                        texts[text][doc] = s;
+                        count = words(s, c.name().equals(PartNumberQuery.FIELD), count);
                     }
                 }
             }
             at++;
         }
-        sources[doc] = Documents.source(row);
+        endWords(doc, count);
+        byte[] rec = Documents.source(row);
+        int from = sourceStart[doc];
+        if (from + rec.length > source.length) {
+            source = ArrayUtil.grow(source, from + rec.length);
+        }
+        System.arraycopy(rec, 0, source, from, rec.length);
+        sourceStart[doc + 1] = from + rec.length;
         size++;
         return doc;
     }
@@ -184,19 +207,15 @@ final class SegmentBuilder {
      * The segment: term dictionaries sorted, postings and norms built, {@link Fields#ALL} analyzed
      * with {@code analyzer} (the index's analyzer; not thread-safe, one per calling thread).
      */
-    ColumnSegment build(Analyzer analyzer) throws IOException {
+    ColumnSegment build() {
         List<FieldInfo> infos = new ArrayList<>();
         Map<String, ColumnSegment.Postings> postings = new HashMap<>();
         Map<String, ColumnSegment.Numeric> numerics = new HashMap<>();
         Map<String, ColumnSegment.Sorted> sorted = new HashMap<>();
         int n = size;
 
-        BytesRefHash idTerms = new BytesRefHash();
-        int[] idOf = new int[n];
         int[] docs = new int[n];
         for (int d = 0; d < n; d++) {
-            int id = idTerms.add(new BytesRef(ids[d]));
-            idOf[d] = id < 0 ? -id - 1 : id; // a withdrawn part shares its id with the one that replaced it
             docs[d] = d;
         }
         infos.add(keyword(Fields.ID, infos.size(), false));
@@ -223,9 +242,8 @@ final class SegmentBuilder {
             }
         }
         infos.add(storedOnly(Fields.SOURCE, infos.size()));
-        Words all = analyze(analyzer, n);
         infos.add(text(Fields.ALL, infos.size()));
-        postings.put(Fields.ALL, all.postings);
+        postings.put(Fields.ALL, ColumnSegment.Postings.of(words, pairTerm, pairDoc, pairFreq, pairs, true));
         FixedBitSet live = null;
         if (withdrawn.cardinality() > 0) {
             live = new FixedBitSet(n);
@@ -234,74 +252,55 @@ final class SegmentBuilder {
                 live.clear(d);
             }
         }
-        return new ColumnSegment(n, infos, postings, numerics, sorted, Fields.ALL, all.norms,
-                Fields.SOURCE, Arrays.copyOf(sources, n), live);
+        return new ColumnSegment(n, infos, postings, numerics, sorted, Fields.ALL, norms,
+                Fields.SOURCE, source, sourceStart, live);
     }
 
-    /** The words of {@link Fields#ALL}: terms with doc and frequency lists, and each document's norm. */
-    private record Words(ColumnSegment.Postings postings, long[] norms) {
-    }
-
-    private Words analyze(Analyzer analyzer, int n) throws IOException {
-        BytesRefHash terms = new BytesRefHash();
-        int[] pairTerm = new int[n * 8];
-        int[] pairFreq = new int[n * 8];
-        int[] pairDoc = new int[n * 8];
-        int pairs = 0;
-        long[] norms = new long[n];
-        int[] docTerms = new int[16];
-        // Tokens never span the space Documents puts between the texts, so the words of the
-        // concatenation are the words of each text in turn: a text that recurs (a maker, a package,
-        // a description) is analyzed once. Part numbers are unique: not kept.
-        Map<String, int[]> known = new HashMap<>();
-        Tokens tokens = new Tokens(analyzer, terms);
-        for (int d = 0; d < n; d++) {
-            int count = 0;
-            for (int t = 0; t < textColumns.length; t++) {
-                String s = texts[t][d];
-                if (s == null) {
-                    continue;
-                }
-                int[] ids;
-                if (columns.get(textColumns[t]).name().equals(PartNumberQuery.FIELD)) {
-                    ids = tokens.of(s);
-                } else {
-                    ids = known.get(s);
-                    if (ids == null) {
-                        ids = tokens.of(s);
-                        known.put(s, ids);
-                    }
-                }
-                if (count + ids.length > docTerms.length) {
-                    docTerms = ArrayUtil.grow(docTerms, count + ids.length);
-                }
-                System.arraycopy(ids, 0, docTerms, count, ids.length);
-                count += ids.length;
-            }
-            // Lucene's BM25 norm (IndexingChain, BM25Similarity.computeNorm): the number of tokens
-            // in SmallFloat's byte (StandardAnalyzer never stacks tokens); 0 for a field without tokens.
-            norms[d] = count == 0 ? 0 : SmallFloat.intToByte4(count);
-            Arrays.sort(docTerms, 0, count);
-            for (int k = 0; k < count; ) {
-                int id = docTerms[k];
-                int f = 0;
-                while (k < count && docTerms[k] == id) {
-                    f++;
-                    k++;
-                }
-                if (pairs == pairTerm.length) {
-                    int cap = ArrayUtil.oversize(pairs + 1, Integer.BYTES);
-                    pairTerm = Arrays.copyOf(pairTerm, cap);
-                    pairFreq = Arrays.copyOf(pairFreq, cap);
-                    pairDoc = Arrays.copyOf(pairDoc, cap);
-                }
-                pairTerm[pairs] = id;
-                pairFreq[pairs] = f;
-                pairDoc[pairs] = d;
-                pairs++;
+    /**
+     * Adds the words of one text of the current part to {@link #docTerms} after {@code count};
+     * returns the new count. Tokens never span the space Documents puts between the texts, so the
+     * words of their concatenation are the words of each text in turn: a text that recurs (a maker,
+     * a package, a description) is analyzed once. Part numbers are unique: not kept.
+     */
+    private int words(String text, boolean unique, int count) {
+        int[] ids = unique ? null : known.get(text);
+        if (ids == null) {
+            ids = tokens.of(text);
+            if (!unique && known.size() < KNOWN_TEXTS) {
+                known.put(text, ids);
             }
         }
-        return new Words(ColumnSegment.Postings.of(terms, pairTerm, pairDoc, pairFreq, pairs, true), norms);
+        if (count + ids.length > docTerms.length) {
+            docTerms = ArrayUtil.grow(docTerms, count + ids.length);
+        }
+        System.arraycopy(ids, 0, docTerms, count, ids.length);
+        return count + ids.length;
+    }
+
+    /** The current part's words as (term, document, frequency) triples, and its norm. */
+    private void endWords(int doc, int count) {
+        // Lucene's BM25 norm (IndexingChain, BM25Similarity.computeNorm): the number of tokens in
+        // SmallFloat's byte (StandardAnalyzer never stacks tokens); 0 for a field without tokens.
+        norms[doc] = count == 0 ? 0 : SmallFloat.intToByte4(count);
+        Arrays.sort(docTerms, 0, count);
+        for (int k = 0; k < count; ) {
+            int id = docTerms[k];
+            int f = 0;
+            while (k < count && docTerms[k] == id) {
+                f++;
+                k++;
+            }
+            if (pairs == pairTerm.length) {
+                int cap = ArrayUtil.oversize(pairs + 1, Integer.BYTES);
+                pairTerm = Arrays.copyOf(pairTerm, cap);
+                pairFreq = Arrays.copyOf(pairFreq, cap);
+                pairDoc = Arrays.copyOf(pairDoc, cap);
+            }
+            pairTerm[pairs] = id;
+            pairFreq[pairs] = f;
+            pairDoc[pairs] = doc;
+            pairs++;
+        }
     }
 
     /** Analyzes one text into term ids of a hash. */
@@ -315,7 +314,7 @@ final class SegmentBuilder {
             this.terms = terms;
         }
 
-        int[] of(String text) throws IOException {
+        int[] of(String text) {
             int count = 0;
             try (TokenStream ts = analyzer.tokenStream(Fields.ALL, text)) {
                 TermToBytesRefAttribute term = ts.getAttribute(TermToBytesRefAttribute.class);
@@ -336,6 +335,8 @@ final class SegmentBuilder {
                     scratch[count++] = id < 0 ? -id - 1 : id;
                 }
                 ts.end();
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException("analyzing text in memory failed", e);
             }
             return Arrays.copyOf(scratch, count);
         }

@@ -82,19 +82,19 @@ class SegmentBuilderTest {
         StringWriter dw = new StringWriter();
         SyntheticCatalog.writeDrivers(dw, 2500);
         List<Row> rows = read(dw.toString());
-        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, rows.size());
+        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, rows.size(), new StandardAnalyzer());
         for (Row r : rows) {
             b.add(r, id(r));
         }
         assertTrue(b.full());
         assertThrows(IllegalStateException.class, () -> b.add(rows.get(0), id(rows.get(0))));
-        assertThrows(IllegalArgumentException.class, () -> new SegmentBuilder(Kind.SWITCH, 4).add(rows.get(0), id(rows.get(0))));
+        assertThrows(IllegalArgumentException.class, () -> new SegmentBuilder(Kind.SWITCH, 4, new StandardAnalyzer()).add(rows.get(0), id(rows.get(0))));
     }
 
     @Test
     void aWithdrawnPartIsNotWritten() throws IOException {
         List<Row> rows = read(Path.of("examples", "drivers.csv"));
-        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, 100);
+        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, 100, new StandardAnalyzer());
         for (Row r : rows) {
             b.add(r, id(r));
         }
@@ -102,7 +102,7 @@ class SegmentBuilderTest {
         b.withdraw(3);
         Directory dir = new ByteBuffersDirectory();
         try (IndexWriter w = new IndexWriter(dir, new IndexWriterConfig(new StandardAnalyzer()).setCodec(new ColumnCodec()))) {
-            w.addIndexes(SlowCodecReaderWrapper.wrap(b.build(w.getAnalyzer())));
+            w.addIndexes(SlowCodecReaderWrapper.wrap(b.build()));
             w.commit();
         }
         try (DirectoryReader r = DirectoryReader.open(dir)) {
@@ -119,7 +119,7 @@ class SegmentBuilderTest {
     @Test
     void aTermLongerThanLuceneTakesIsRefusedWithTheField() {
         Row r = row(Kind.DRIVER, Map.of("part_number", "TST-LONG", "maker", "x".repeat(40_000)));
-        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, 4);
+        SegmentBuilder b = new SegmentBuilder(Kind.DRIVER, 4, new StandardAnalyzer());
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> b.add(r, id(r)));
         assertTrue(e.getMessage().contains("maker"), e.getMessage());
     }
@@ -220,11 +220,11 @@ class SegmentBuilderTest {
         IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer());
         cfg.setCodec(columnCodec ? new ColumnCodec() : Codec.getDefault());
         try (IndexWriter w = new IndexWriter(actualDir, cfg)) {
-            SegmentBuilder b = new SegmentBuilder(rows.get(0).kind(), rows.size());
+            SegmentBuilder b = new SegmentBuilder(rows.get(0).kind(), rows.size(), w.getAnalyzer());
             for (Row r : rows) {
                 b.add(r, id(r));
             }
-            w.addIndexes(SlowCodecReaderWrapper.wrap(b.build(w.getAnalyzer())));
+            w.addIndexes(SlowCodecReaderWrapper.wrap(b.build()));
             w.commit();
         }
         try (DirectoryReader e = DirectoryReader.open(expectedDir); DirectoryReader a = DirectoryReader.open(actualDir)) {
