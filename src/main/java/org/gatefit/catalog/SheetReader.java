@@ -310,7 +310,7 @@ public final class SheetReader {
             return null;
         }
         List<Column> columns = schema.columns();
-        LinkedHashMap<String, Object> values = new LinkedHashMap<>(columns.size() * 2); // no rehash per row
+        Object[] values = new Object[columns.size()]; // by schema position: the row's map without a node per value
         for (int ci = 0; ci < columns.size(); ci++) {
             Column c = columns.get(ci);
             int at = l.columnAt[ci];
@@ -323,7 +323,8 @@ public final class SheetReader {
                 continue;
             }
             if (v == null && c.defaultFrom() != null) {
-                v = values.get(c.defaultFrom());
+                int from = schema.slot(c.defaultFrom());
+                v = from < 0 ? null : values[from];
             }
             if (v == null && c.defaultValue() != null) {
                 try {
@@ -339,7 +340,7 @@ public final class SheetReader {
                 }
                 continue;
             }
-            values.put(c.name(), v);
+            values[ci] = v;
         }
         for (int i : l.unnamed) {
             if (!rec.get(i).isBlank()) {
@@ -358,7 +359,8 @@ public final class SheetReader {
         if (!out.isEmpty()) {
             return null;
         }
-        return new Row(schema.kind(), values.get(keyColumn).toString(), file, line, Row.owned(values), extras);
+        return new Row(schema.kind(), values[schema.slot(keyColumn)].toString(), file, line, Row.bySlot(schema, values),
+                extras);
     }
 
     private static Kind kindOrNull(List<String> header) {
