@@ -36,15 +36,20 @@ final class CsvLexer {
     private char[] buf = new char[1 << 17]; // larger than SNIFF_LIMIT: detection never compacts
     private int pos;
     private int end;
-    /** Start of the characters that must survive a refill (the current cell). */
+    /** Start of the characters that must survive a refill: the current record. */
     private int mark;
     /** Characters dropped from the front of {@link #buf} so far (for Commons CSV's error positions). */
     private long dropped;
+    /** How far the last {@link #fill} moved the characters to the front. */
+    private int moved;
     private boolean eof;
     private boolean done;
     /** Line ends consumed so far. */
     private long lines;
+    /** The current record's cells: text made on demand from {@code buf[from[i]..to[i])}, or set (unquoted ""). */
     private String[] cells = new String[32];
+    private int[] from = new int[32];
+    private int[] to = new int[32];
     private int size;
     private long start;
     private final StringBuilder quotedText = new StringBuilder();
@@ -110,12 +115,38 @@ final class CsvLexer {
         if (i >= size) {
             throw new IndexOutOfBoundsException("cell " + i + " of " + size);
         }
-        return cells[i];
+        String c = cells[i];
+        if (c == null) {
+            c = from[i] == to[i] ? "" : new String(buf, from[i], to[i] - from[i]);
+            cells[i] = c;
+        }
+        return c;
+    }
+
+    /**
+     * The characters of the current record, valid until the next {@link #next}: cell {@code i} is
+     * {@code chars()[from(i)..to(i))} unless {@link #from} is negative (a quoted cell with {@code ""}
+     * in it: read it by {@link #get}).
+     */
+    char[] chars() {
+        return buf;
+    }
+
+    int from(int i) {
+        return from[i];
+    }
+
+    int to(int i) {
+        return to[i];
     }
 
     /** The cells of the current record, as a new list the caller may keep. */
     List<String> toList() {
-        return new ArrayList<>(Arrays.asList(cells).subList(0, size));
+        List<String> l = new ArrayList<>(size);
+        for (int i = 0; i < size; i++) {
+            l.add(get(i));
+        }
+        return l;
     }
 
     /** Physical line the current record starts on. */
@@ -123,10 +154,26 @@ final class CsvLexer {
         return start;
     }
 
-    /** Whether every cell of the current record is blank. */
+    /** Whether every cell of the current record is blank ({@link String#isBlank}). */
     boolean blank() {
         for (int i = 0; i < size; i++) {
-            if (!cells[i].isBlank()) {
+            if (!blank(i)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private boolean blank(int i) {
+        if (from[i] < 0) {
+            return cells[i].isBlank();
+        }
+        for (int j = from[i], n = to[i]; j < n; j++) {
+            char ch = buf[j];
+            if (ch >= 128) {
+                return get(i).isBlank(); // whitespace beyond ASCII: as String does it, by code point
+            }
+            if (!Character.isWhitespace(ch)) {
                 return false;
             }
         }
@@ -143,6 +190,7 @@ final class CsvLexer {
         if (done) {
             return false;
         }
+        Arrays.fill(cells, 0, size, null);
         size = 0;
         start = lines + 1;
         mark = pos;
@@ -151,9 +199,8 @@ final class CsvLexer {
             return false;
         }
         while (true) { // at the start of a cell
-            mark = pos;
             if (pos == end && !fill()) { // end of input right after a delimiter: one more empty cell
-                add("");
+                add(pos, pos);
                 done = true;
                 return true;
             }
@@ -163,13 +210,16 @@ final class CsvLexer {
                 }
                 continue;
             }
+            int first = pos;
             int p = pos;
             char d = delimiter;
             while (true) {
                 if (p == end) {
                     pos = p;
-                    if (!fill()) {
-                        add(text(mark, pos));
+                    boolean more = fill();
+                    first -= moved;
+                    if (!more) {
+                        add(first, pos);
                         done = true;
                         return true;
                     }
@@ -178,18 +228,18 @@ final class CsvLexer {
                 }
                 char ch = buf[p];
                 if (ch == d) {
-                    add(text(mark, p));
+                    add(first, p);
                     pos = p + 1;
                     break;
                 }
                 if (ch == '\n') {
-                    add(text(mark, p));
+                    add(first, p);
                     lines++;
                     pos = p + 1;
                     return true;
                 }
                 if (ch == '\r') {
-                    add(text(mark, p));
+                    add(first, p);
                     lines++;
                     pos = p + 1;
                     skipLf();
@@ -204,15 +254,16 @@ final class CsvLexer {
     private boolean quoted() throws IOException {
         long quoteLine = lines + 1;
         pos++;
-        mark = pos;
-        quotedText.setLength(0);
+        int seg = pos; // start of the text not yet copied to quotedText
         boolean escaped = false;
         boolean cr = false;
         int p = pos;
         while (true) {
             if (p == end) {
                 pos = p;
-                if (!fill()) {
+                boolean more = fill();
+                seg -= moved;
+                if (!more) {
                     throw new IOException(String.format("(startline %,d) EOF reached before encapsulated token finished",
                             quoteLine));
                 }
@@ -224,19 +275,27 @@ final class CsvLexer {
                 if (p + 1 == end) {
                     pos = p;
                     fill(); // a look at the next character; at the end of input this quote closes
+                    seg -= moved;
                     p = pos;
                 }
                 if (p + 1 < end && buf[p + 1] == '"') {
-                    quotedText.append(buf, mark, p + 1 - mark);
+                    if (!escaped) {
+                        quotedText.setLength(0);
+                        escaped = true;
+                    }
+                    quotedText.append(buf, seg, p + 1 - seg);
                     p += 2;
-                    mark = p;
-                    escaped = true;
+                    seg = p;
                     cr = false;
                     continue;
                 }
-                String value = escaped ? quotedText.append(buf, mark, p - mark).toString() : text(mark, p);
+                if (escaped) {
+                    add(quotedText.append(buf, seg, p - seg).toString());
+                } else {
+                    add(seg, p);
+                }
                 pos = p + 1;
-                return afterQuote(value);
+                return afterQuote();
             }
             if (ch == '\r') {
                 lines++;
@@ -251,30 +310,23 @@ final class CsvLexer {
         }
     }
 
-    /** After a closing quote: whitespace, then the delimiter, a line end or the end of input. */
-    private boolean afterQuote(String value) throws IOException {
+    /** After a closing quote (its cell already added): whitespace, then the delimiter, a line end or the end of input. */
+    private boolean afterQuote() throws IOException {
         while (true) {
-            if (pos == end) {
-                mark = pos;
-                if (!fill()) {
-                    add(value);
-                    done = true;
-                    return true;
-                }
+            if (pos == end && !fill()) {
+                done = true;
+                return true;
             }
             char ch = buf[pos++];
             if (ch == delimiter) {
-                add(value);
                 return false;
             }
             if (ch == '\n') {
                 lines++;
-                add(value);
                 return true;
             }
             if (ch == '\r') {
                 lines++;
-                add(value);
                 skipLf();
                 return true;
             }
@@ -288,44 +340,70 @@ final class CsvLexer {
 
     /** After a CR: takes an LF right behind it as part of the line end. */
     private void skipLf() throws IOException {
-        if (pos == end) {
-            mark = pos;
-            if (!fill()) {
-                return;
-            }
+        if (pos == end && !fill()) {
+            return;
         }
         if (buf[pos] == '\n') {
             pos++;
         }
     }
 
-    private String text(int from, int to) {
-        return from == to ? "" : new String(buf, from, to - from);
+    private void grow() {
+        int n = size * 2;
+        cells = Arrays.copyOf(cells, n);
+        from = Arrays.copyOf(from, n);
+        to = Arrays.copyOf(to, n);
     }
 
+    /** Adds a cell read as {@code buf[first..last)}. */
+    private void add(int first, int last) {
+        if (size == cells.length) {
+            grow();
+        }
+        from[size] = first;
+        to[size] = last;
+        size++;
+    }
+
+    /** Adds a cell whose text had to be put together ({@code ""} inside quotes). */
     private void add(String cell) {
         if (size == cells.length) {
-            cells = Arrays.copyOf(cells, size * 2);
+            grow();
         }
-        cells[size++] = cell;
+        cells[size] = cell;
+        from[size] = -1;
+        to[size] = -1;
+        size++;
     }
 
     /**
-     * Reads more characters behind {@link #end}, first moving {@code buf[mark..end)} to the front
-     * (and growing the buffer when that is all of it). Adjusts {@link #pos} and {@link #mark}.
+     * Reads more characters behind {@link #end}, first moving the current record
+     * ({@code buf[mark..end)}) to the front, and growing the buffer when that is all of it. Adjusts
+     * {@link #pos}, {@link #mark} and the cells read so far.
+     *
+     * How far they moved is left in {@link #moved}, for the caller's own indices.
      *
      * @return false at the end of the input
      */
     private boolean fill() throws IOException {
+        moved = 0;
         if (eof) {
             return false;
         }
-        if (mark > 0) {
-            System.arraycopy(buf, mark, buf, 0, end - mark);
-            end -= mark;
-            pos -= mark;
-            dropped += mark;
+        int shift = mark;
+        moved = shift;
+        if (shift > 0) {
+            System.arraycopy(buf, shift, buf, 0, end - shift);
+            end -= shift;
+            pos -= shift;
+            dropped += shift;
             mark = 0;
+            for (int i = 0; i < size; i++) {
+                if (from[i] >= 0) {
+                    from[i] -= shift;
+                    to[i] -= shift;
+                }
+            }
         }
         if (end == buf.length) {
             buf = Arrays.copyOf(buf, buf.length * 2);

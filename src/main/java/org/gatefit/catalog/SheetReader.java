@@ -227,6 +227,8 @@ public final class SheetReader {
         final List<Integer> unnamed = new ArrayList<>();
         /** Header position of each schema column, in schema order; -1 when the file lacks it. */
         int[] columnAt;
+        /** {@link Cells#quickChoices} of each schema column, in schema order. */
+        String[][] quickChoices;
         int width;
 
         int position(String column) {
@@ -295,9 +297,11 @@ public final class SheetReader {
             return null;
         }
         l.columnAt = new int[schema.columns().size()];
+        l.quickChoices = new String[l.columnAt.length][];
         for (int i = 0; i < l.columnAt.length; i++) {
             Integer at = l.index.get(schema.columns().get(i).name());
             l.columnAt[i] = at == null ? -1 : at;
+            l.quickChoices[i] = Cells.quickChoices(schema.columns().get(i));
         }
         return l;
     }
@@ -314,6 +318,14 @@ public final class SheetReader {
         for (int ci = 0; ci < columns.size(); ci++) {
             Column c = columns.get(ci);
             int at = l.columnAt[ci];
+            if (at >= 0 && rec.from(at) >= 0) {
+                // A plain number or exact choice straight from the characters, as Cells.parse reads it.
+                Object quick = Cells.parseQuick(c, l.quickChoices[ci], rec.chars(), rec.from(at), rec.to(at), decimalComma);
+                if (quick != null) {
+                    values[ci] = quick;
+                    continue;
+                }
+            }
             String cell = at < 0 ? "" : rec.get(at);
             Object v;
             try {
