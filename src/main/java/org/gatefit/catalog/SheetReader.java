@@ -36,6 +36,8 @@ import java.util.Map;
 public final class SheetReader {
     /** Problems kept per file; the rest are counted. */
     public static final int PROBLEM_CAP = 200;
+    /** Distinct cells remembered per pattern-checked column. */
+    private static final int MEMO_CAP = 256;
 
     /** Receives rows as they are read. */
     public interface Sink {
@@ -229,6 +231,11 @@ public final class SheetReader {
         int[] columnAt;
         /** {@link Cells#quickChoices} of each schema column, in schema order. */
         String[][] quickChoices;
+        /**
+         * Per schema column with a pattern: cells already read and their values (catalogs repeat a
+         * few such values; the pattern match is costly). Cells.parse is a function of the cell text.
+         */
+        Map<String, Object>[] memo;
         int width;
 
         int position(String column) {
@@ -298,10 +305,17 @@ public final class SheetReader {
         }
         l.columnAt = new int[schema.columns().size()];
         l.quickChoices = new String[l.columnAt.length][];
+        @SuppressWarnings("unchecked")
+        Map<String, Object>[] memo = new Map[l.columnAt.length];
+        l.memo = memo;
         for (int i = 0; i < l.columnAt.length; i++) {
-            Integer at = l.index.get(schema.columns().get(i).name());
+            Column c = schema.columns().get(i);
+            Integer at = l.index.get(c.name());
             l.columnAt[i] = at == null ? -1 : at;
-            l.quickChoices[i] = Cells.quickChoices(schema.columns().get(i));
+            l.quickChoices[i] = Cells.quickChoices(c);
+            if (c.type() == ColumnType.TEXT && c.pattern() != null) {
+                l.memo[i] = new HashMap<>();
+            }
         }
         return l;
     }
@@ -327,9 +341,15 @@ public final class SheetReader {
                 }
             }
             String cell = at < 0 ? "" : rec.get(at);
-            Object v;
+            Map<String, Object> memo = l.memo[ci];
+            Object v = memo == null ? null : memo.get(cell);
             try {
-                v = Cells.parse(c, cell, decimalComma);
+                if (v == null) {
+                    v = Cells.parse(c, cell, decimalComma);
+                    if (memo != null && v != null && memo.size() < MEMO_CAP) {
+                        memo.put(cell, v);
+                    }
+                }
             } catch (BadValueException e) {
                 out.add(new Problem(file, line, c.name(), at + 1, cell, e.getMessage())); // an empty cell never fails
                 continue;
