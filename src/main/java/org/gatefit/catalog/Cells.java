@@ -40,6 +40,143 @@ public final class Cells {
         };
     }
 
+    /**
+     * What {@link #parse} gives for a cell held as {@code chars[from..to)}, when that is quick to
+     * tell without making a string of it; null when {@link #parse} must decide. Quick are a plain
+     * number (digits with an optional sign and one decimal mark, at most 15 digits, between ASCII
+     * spaces) within the column's bounds in a NUMBER or INTEGER column, and a CHOICE cell that is
+     * exactly one of {@code choices}. Anything else (empty, units, exponents, other spaces, out of
+     * range, text) is left to {@link #parse}, which also words the problems.
+     *
+     * @param choices the column's choices that read as themselves (already lower case), or null
+     */
+    static Object parseQuick(Column c, String[] choices, char[] chars, int from, int to, boolean decimalComma) {
+        if (c.type() == ColumnType.TEXT) {
+            return null;
+        }
+        while (from < to && isAsciiSpace(chars[from])) {
+            from++;
+        }
+        while (to > from && isAsciiSpace(chars[to - 1])) {
+            to--;
+        }
+        int n = to - from;
+        if (n == 0 || n > 18) {
+            return null;
+        }
+        switch (c.type()) {
+            case TEXT -> {
+                return null;
+            }
+            case CHOICE -> {
+                if (choices != null) {
+                    for (String choice : choices) {
+                        if (choice.length() == n && same(choice, chars, from)) {
+                            return choice;
+                        }
+                    }
+                }
+                return null;
+            }
+            case INTEGER -> {
+                // Units.parseInteger's plain path: an optional sign and digits.
+                int i = chars[from] == '-' || chars[from] == '+' ? from + 1 : from;
+                if (i == to) {
+                    return null;
+                }
+                long v = 0;
+                for (; i < to; i++) {
+                    char ch = chars[i];
+                    if (ch < '0' || ch > '9') {
+                        return null;
+                    }
+                    v = v * 10 + (ch - '0');
+                }
+                if (chars[from] == '-') {
+                    v = -v;
+                }
+                return inBounds(c, v) ? Long.valueOf(v) : null;
+            }
+            case NUMBER -> {
+                // Units.plainDecimal / plainDecimalValue; a comma is the decimal mark only where plainNumber
+                // turns it into a point (no unit, decimal-comma file).
+                boolean comma = decimalComma && c.unit() == null;
+                int i = from;
+                boolean negative = false;
+                if (chars[i] == '-' || chars[i] == '+') {
+                    negative = chars[i] == '-';
+                    i++;
+                }
+                long m = 0;
+                int digits = 0;
+                int fraction = -1;
+                for (; i < to; i++) {
+                    char ch = chars[i];
+                    if (ch >= '0' && ch <= '9') {
+                        m = m * 10 + (ch - '0');
+                        digits++;
+                        if (fraction >= 0) {
+                            fraction++;
+                        }
+                    } else if ((ch == '.' || ch == ',' && comma) && fraction < 0) {
+                        fraction = 0;
+                    } else {
+                        return null;
+                    }
+                }
+                if (digits == 0 || digits > 15) {
+                    return null;
+                }
+                double d = fraction > 0 ? m / Units.exactPow10(fraction) : (double) m;
+                if (negative) {
+                    d = -d;
+                }
+                if (c.unit() != null && d == 0) {
+                    d = 0.0; // Units.parse gives +0 for -0
+                }
+                return inBounds(c, d) ? Double.valueOf(d) : null;
+            }
+        }
+        return null;
+    }
+
+    /** Characters {@link String#strip} removes that are ASCII. */
+    private static boolean isAsciiSpace(char ch) {
+        return ch < 128 && Character.isWhitespace(ch);
+    }
+
+    private static boolean same(String s, char[] chars, int from) {
+        for (int i = 0, n = s.length(); i < n; i++) {
+            if (s.charAt(i) != chars[from + i]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Whether {@link #checkBounds} lets {@code v} pass. */
+    private static boolean inBounds(Column c, double v) {
+        if (c.minimum() != null) {
+            double min = c.minimum();
+            if (c.minExclusive() ? v <= min : v < min) {
+                return false;
+            }
+        }
+        return c.maximum() == null || !(v > c.maximum());
+    }
+
+    /**
+     * The choices of a CHOICE column that {@link #parse} reads as themselves when written exactly
+     * (those already in lower case), for {@link #parseQuick}; null for other columns.
+     */
+    static String[] quickChoices(Column c) {
+        if (c.type() != ColumnType.CHOICE) {
+            return null;
+        }
+        return c.choices().stream().filter(x -> !x.isEmpty() && x.equals(x.toLowerCase(Locale.ROOT))
+                && x.strip().equals(x)).toArray(String[]::new);
+    }
+
     /** Undoes the export's formula neutralisation: a leading apostrophe before a formula character. */
     public static String restoreText(String t) {
         if (t.length() >= 2 && t.charAt(0) == '\'' && (FORMULA_START.indexOf(t.charAt(1)) >= 0 || t.charAt(1) == '\'')) {

@@ -20,15 +20,122 @@ import java.util.Objects;
 public record Row(Kind kind, String key, String file, long line, Map<String, Object> values,
                   Map<String, String> extras) {
 
+    /** The extras of a row without any (shared: read-only). */
+    private static final Map<String, String> NO_EXTRAS = Collections.unmodifiableMap(new LinkedHashMap<>());
+
     public Row {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(key, "key");
-        values = values instanceof Owned ? values : Collections.unmodifiableMap(new LinkedHashMap<>(values));
-        extras = Collections.unmodifiableMap(new LinkedHashMap<>(extras));
-        for (Object v : values.values()) {
-            if (!(v instanceof String || v instanceof Double || v instanceof Long)) {
-                throw new IllegalArgumentException("expected String, Double or Long values, got " + v);
+        extras = extras.isEmpty() ? NO_EXTRAS : Collections.unmodifiableMap(new LinkedHashMap<>(extras));
+        if (values instanceof Slots s) {
+            for (Object v : s.values) { // the same check as below, without an entry per value
+                if (v != null) {
+                    checkType(v);
+                }
             }
+        } else {
+            values = values instanceof Owned ? values : Collections.unmodifiableMap(new LinkedHashMap<>(values));
+            for (Object v : values.values()) {
+                checkType(v);
+            }
+        }
+    }
+
+    private static void checkType(Object v) {
+        if (!(v instanceof String || v instanceof Double || v instanceof Long)) {
+            throw new IllegalArgumentException("expected String, Double or Long values, got " + v);
+        }
+    }
+
+    /**
+     * Hands values held by schema position to a row without a copy (the importer builds one per
+     * row): {@code values[i]} is the value of column {@code i} of {@code schema}, or null when the
+     * row has none. The caller gives up the array. The row's map reads exactly like the one
+     * {@link #owned} gives: read-only, the columns with values in schema order.
+     */
+    static Map<String, Object> bySlot(Schema schema, Object[] values) {
+        if (values.length != schema.columns().size()) {
+            throw new IllegalArgumentException("expected " + schema.columns().size() + " values, got " + values.length);
+        }
+        return new Slots(schema, values);
+    }
+
+    /** A read-only map over values by schema position (see {@link #bySlot}); absent columns are null. */
+    private static final class Slots extends java.util.AbstractMap<String, Object> {
+        private final Schema schema;
+        private final Object[] values;
+        private final int size;
+        private java.util.Set<Map.Entry<String, Object>> entries;
+
+        Slots(Schema schema, Object[] values) {
+            this.schema = schema;
+            this.values = values;
+            int n = 0;
+            for (Object v : values) {
+                if (v != null) {
+                    n++;
+                }
+            }
+            this.size = n;
+        }
+
+        @Override
+        public Object get(Object key) {
+            int i = schema.slot(key);
+            return i < 0 ? null : values[i];
+        }
+
+        @Override
+        public boolean containsKey(Object key) {
+            return get(key) != null;
+        }
+
+        @Override
+        public int size() {
+            return size;
+        }
+
+        @Override
+        public java.util.Set<Map.Entry<String, Object>> entrySet() {
+            if (entries == null) {
+                entries = Collections.unmodifiableSet(new java.util.AbstractSet<>() {
+                    @Override
+                    public java.util.Iterator<Map.Entry<String, Object>> iterator() {
+                        return new java.util.Iterator<>() {
+                            private int next = advance(0);
+
+                            private int advance(int from) {
+                                while (from < values.length && values[from] == null) {
+                                    from++;
+                                }
+                                return from;
+                            }
+
+                            @Override
+                            public boolean hasNext() {
+                                return next < values.length;
+                            }
+
+                            @Override
+                            public Map.Entry<String, Object> next() {
+                                if (next >= values.length) {
+                                    throw new java.util.NoSuchElementException();
+                                }
+                                int i = next;
+                                next = advance(i + 1);
+                                return new java.util.AbstractMap.SimpleImmutableEntry<>(
+                                        schema.columns().get(i).name(), values[i]);
+                            }
+                        };
+                    }
+
+                    @Override
+                    public int size() {
+                        return size;
+                    }
+                });
+            }
+            return entries;
         }
     }
 

@@ -36,12 +36,15 @@ public final class Schema {
     private final List<Column> columns;
     private final Map<String, Column> byName;
     private final Map<String, Unit> units = new java.util.HashMap<>();
+    /** Position of each column by name (see {@link #slot}). */
+    private final Map<String, Integer> slots = new java.util.HashMap<>();
 
     private Schema(Kind kind, List<Column> columns) {
         this.kind = kind;
         this.columns = List.copyOf(columns);
         Map<String, Column> m = new LinkedHashMap<>();
         for (Column c : columns) {
+            slots.put(c.name(), slots.size());
             m.put(c.name(), c);
             if (c.unit() != null) {
                 units.put(c.name(), c.unit());
@@ -168,6 +171,12 @@ public final class Schema {
             }
         }
         throw new IllegalArgumentException("expected a " + kind.id() + " column, got '" + column + "'");
+    }
+
+    /** Position of a column in {@link #columns()}, or -1 for anything that names none (by hash: hot in row reads). */
+    int slot(Object column) {
+        Integer i = slots.get(column);
+        return i == null ? -1 : i;
     }
 
     /** Names of all columns, in order. */

@@ -1,11 +1,9 @@
 package org.gatefit.catalog;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PushbackInputStream;
 import java.io.Reader;
-import java.io.UncheckedIOException;
 import java.nio.charset.CharacterCodingException;
 import java.nio.ByteBuffer;
 import java.nio.CharBuffer;
@@ -21,14 +19,10 @@ import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HexFormat;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
  * Reads a CSV catalog or stage sheet row by row, checks every cell against the schema, and hands
@@ -42,7 +36,8 @@ import org.apache.commons.csv.CSVRecord;
 public final class SheetReader {
     /** Problems kept per file; the rest are counted. */
     public static final int PROBLEM_CAP = 200;
-    private static final int SNIFF_LIMIT = 1 << 16;
+    /** Distinct cells remembered per pattern-checked column. */
+    private static final int MEMO_CAP = 256;
 
     /** Receives rows as they are read. */
     public interface Sink {
@@ -124,13 +119,8 @@ public final class SheetReader {
     }
 
     private Summary read(InputStream in, Sink sink) throws IOException {
-        // The CSV parser closes its reader; the caller owns the stream (and hashes the rest of it).
-        InputStream shielded = new java.io.FilterInputStream(in) {
-            @Override
-            public void close() {
-            }
-        };
-        PushbackInputStream pin = new PushbackInputStream(shielded, 3);
+        // Nothing here closes the stream: the caller owns it (and hashes the rest of it).
+        PushbackInputStream pin = new PushbackInputStream(in, 3);
         byte[] bom = pin.readNBytes(3);
         int keep = bom.length;
         if (bom.length == 3 && (bom[0] & 0xff) == 0xEF && (bom[1] & 0xff) == 0xBB && (bom[2] & 0xff) == 0xBF) {
@@ -145,39 +135,31 @@ public final class SheetReader {
                     "the file is empty (expected a header line naming the columns, then one row per part)"));
         }
         pin.unread(bom, 0, keep);
-        BufferedReader reader = new BufferedReader(new StrictUtf8Reader(pin), 1 << 16);
+        CsvLexer lexer = new CsvLexer(new StrictUtf8Reader(pin));
         char delimiter;
         try {
-            delimiter = sniffDelimiter(reader);
+            delimiter = lexer.sniffDelimiter();
         } catch (CharacterCodingException e) {
             return fatal(null, List.of(), ',', notUtf8(1));
         }
-        CSVFormat format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote('"')
-                .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(false).get();
-        try (CSVParser parser = CSVParser.builder().setReader(reader).setFormat(format).get()) {
-            return readRecords(parser, delimiter, sink);
-        }
+        lexer.delimiter(delimiter);
+        return readRecords(lexer, delimiter, sink);
     }
 
-    private Summary readRecords(CSVParser parser, char delimiter, Sink sink) throws IOException {
-        Iterator<CSVRecord> it = parser.iterator();
-        long prevEnd = 0;
+    private Summary readRecords(CsvLexer lexer, char delimiter, Sink sink) throws IOException {
         // Header: the first non-blank record.
         List<String> header = null;
         long headerLine = 0;
         try {
-            while (it.hasNext()) {
-                CSVRecord rec = it.next();
-                long start = prevEnd + 1;
-                prevEnd = parser.getCurrentLineNumber();
-                if (!blank(rec)) {
-                    header = rec.toList();
-                    headerLine = start;
+            while (lexer.next()) {
+                if (!lexer.blank()) {
+                    header = lexer.toList();
+                    headerLine = lexer.startLine();
                     break;
                 }
             }
-        } catch (UncheckedIOException e) {
-            return fatal(null, List.of(), delimiter, readFailure(e, prevEnd + 1));
+        } catch (IOException e) {
+            return fatal(null, List.of(), delimiter, readFailure(e, lexer.startLine()));
         }
         if (header == null) {
             return fatal(null, List.of(), delimiter, Problem.ofLine(file, 0,
@@ -196,24 +178,21 @@ public final class SheetReader {
         long rejected = 0;
         boolean fatal = false;
         while (true) {
-            CSVRecord rec;
-            long start = prevEnd + 1;
             try {
-                if (!it.hasNext()) {
+                if (!lexer.next()) {
                     break;
                 }
-                rec = it.next();
-            } catch (UncheckedIOException e) {
-                add(readFailure(e, start));
+            } catch (IOException e) {
+                add(readFailure(e, lexer.startLine()));
                 fatal = true;
                 break;
             }
-            prevEnd = parser.getCurrentLineNumber();
-            if (blank(rec)) {
+            long start = lexer.startLine();
+            if (lexer.blank()) {
                 continue;
             }
             List<Problem> rowProblems = new ArrayList<>(2);
-            Row row = parseRow(schema, layout, rec, start, decimalComma, keyColumn, rowProblems);
+            Row row = parseRow(schema, layout, lexer, start, decimalComma, keyColumn, rowProblems);
             if (row != null) {
                 String id = Row.normaliseKey(row.key());
                 Long before = seen.putIfAbsent(id, start);
@@ -228,7 +207,7 @@ public final class SheetReader {
                 rows++;
             } else {
                 rowProblems.forEach(this::add);
-                sink.reject(header, start, rec.toList(), rowProblems);
+                sink.reject(header, start, lexer.toList(), rowProblems);
                 rejected++;
             }
         }
@@ -250,6 +229,13 @@ public final class SheetReader {
         final List<Integer> unnamed = new ArrayList<>();
         /** Header position of each schema column, in schema order; -1 when the file lacks it. */
         int[] columnAt;
+        /** {@link Cells#quickChoices} of each schema column, in schema order. */
+        String[][] quickChoices;
+        /**
+         * Per schema column with a pattern: cells already read and their values (catalogs repeat a
+         * few such values; the pattern match is costly). Cells.parse is a function of the cell text.
+         */
+        Map<String, Object>[] memo;
         int width;
 
         int position(String column) {
@@ -318,14 +304,23 @@ public final class SheetReader {
             return null;
         }
         l.columnAt = new int[schema.columns().size()];
+        l.quickChoices = new String[l.columnAt.length][];
+        @SuppressWarnings("unchecked")
+        Map<String, Object>[] memo = new Map[l.columnAt.length];
+        l.memo = memo;
         for (int i = 0; i < l.columnAt.length; i++) {
-            Integer at = l.index.get(schema.columns().get(i).name());
+            Column c = schema.columns().get(i);
+            Integer at = l.index.get(c.name());
             l.columnAt[i] = at == null ? -1 : at;
+            l.quickChoices[i] = Cells.quickChoices(c);
+            if (c.type() == ColumnType.TEXT && c.pattern() != null) {
+                l.memo[i] = new HashMap<>();
+            }
         }
         return l;
     }
 
-    private Row parseRow(Schema schema, Layout l, CSVRecord rec, long line, boolean decimalComma, String keyColumn,
+    private Row parseRow(Schema schema, Layout l, CsvLexer rec, long line, boolean decimalComma, String keyColumn,
                          List<Problem> out) {
         if (rec.size() != l.width) {
             out.add(Problem.ofLine(file, line, "the row has " + rec.size() + " cells but the header has " + l.width
@@ -333,20 +328,35 @@ public final class SheetReader {
             return null;
         }
         List<Column> columns = schema.columns();
-        LinkedHashMap<String, Object> values = new LinkedHashMap<>(columns.size() * 2); // no rehash per row
+        Object[] values = new Object[columns.size()]; // by schema position: the row's map without a node per value
         for (int ci = 0; ci < columns.size(); ci++) {
             Column c = columns.get(ci);
             int at = l.columnAt[ci];
+            if (at >= 0 && rec.from(at) >= 0) {
+                // A plain number or exact choice straight from the characters, as Cells.parse reads it.
+                Object quick = Cells.parseQuick(c, l.quickChoices[ci], rec.chars(), rec.from(at), rec.to(at), decimalComma);
+                if (quick != null) {
+                    values[ci] = quick;
+                    continue;
+                }
+            }
             String cell = at < 0 ? "" : rec.get(at);
-            Object v;
+            Map<String, Object> memo = l.memo[ci];
+            Object v = memo == null ? null : memo.get(cell);
             try {
-                v = Cells.parse(c, cell, decimalComma);
+                if (v == null) {
+                    v = Cells.parse(c, cell, decimalComma);
+                    if (memo != null && v != null && memo.size() < MEMO_CAP) {
+                        memo.put(cell, v);
+                    }
+                }
             } catch (BadValueException e) {
                 out.add(new Problem(file, line, c.name(), at + 1, cell, e.getMessage())); // an empty cell never fails
                 continue;
             }
             if (v == null && c.defaultFrom() != null) {
-                v = values.get(c.defaultFrom());
+                int from = schema.slot(c.defaultFrom());
+                v = from < 0 ? null : values[from];
             }
             if (v == null && c.defaultValue() != null) {
                 try {
@@ -362,7 +372,7 @@ public final class SheetReader {
                 }
                 continue;
             }
-            values.put(c.name(), v);
+            values[ci] = v;
         }
         for (int i : l.unnamed) {
             if (!rec.get(i).isBlank()) {
@@ -381,7 +391,8 @@ public final class SheetReader {
         if (!out.isEmpty()) {
             return null;
         }
-        return new Row(schema.kind(), values.get(keyColumn).toString(), file, line, Row.owned(values), extras);
+        return new Row(schema.kind(), values[schema.slot(keyColumn)].toString(), file, line, Row.bySlot(schema, values),
+                extras);
     }
 
     private static Kind kindOrNull(List<String> header) {
@@ -406,24 +417,15 @@ public final class SheetReader {
         return null;
     }
 
-    private static boolean blank(CSVRecord rec) {
-        for (int i = 0, n = rec.size(); i < n; i++) { // by index: CSVRecord's iterator copies the record
-            if (!rec.get(i).isBlank()) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private Problem readFailure(UncheckedIOException e, long line) {
-        Throwable c = e.getCause();
+    private Problem readFailure(IOException e, long line) {
+        Throwable c = e;
         while (c != null) {
             if (c instanceof CharacterCodingException) {
                 return notUtf8(line);
             }
             c = c.getCause();
         }
-        String msg = String.valueOf(e.getCause() == null ? e.getMessage() : e.getCause().getMessage());
+        String msg = String.valueOf(e.getMessage());
         if (msg.contains("EOF reached before encapsulated token finished")) {
             return Problem.ofLine(file, line, "a double quote opened in the row starting here is never closed"
                     + " (expected a closing \" before the end of the file)");
@@ -450,48 +452,6 @@ public final class SheetReader {
         if (problems.size() < PROBLEM_CAP) {
             problems.add(p);
         }
-    }
-
-    /** Picks the separator that splits the header line into the most cells (quotes respected). */
-    private static char sniffDelimiter(Reader reader) throws IOException {
-        reader.mark(SNIFF_LIMIT);
-        int comma = 0;
-        int semi = 0;
-        int tab = 0;
-        boolean quoted = false;
-        boolean content = false;
-        for (int i = 0; i < SNIFF_LIMIT; i++) {
-            int ch = reader.read();
-            if (ch < 0) {
-                break;
-            }
-            if (ch == '"') {
-                quoted = !quoted;
-            } else if (!quoted) {
-                if (ch == '\n' || ch == '\r') {
-                    if (content) {
-                        break;
-                    }
-                    continue;
-                }
-                content = true;
-                switch (ch) {
-                    case ',' -> comma++;
-                    case ';' -> semi++;
-                    case '\t' -> tab++;
-                    default -> {
-                    }
-                }
-            }
-        }
-        reader.reset();
-        if (semi > comma && semi >= tab) {
-            return ';';
-        }
-        if (tab > comma && tab > semi) {
-            return '\t';
-        }
-        return ',';
     }
 
     /**

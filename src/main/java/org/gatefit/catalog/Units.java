@@ -136,6 +136,11 @@ public final class Units {
         }
     }
 
+    /** 10^n for 0 ≤ n ≤ 22, exactly. */
+    static double exactPow10(int n) {
+        return EXACT_POW10[n];
+    }
+
     /**
      * The double nearest a {@link #plainDecimal} text, as {@link Double#parseDouble} gives it. With
      * at most 15 digits the digits form an integer below 2^53 and the power of ten is exact, so one
