@@ -48,6 +48,17 @@ public record Row(Kind kind, String key, String file, long line, Map<String, Obj
     }
 
     /**
+     * The value of column {@code position} of the kind's schema, or null when the row has none;
+     * for a row the importer built, an array read (no lookup by name).
+     */
+    public Object valueAt(int position) {
+        if (values instanceof Slots s) {
+            return s.values[position];
+        }
+        return values.get(Schema.of(kind).columns().get(position).name());
+    }
+
+    /**
      * Hands values held by schema position to a row without a copy (the importer builds one per
      * row): {@code values[i]} is the value of column {@code i} of {@code schema}, or null when the
      * row has none. The caller gives up the array. The row's map reads exactly like the one

@@ -19,6 +19,7 @@ import org.apache.lucene.index.IndexableField;
 import org.apache.lucene.index.LeafReader;
 import org.apache.lucene.store.ByteArrayDataInput;
 import org.apache.lucene.store.ByteBuffersDataOutput;
+import org.apache.lucene.store.DataOutput;
 import org.apache.lucene.util.BytesRef;
 import org.apache.lucene.util.NumericUtils;
 import org.gatefit.catalog.Column;
@@ -152,35 +153,38 @@ final class Documents {
         ByteBuffersDataOutput out = SCRATCH.get();
         out.reset();
         try {
-            out.writeByte(SOURCE_VERSION);
-            out.writeString(row.kind().id());
-            out.writeString(row.file() == null ? "" : row.file());
-            out.writeVLong(row.line());
-            List<Column> columns = Schema.of(row.kind()).columns();
-            out.writeVInt(row.values().size());
-            int at = 0;
-            for (Map.Entry<String, Object> e : row.values().entrySet()) {
-                while (!columns.get(at).name().equals(e.getKey())) {
-                    at++; // values are in schema order (checked by toDocument)
-                }
-                Column c = columns.get(at);
-                out.writeVInt(at);
-                switch (c.type()) {
-                    case NUMBER -> out.writeLong(Double.doubleToRawLongBits((Double) e.getValue()));
-                    case INTEGER -> out.writeZLong((Long) e.getValue());
-                    case TEXT, CHOICE -> out.writeString((String) e.getValue());
-                }
-                at++;
-            }
-            out.writeVInt(row.extras().size());
-            for (Map.Entry<String, String> e : row.extras().entrySet()) {
-                out.writeString(e.getKey());
-                out.writeString(e.getValue());
-            }
+            writeSource(row, out);
         } catch (IOException e) {
             throw new IllegalStateException("in-memory output failed", e);
         }
         return out.toArrayCopy();
+    }
+
+    /** Writes {@link #source}'s record to {@code out}. */
+    static void writeSource(Row row, DataOutput out) throws IOException {
+        out.writeByte(SOURCE_VERSION);
+        out.writeString(row.kind().id());
+        out.writeString(row.file() == null ? "" : row.file());
+        out.writeVLong(row.line());
+        List<Column> columns = Schema.of(row.kind()).columns();
+        out.writeVInt(row.values().size());
+        for (int at = 0; at < columns.size(); at++) {
+            Object v = row.valueAt(at);
+            if (v == null) {
+                continue;
+            }
+            out.writeVInt(at);
+            switch (columns.get(at).type()) {
+                case NUMBER -> out.writeLong(Double.doubleToRawLongBits((Double) v));
+                case INTEGER -> out.writeZLong((Long) v);
+                case TEXT, CHOICE -> out.writeString((String) v);
+            }
+        }
+        out.writeVInt(row.extras().size());
+        for (Map.Entry<String, String> e : row.extras().entrySet()) {
+            out.writeString(e.getKey());
+            out.writeString(e.getValue());
+        }
     }
 
     private static final Set<String> SOURCE_ONLY = Set.of(Fields.SOURCE);

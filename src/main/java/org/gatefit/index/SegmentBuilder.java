@@ -23,6 +23,7 @@ import org.apache.lucene.util.BytesRefHash;
 import org.apache.lucene.util.FixedBitSet;
 import org.apache.lucene.util.NumericUtils;
 import org.apache.lucene.util.SmallFloat;
+import org.apache.lucene.util.UnicodeUtil;
 import org.gatefit.catalog.Column;
 import org.gatefit.catalog.ColumnType;
 import org.gatefit.catalog.Kind;
@@ -64,7 +65,7 @@ final class SegmentBuilder {
     private final Map<String, int[]> known = new HashMap<>();
     private int[] docTerms = new int[32];
     /** Stored records, one after the other: part {@code d}'s is {@code source[sourceStart[d] .. sourceStart[d + 1]]}. */
-    private byte[] source;
+    private final Bytes source = new Bytes();
     private int[] sourceStart;
     private FixedBitSet withdrawn;
     private int size;
@@ -98,7 +99,6 @@ final class SegmentBuilder {
         pairTerm = new int[initial * 4];
         pairDoc = new int[initial * 4];
         pairFreq = new int[initial * 4];
-        source = new byte[initial * 256];
         sourceStart = new int[initial + 1];
         withdrawn = new FixedBitSet(initial);
         tokens = new Tokens(analyzer, words);
@@ -111,7 +111,7 @@ final class SegmentBuilder {
         if (size < idOf.length) {
             return;
         }
-        int len = Math.min(capacity, ArrayUtil.oversize(size + 1, Integer.BYTES));
+        int len = (int) Math.min(capacity, 2L * idOf.length); // doubling: each value copied about once
         idOf = Arrays.copyOf(idOf, len);
         norms = Arrays.copyOf(norms, len);
         sourceStart = Arrays.copyOf(sourceStart, len + 1);
@@ -152,21 +152,14 @@ final class SegmentBuilder {
         checkTerm(Fields.ID, id);
         int idInHash = idTerms.add(new BytesRef(id));
         idOf[doc] = idInHash < 0 ? -idInHash - 1 : idInHash; // a withdrawn part shares its id with its successor
-        int at = 0;
         int count = 0;
-        for (Map.Entry<String, Object> e : row.values().entrySet()) {
-            String n = e.getKey();
-            int from = at;
-            while (at < columns.size() && !columns.get(at).name().equals(n)) {
-                at++;
-            }
-            if (at == columns.size()) {
-                throw new IllegalArgumentException("expected the values of a " + kind.id() + " in schema order,"
-                        + " got column " + n + " after " + (from == 0 ? "none" : columns.get(from - 1).name()));
+        for (int at = 0; at < columns.size(); at++) {
+            Object x = row.valueAt(at);
+            if (x == null) {
+                continue;
             }
             Column c = columns.get(at);
             ColumnValues v = values[at];
-            Object x = e.getValue();
             switch (c.type()) {
                 case NUMBER -> ((Numbers) v).set(doc, Double.doubleToRawLongBits((Double) x),
                         NumericUtils.doubleToSortableLong((Double) x));
@@ -181,16 +174,14 @@ final class SegmentBuilder {
                     }
                 }
             }
-            at++;
         }
         endWords(doc, count);
-        byte[] rec = Documents.source(row);
-        int from = sourceStart[doc];
-        if (from + rec.length > source.length) {
-            source = ArrayUtil.grow(source, from + rec.length);
+        try {
+            Documents.writeSource(row, source);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException("in-memory output failed", e);
         }
-        System.arraycopy(rec, 0, source, from, rec.length);
-        sourceStart[doc + 1] = from + rec.length;
+        sourceStart[doc + 1] = source.length;
         size++;
         return doc;
     }
@@ -253,7 +244,7 @@ final class SegmentBuilder {
             }
         }
         return new ColumnSegment(n, infos, postings, numerics, sorted, Fields.ALL, norms,
-                Fields.SOURCE, source, sourceStart, live);
+                Fields.SOURCE, source.bytes, sourceStart, live);
     }
 
     /**
@@ -291,7 +282,7 @@ final class SegmentBuilder {
                 k++;
             }
             if (pairs == pairTerm.length) {
-                int cap = ArrayUtil.oversize(pairs + 1, Integer.BYTES);
+                int cap = 2 * pairs;
                 pairTerm = Arrays.copyOf(pairTerm, cap);
                 pairFreq = Arrays.copyOf(pairFreq, cap);
                 pairDoc = Arrays.copyOf(pairDoc, cap);
@@ -300,6 +291,45 @@ final class SegmentBuilder {
             pairFreq[pairs] = f;
             pairDoc[pairs] = doc;
             pairs++;
+        }
+    }
+
+    /** A growable byte array written as a Lucene {@link org.apache.lucene.store.DataOutput} (the stored records). */
+    private static final class Bytes extends org.apache.lucene.store.DataOutput {
+        byte[] bytes = new byte[1 << 16];
+        int length;
+
+        private byte[] utf8 = new byte[256];
+
+        private void room(int n) {
+            if (length + n > bytes.length) {
+                bytes = Arrays.copyOf(bytes, Math.max(length + n, 2 * bytes.length));
+            }
+        }
+
+        @Override
+        public void writeByte(byte b) {
+            room(1);
+            bytes[length++] = b;
+        }
+
+        @Override
+        public void writeBytes(byte[] b, int offset, int n) {
+            room(n);
+            System.arraycopy(b, offset, bytes, length, n);
+            length += n;
+        }
+
+        /** As {@link org.apache.lucene.store.DataOutput#writeString} (length, then UTF-8), without a BytesRef per string. */
+        @Override
+        public void writeString(String s) throws IOException {
+            int max = UnicodeUtil.maxUTF8Length(s.length());
+            if (max > utf8.length) {
+                utf8 = new byte[Math.max(max, 2 * utf8.length)];
+            }
+            int n = UnicodeUtil.UTF16toUTF8(s, 0, s.length(), utf8);
+            writeVInt(n);
+            writeBytes(utf8, 0, n);
         }
     }
 
