@@ -460,11 +460,14 @@ final class ColumnSegment extends LeafReader {
     private static final class BitsIterator {
         final FixedBitSet bits;
         final int maxDoc;
+        /** Every document has a value (the usual case): no bit to look up. */
+        final boolean dense;
         int doc = -1;
 
         BitsIterator(FixedBitSet bits, int maxDoc, int count) {
             this.bits = bits;
             this.maxDoc = maxDoc;
+            this.dense = count == maxDoc;
         }
 
         int nextDoc() {
@@ -474,6 +477,9 @@ final class ColumnSegment extends LeafReader {
         int advance(int target) {
             if (target >= maxDoc) {
                 return doc = DocIdSetIterator.NO_MORE_DOCS;
+            }
+            if (dense) {
+                return doc = target;
             }
             int d = bits.nextSetBit(target);
             return doc = d >= maxDoc ? DocIdSetIterator.NO_MORE_DOCS : d;
@@ -693,9 +699,18 @@ final class ColumnSegment extends LeafReader {
         private final byte[] min = new byte[Long.BYTES];
         private final byte[] max = new byte[Long.BYTES];
 
+        private boolean bounds;
+
         ColumnPoints(Numeric n, int maxDoc) {
             this.n = n;
             this.maxDoc = maxDoc;
+        }
+
+        /** Least and greatest value, found when first asked (a merge through ColumnCodec never asks). */
+        private void bounds() {
+            if (bounds) {
+                return;
+            }
             long lo = Long.MAX_VALUE;
             long hi = Long.MIN_VALUE;
             for (int d = n.has().nextSetBit(0); d < maxDoc; d = d + 1 < maxDoc ? n.has().nextSetBit(d + 1) : maxDoc) {
@@ -704,6 +719,7 @@ final class ColumnSegment extends LeafReader {
             }
             NumericUtils.longToSortableBytes(lo, min, 0);
             NumericUtils.longToSortableBytes(hi, max, 0);
+            bounds = true;
         }
 
         /**
@@ -711,7 +727,9 @@ final class ColumnSegment extends LeafReader {
          * bytes each) from position {@code at}; returns the position after the last.
          */
         int copyTo(org.apache.lucene.index.MergeState.DocMap map, int[] docs, byte[] packed, int at) {
-            for (int d = n.has().nextSetBit(0); d < maxDoc; d = d + 1 < maxDoc ? n.has().nextSetBit(d + 1) : maxDoc) {
+            boolean dense = n.count() == maxDoc;
+            for (int d = dense ? 0 : n.has().nextSetBit(0); d < maxDoc;
+                 d = dense ? d + 1 : d + 1 < maxDoc ? n.has().nextSetBit(d + 1) : maxDoc) {
                 int to = map.get(d);
                 if (to >= 0) {
                     docs[at] = to;
@@ -747,11 +765,13 @@ final class ColumnSegment extends LeafReader {
 
                 @Override
                 public byte[] getMinPackedValue() {
+                    bounds();
                     return min;
                 }
 
                 @Override
                 public byte[] getMaxPackedValue() {
+                    bounds();
                     return max;
                 }
 
@@ -780,11 +800,13 @@ final class ColumnSegment extends LeafReader {
 
         @Override
         public byte[] getMinPackedValue() {
+            bounds();
             return min;
         }
 
         @Override
         public byte[] getMaxPackedValue() {
+            bounds();
             return max;
         }
 

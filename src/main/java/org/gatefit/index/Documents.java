@@ -153,18 +153,25 @@ final class Documents {
         ByteBuffersDataOutput out = SCRATCH.get();
         out.reset();
         try {
-            writeSource(row, out);
+            writeSource(row, out, sourceHeader(row));
         } catch (IOException e) {
             throw new IllegalStateException("in-memory output failed", e);
         }
         return out.toArrayCopy();
     }
 
-    /** Writes {@link #source}'s record to {@code out}. */
-    static void writeSource(Row row, DataOutput out) throws IOException {
+    /** The start of a row's stored record: layout version, kind and file (the same for every row of a file). */
+    static byte[] sourceHeader(Row row) {
+        ByteBuffersDataOutput out = new ByteBuffersDataOutput();
         out.writeByte(SOURCE_VERSION);
         out.writeString(row.kind().id());
         out.writeString(row.file() == null ? "" : row.file());
+        return out.toArrayCopy();
+    }
+
+    /** Writes {@link #source}'s record to {@code out}, starting with {@code header} ({@link #sourceHeader} of the row). */
+    static void writeSource(Row row, DataOutput out, byte[] header) throws IOException {
+        out.writeBytes(header, 0, header.length);
         out.writeVLong(row.line());
         List<Column> columns = Schema.of(row.kind()).columns();
         out.writeVInt(row.values().size());

@@ -66,6 +66,9 @@ final class SegmentBuilder {
     private int[] docTerms = new int[32];
     /** Stored records, one after the other: part {@code d}'s is {@code source[sourceStart[d] .. sourceStart[d + 1]]}. */
     private final Bytes source = new Bytes();
+    /** The stored records' common start (layout version, kind, file) for {@link #headerFile}. */
+    private byte[] header;
+    private String headerFile;
     private int[] sourceStart;
     private FixedBitSet withdrawn;
     private int size;
@@ -177,7 +180,11 @@ final class SegmentBuilder {
         }
         endWords(doc, count);
         try {
-            Documents.writeSource(row, source);
+            if (row.file() != headerFile) { // a new file (the same string on every row of a file)
+                headerFile = row.file();
+                header = Documents.sourceHeader(row);
+            }
+            Documents.writeSource(row, source, header);
         } catch (IOException e) {
             throw new java.io.UncheckedIOException("in-memory output failed", e);
         }
