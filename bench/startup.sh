@@ -12,6 +12,7 @@ jar=target/gatefit.jar
 cat=$(mktemp -d)/catalog
 java -jar "$jar" --catalog "$cat" import examples/switches.csv examples/drivers.csv >/dev/null
 export XDG_CACHE_HOME="$out/cds-cache"
+rm -rf "$XDG_CACHE_HOME/gatefit" # one archive: the current jar's
 bin/gatefit --version >/dev/null # creates the archive (training run: gatefit demo)
 jsa=$(ls "$XDG_CACHE_HOME"/gatefit/*.jsa)
 sl="--catalog $cat shortlist --switch QND-65G150D --freq 200 --bus 375 --edge 10 --drive 6 --rg 4.7 --rg-off 1 --loop 3 --v-oh 4.6 --v-ol 0.2 --top 5"

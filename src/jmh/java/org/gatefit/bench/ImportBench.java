@@ -30,7 +30,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 2)
+@Warmup(iterations = 5)
 @Measurement(iterations = 3)
 @Fork(1)
 public class ImportBench {

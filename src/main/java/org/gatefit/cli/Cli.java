@@ -4,7 +4,10 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.nio.file.NoSuchFileException;
 import java.time.Clock;
+import java.util.LinkedHashSet;
+import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.index.CatalogBusyException;
@@ -33,21 +36,58 @@ public final class Cli {
     /** As above, with relative paths resolved against {@code workDir} (the demo runs in a temporary folder). */
     static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal,
                               Path workDir) {
+        return create(out, err, env, clock, terminal, workDir, null);
+    }
+
+    /** The subcommands, by name, in the order help lists them. */
+    private static final List<String> COMMANDS = List.of("import", "validate", "info", "find", "show", "export",
+            "shortlist", "explain", "check", "replace", "demo", "completion");
+
+    private static Object command(String name, Context ctx) {
+        return switch (name) {
+            case "import" -> new ImportCommand(ctx);
+            case "validate" -> new ValidateCommand(ctx);
+            case "info" -> new InfoCommand(ctx);
+            case "find" -> new FindCommand(ctx);
+            case "show" -> new ShowCommand(ctx);
+            case "export" -> new ExportCommand(ctx);
+            case "shortlist" -> new ShortlistCommand(ctx);
+            case "explain" -> new ExplainCommand(ctx);
+            case "check" -> new CheckCommand(ctx);
+            case "replace" -> new ReplaceCommand(ctx);
+            case "demo" -> new DemoCommand(ctx);
+            case "completion" -> new CompletionCommand(ctx);
+            default -> throw new IllegalArgumentException("no command " + name);
+        };
+    }
+
+    /**
+     * The subcommands a run with {@code args} can reach: those named anywhere in the arguments
+     * (building a subcommand's model from its annotations is most of picocli's start-up, some
+     * 15 ms each), or every one when none is named (top-level help, a misspelt command, which
+     * picocli then answers with the list) or for {@code completion} (it describes them all).
+     */
+    static Set<String> reachable(String... args) {
+        Set<String> named = new LinkedHashSet<>();
+        for (String a : args) {
+            if (COMMANDS.contains(a)) {
+                named.add(a);
+            }
+        }
+        return named.isEmpty() || named.contains("completion") || named.contains("demo") ? Set.copyOf(COMMANDS) : named;
+    }
+
+    /** @param only the subcommands to build (null: all) */
+    static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal,
+                              Path workDir, Set<String> only) {
         Context ctx = new Context(out, err, env, clock, terminal, workDir);
         GatefitCommand top = new GatefitCommand();
         CommandLine cl = new CommandLine(top);
-        cl.addSubcommand("import", new ImportCommand(ctx));
-        cl.addSubcommand("validate", new ValidateCommand(ctx));
-        cl.addSubcommand("info", new InfoCommand(ctx));
-        cl.addSubcommand("find", new FindCommand(ctx));
-        cl.addSubcommand("show", new ShowCommand(ctx));
-        cl.addSubcommand("export", new ExportCommand(ctx));
-        cl.addSubcommand("shortlist", new ShortlistCommand(ctx));
-        cl.addSubcommand("explain", new ExplainCommand(ctx));
-        cl.addSubcommand("check", new CheckCommand(ctx));
-        cl.addSubcommand("replace", new ReplaceCommand(ctx));
-        cl.addSubcommand("demo", new DemoCommand(ctx));
-        cl.addSubcommand("completion", new CompletionCommand(ctx));
+        for (String name : COMMANDS) {
+            if (only == null || only.contains(name)) {
+                cl.addSubcommand(name, command(name, ctx));
+            }
+        }
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -72,7 +112,8 @@ public final class Cli {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
         // System.console() is non-null only when standard input and output are a terminal.
-        int code = create(out, err, System.getenv(), Clock.systemUTC(), System.console() != null).execute(args);
+        int code = create(out, err, System.getenv(), Clock.systemUTC(), System.console() != null, null, reachable(args))
+                .execute(args);
         out.flush();
         err.flush();
         return code;

@@ -11,8 +11,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Runs gatefit through {@link Cli#create} as {@code main} does, with captured streams, an empty
- * environment and a fixed clock.
+ * Runs gatefit through {@link Cli#create} as {@code main} does (building only the subcommands the
+ * arguments name, {@link Cli#reachable}), with captured streams, an empty environment and a fixed
+ * clock.
  *
  * @param exit exit code
  * @param out  standard output
@@ -32,6 +33,18 @@ record CliRun(int exit, String out, String err) {
 
     /** {@code gatefit ARGS...} with the given environment. */
     static CliRun raw(Map<String, String> env, String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        PrintWriter o = new PrintWriter(out, true);
+        PrintWriter e = new PrintWriter(err, true);
+        int code = Cli.create(o, e, env, CLOCK, false, null, Cli.reachable(args)).execute(args);
+        o.flush();
+        e.flush();
+        return new CliRun(code, out.toString(), err.toString());
+    }
+
+    /** {@code gatefit ARGS...} with every subcommand built. */
+    static CliRun full(Map<String, String> env, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         PrintWriter o = new PrintWriter(out, true);
