@@ -25,5 +25,5 @@ hyperfine -N --warmup 2 --runs "$runs" --export-markdown "$out/startup.md" --exp
   -n "shortlist appcds" "java -XX:SharedArchiveFile=$jsa -Xlog:cds=off -jar $jar $sl" \
   -n "shortlist appcds+c1" "java -XX:SharedArchiveFile=$jsa -Xlog:cds=off -XX:TieredStopAtLevel=1 -jar $jar $sl" \
   -n "shortlist bin/gatefit" "bin/gatefit $sl" \
-  -n "shortlist bin/gatefit c1" "env GATEFIT_JAVA_OPTS=-XX:TieredStopAtLevel=1 bin/gatefit $sl"
+  -n "shortlist bin/gatefit full jit" "env GATEFIT_JIT=full bin/gatefit $sl"
 echo "load after: $(uptime)" | tee -a "$out/startup.load"
