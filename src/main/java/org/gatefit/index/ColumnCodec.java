@@ -176,7 +176,7 @@ final class ColumnCodec extends FilterCodec {
 
         PointValues asValues() {
             SortableTree tree = this;
-            return new PointValues() {
+            return new ColumnSegment.LongPoints() {
                 @Override
                 public PointTree getPointTree() {
                     return tree;
@@ -190,21 +190,6 @@ final class ColumnCodec extends FilterCodec {
                 @Override
                 public byte[] getMaxPackedValue() {
                     throw new UnsupportedOperationException();
-                }
-
-                @Override
-                public int getNumDimensions() {
-                    return 1;
-                }
-
-                @Override
-                public int getNumIndexDimensions() {
-                    return 1;
-                }
-
-                @Override
-                public int getBytesPerDimension() {
-                    return Long.BYTES;
                 }
 
                 @Override

@@ -693,7 +693,25 @@ final class ColumnSegment extends LeafReader {
     }
 
     /** All points of a column as one leaf (the merge visits them all; the codec builds the tree). */
-    static final class ColumnPoints extends PointValues {
+    /** One-dimensional points of 8 bytes (a sortable long), as every number column indexes them. */
+    abstract static class LongPoints extends PointValues {
+        @Override
+        public final int getNumDimensions() {
+            return 1;
+        }
+
+        @Override
+        public final int getNumIndexDimensions() {
+            return 1;
+        }
+
+        @Override
+        public final int getBytesPerDimension() {
+            return Long.BYTES;
+        }
+    }
+
+    static final class ColumnPoints extends LongPoints {
         private final Numeric n;
         private final int maxDoc;
         private final byte[] min = new byte[Long.BYTES];
@@ -808,21 +826,6 @@ final class ColumnSegment extends LeafReader {
         public byte[] getMaxPackedValue() {
             bounds();
             return max;
-        }
-
-        @Override
-        public int getNumDimensions() {
-            return 1;
-        }
-
-        @Override
-        public int getNumIndexDimensions() {
-            return 1;
-        }
-
-        @Override
-        public int getBytesPerDimension() {
-            return Long.BYTES;
         }
 
         @Override
