@@ -783,19 +783,17 @@ final class ColumnSegment extends LeafReader {
 
                 @Override
                 public byte[] getMinPackedValue() {
-                    bounds();
-                    return min;
+                    return ColumnPoints.this.getMinPackedValue();
                 }
 
                 @Override
                 public byte[] getMaxPackedValue() {
-                    bounds();
-                    return max;
+                    return ColumnPoints.this.getMaxPackedValue();
                 }
 
                 @Override
                 public long size() {
-                    return n.count();
+                    return ColumnPoints.this.size();
                 }
 
                 @Override
