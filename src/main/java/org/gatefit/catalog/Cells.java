@@ -194,7 +194,22 @@ public final class Cells {
         return t;
     }
 
+    /**
+     * Longest text, in UTF-8 bytes, of a column that is indexed as one term (every TEXT column but
+     * the words-only ones): Lucene's limit for a term or a sorted value ({@code
+     * IndexWriter.MAX_TERM_LENGTH}). Words-only texts have no such limit (their words are split at
+     * 255 characters).
+     */
+    public static final int MAX_TERM_BYTES = 32_766;
+
     private static String text(Column c, String t) throws BadValueException {
+        if (!c.wordsOnly() && t.length() * 3L > MAX_TERM_BYTES) {
+            int bytes = t.getBytes(java.nio.charset.StandardCharsets.UTF_8).length;
+            if (bytes > MAX_TERM_BYTES) {
+                throw new BadValueException("the text is " + bytes + " bytes long in UTF-8 (expected at most "
+                        + MAX_TERM_BYTES + ": the catalog indexes " + c.name() + " as one term)");
+            }
+        }
         String v = restoreText(t);
         if (c.pattern() != null) {
             v = v.toLowerCase(Locale.ROOT);

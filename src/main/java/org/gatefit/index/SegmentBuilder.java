@@ -42,7 +42,11 @@ import org.gatefit.catalog.Schema;
  * same id in the same import replaces it, and the withdrawn document is not written.
  */
 final class SegmentBuilder {
-    /** Longest term or sorted value Lucene accepts, in UTF-8 bytes ({@link IndexWriter#MAX_TERM_LENGTH}). */
+    /**
+     * Longest term or sorted value Lucene accepts, in UTF-8 bytes ({@link IndexWriter#MAX_TERM_LENGTH}).
+     * The reader refuses longer cells first ({@code Cells.MAX_TERM_BYTES}, the same figure); this is
+     * the last guard for rows made elsewhere.
+     */
     static final int MAX_TERM_BYTES = IndexWriter.MAX_TERM_LENGTH;
 
     private final Kind kind;

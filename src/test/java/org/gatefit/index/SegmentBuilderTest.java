@@ -124,6 +124,32 @@ class SegmentBuilderTest {
         assertTrue(e.getMessage().contains("maker"), e.getMessage());
     }
 
+    @Test
+    void theReaderRefusesWhatLuceneWouldRefuseAndNoMore() {
+        // Lucene's own figure (IndexWriter.MAX_TERM_LENGTH) is the reader's limit
+        assertEquals(IndexWriter.MAX_TERM_LENGTH, org.gatefit.catalog.Cells.MAX_TERM_BYTES);
+        assertEquals(IndexWriter.MAX_TERM_LENGTH, SegmentBuilder.MAX_TERM_BYTES);
+    }
+
+    @Test
+    void anOverlongTextCellIsABadCellWithItsPlaceAndALongDescriptionIsNot() throws Exception {
+        Path dir = java.nio.file.Files.createTempDirectory("long-text");
+        Path csv = dir.resolve("long.csv");
+        String header = "part_number,maker,topology,input_polarity,i_source_a,i_sink_a,v_supply_min_v,v_supply_max_v,description\n";
+        // "é" is two bytes in UTF-8: 16,384 of them are 32,768 bytes, two over the limit
+        java.nio.file.Files.writeString(csv, header
+                + "TST-D1,Testmaker,low-side,non-inverting,2,3,10,20," + "word ".repeat(20_000) + "\n"
+                + "TST-D2," + "é".repeat(16_384) + ",low-side,non-inverting,2,3,10,20,short\n");
+        org.gatefit.catalog.CatalogDataException e = assertThrows(org.gatefit.catalog.CatalogDataException.class,
+                () -> new Importer(dir.resolve("cat"), java.time.Clock.systemUTC()).run(List.of(csv), List.of("long.csv"),
+                        new Importer.Options(null, false, null), n -> { }));
+        assertEquals(1, e.problems().size(), e.getMessage());
+        org.gatefit.catalog.Problem p = e.problems().get(0);
+        assertEquals(3, p.line(), "the second row is on line 3");
+        assertEquals("maker", p.column());
+        assertTrue(p.message().contains("32768 bytes") && p.message().contains("32766"), p.message());
+    }
+
     @Property(tries = 60)
     void randomRowsIndexAlike(@ForAll("rows") List<Map<String, Object>> specs) throws IOException {
         List<Row> rows = new ArrayList<>();
