@@ -430,7 +430,7 @@ public final class SheetReader {
             return Problem.ofLine(file, line, "a double quote opened in the row starting here is never closed"
                     + " (expected a closing \" before the end of the file)");
         }
-        if (msg.contains("invalid char between encapsulated token and delimiter")) {
+        if (msg.contains("Invalid character between encapsulated token and delimiter")) {
             return Problem.ofLine(file, line, "text follows a closing double quote in the row starting here"
                     + " (expected a separator after a quoted value; write a quote inside a value as \"\")");
         }
