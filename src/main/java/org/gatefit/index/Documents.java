@@ -32,6 +32,11 @@ import org.gatefit.catalog.Schema;
  * Maps catalog rows to Lucene documents and back (see {@link Fields} for the field types). A row
  * is read back from the one stored {@link Fields#SOURCE} record that holds all its values (one
  * stored field per part, not one per column); scans read the doc values instead.
+ *
+ * <p>{@link #toDocument} is the layout's definition as one Lucene document: the import writes the
+ * same fields column by column ({@link SegmentBuilder}), and {@code SegmentBuilderTest} indexes
+ * rows both ways, this one through Lucene's own {@code IndexWriter}, and requires equal segments.
+ * Change the layout here and in the builder together.
  */
 final class Documents {
     /** A one-dimensional point and a numeric doc value in one field (as Lucene's own {@code LongField}). */
@@ -85,7 +90,12 @@ final class Documents {
         }
     }
 
-    /** @param id the row's {@link Fields#id} (the pipeline has it already) */
+    /**
+     * A part as one document, field for field what {@link SegmentBuilder} writes (the reference
+     * {@code SegmentBuilderTest} holds the builder to).
+     *
+     * @param id the row's {@link Fields#id}
+     */
     static Document toDocument(Row row, String id) {
         Document d = new Document();
         d.add(new StringField(Fields.ID, id, Field.Store.NO));
