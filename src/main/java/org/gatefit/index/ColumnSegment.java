@@ -95,7 +95,7 @@ final class ColumnSegment extends LeafReader {
          *
          * @param freqs frequencies, or null for a keyword field (documents only)
          */
-        static Postings of(BytesRefHash hash, int[] pairTerm, int[] pairDoc, int[] freqs, int pairs, boolean withFreqs) {
+        static Postings of(BytesRefHash hash, int[] pairTerm, int[] pairDoc, int[] freqs, int pairs) {
             int terms = hash.size();
             BytesRef[] bytes = new BytesRef[terms];
             int[] sortedIds = hash.sort(); // term ids in byte order (the hash is read-only afterwards)
@@ -113,7 +113,7 @@ final class ColumnSegment extends LeafReader {
             }
             int[] fill = java.util.Arrays.copyOf(start, terms);
             int[] docs = new int[pairs];
-            int[] f = withFreqs ? new int[pairs] : null;
+            int[] f = freqs == null ? null : new int[pairs];
             int docCount = 0;
             int lastDoc = -1;
             for (int p = 0; p < pairs; p++) {

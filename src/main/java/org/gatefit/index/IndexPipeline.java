@@ -98,15 +98,11 @@ final class IndexPipeline implements AutoCloseable {
     private boolean closed;
 
     /**
-     * @param threads   segments written at once
-     * @param chunkRows most rows per segment
+     * @param threads   segments written at once (at least one; the importer checks)
+     * @param chunkRows most rows per segment (at least one)
      */
     IndexPipeline(IndexWriter writer, DirectoryReader committed, Importer.Listener listener, int threads, int chunkRows)
             throws IOException {
-        if (threads < 1 || chunkRows < 1) {
-            throw new IllegalArgumentException("expected at least one thread and one row per chunk, got " + threads
-                    + " and " + chunkRows);
-        }
         this.writer = writer;
         this.listener = listener;
         this.chunkRows = chunkRows;

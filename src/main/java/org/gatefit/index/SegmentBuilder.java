@@ -95,7 +95,7 @@ final class SegmentBuilder {
         for (int i = 0; i < columns.size(); i++) {
             Column c = columns.get(i);
             values[i] = switch (c.type()) {
-                case NUMBER, INTEGER -> new Numbers(c.name(), Math.min(capacity, INITIAL));
+                case NUMBER, INTEGER -> new Numbers(Math.min(capacity, INITIAL));
                 case TEXT, CHOICE -> c.wordsOnly() ? null
                         : new Texts(c.name(), Math.min(capacity, INITIAL), !c.name().equals(PartNumberQuery.FIELD));
             };
@@ -128,14 +128,6 @@ final class SegmentBuilder {
                 v.grow(len);
             }
         }
-    }
-
-    Kind kind() {
-        return kind;
-    }
-
-    int size() {
-        return size;
     }
 
     boolean full() {
@@ -221,7 +213,7 @@ final class SegmentBuilder {
             docs[d] = d;
         }
         infos.add(keyword(Fields.ID, infos.size(), false));
-        postings.put(Fields.ID, ColumnSegment.Postings.of(idTerms, idOf, docs, null, n, false));
+        postings.put(Fields.ID, ColumnSegment.Postings.of(idTerms, idOf, docs, null, n));
         infos.add(keyword(Fields.KIND, infos.size(), false));
         postings.put(Fields.KIND, ColumnSegment.Postings.everyDoc(new BytesRef(kind.id()), n));
 
@@ -245,7 +237,7 @@ final class SegmentBuilder {
         }
         infos.add(storedOnly(Fields.SOURCE, infos.size()));
         infos.add(text(Fields.ALL, infos.size()));
-        postings.put(Fields.ALL, ColumnSegment.Postings.of(words, pairTerm, pairDoc, pairFreq, pairs, true));
+        postings.put(Fields.ALL, ColumnSegment.Postings.of(words, pairTerm, pairDoc, pairFreq, pairs));
         FixedBitSet live = null;
         if (withdrawn.cardinality() > 0) {
             live = new FixedBitSet(n);
@@ -406,14 +398,12 @@ final class SegmentBuilder {
 
     /** A NUMBER or INTEGER column: point (sortable long) and numeric doc value of each part that has one. */
     private static final class Numbers extends ColumnValues {
-        final String name;
         long[] docValue;
         long[] sortable;
         FixedBitSet has;
         int count;
 
-        Numbers(String name, int capacity) {
-            this.name = name;
+        Numbers(int capacity) {
             docValue = new long[capacity];
             sortable = new long[capacity];
             has = new FixedBitSet(capacity);
@@ -518,7 +508,7 @@ final class SegmentBuilder {
                     k++;
                 }
             }
-            return ColumnSegment.Postings.of(terms, pairTerm, pairDoc, null, count, false);
+            return ColumnSegment.Postings.of(terms, pairTerm, pairDoc, null, count);
         }
     }
 

@@ -33,23 +33,20 @@ record CliRun(int exit, String out, String err) {
 
     /** {@code gatefit ARGS...} with the given environment. */
     static CliRun raw(Map<String, String> env, String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        PrintWriter o = new PrintWriter(out, true);
-        PrintWriter e = new PrintWriter(err, true);
-        int code = Cli.create(o, e, env, CLOCK, false, null, Cli.reachable(args)).execute(args);
-        o.flush();
-        e.flush();
-        return new CliRun(code, out.toString(), err.toString());
+        return run(env, Cli.reachable(args), args);
     }
 
     /** {@code gatefit ARGS...} with every subcommand built. */
     static CliRun full(Map<String, String> env, String... args) {
+        return run(env, null, args);
+    }
+
+    private static CliRun run(Map<String, String> env, java.util.Set<String> only, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         PrintWriter o = new PrintWriter(out, true);
         PrintWriter e = new PrintWriter(err, true);
-        int code = Cli.create(o, e, env, CLOCK).execute(args);
+        int code = Cli.create(o, e, env, CLOCK, false, null, only).execute(args);
         o.flush();
         e.flush();
         return new CliRun(code, out.toString(), err.toString());
