@@ -31,11 +31,13 @@ public final class Eng {
         int e3 = (int) Math.floor(Math.log10(Math.abs(v)) / 3);
         e3 = Math.max(-5, Math.min(3, e3));
         double scaled = v / Math.pow(10, 3 * e3);
-        if (Math.abs(Double.parseDouble(num(scaled))) >= 1000 && e3 < 3) {
+        String digits = num(scaled);
+        // 999.5 and up may print as 1000: one prefix up (below 999.5 it cannot round to 1000).
+        if (e3 < 3 && Math.abs(scaled) >= 999.5 && Math.abs(Double.parseDouble(digits)) >= 1000) {
             e3++;
-            scaled = v / Math.pow(10, 3 * e3);
+            digits = num(v / Math.pow(10, 3 * e3));
         }
-        return num(scaled) + " " + PREFIX[e3 + 5] + unit;
+        return digits + " " + PREFIX[e3 + 5] + unit;
     }
 
     /** Three significant digits, trailing zeros dropped. */
@@ -51,8 +53,49 @@ public final class Eng {
         // Same digits as String.format("%.nf") (half-up on the shortest decimal form of v) with
         // trailing zeros dropped, without a Formatter and two regexes per number: messages are
         // built for every pair of a shortlist, and this was its hot spot.
+        double x = a * SCALE[digits];
+        if (x < 1e7) {
+            // a·10^n is within 1e-8 of the shortest decimal form times 10^n here (both within
+            // half an ulp), so away from a tie (.5) both round to the same integer.
+            double whole = Math.floor(x);
+            double frac = x - whole;
+            if (Math.abs(frac - 0.5) > 1e-6) {
+                return plain(v < 0, (long) whole + (frac > 0.5 ? 1 : 0), digits);
+            }
+        }
         BigDecimal b = BigDecimal.valueOf(v).setScale(digits, RoundingMode.HALF_UP);
         return b.signum() == 0 ? "0" : b.stripTrailingZeros().toPlainString();
+    }
+
+    private static final double[] SCALE = {1, 10, 100, 1000};
+    private static final long[] TENS = {1, 10, 100, 1000};
+
+    /** {@code m / 10^digits} written out, trailing zeros of the fraction dropped. */
+    private static String plain(boolean negative, long m, int digits) {
+        if (m == 0) {
+            return "0";
+        }
+        long whole = m / TENS[digits];
+        long frac = m % TENS[digits];
+        StringBuilder sb = new StringBuilder(12);
+        if (negative) {
+            sb.append('-');
+        }
+        sb.append(whole);
+        if (frac != 0) {
+            int d = digits;
+            while (frac % 10 == 0) {
+                frac /= 10;
+                d--;
+            }
+            sb.append('.');
+            String f = Long.toString(frac);
+            for (int i = f.length(); i < d; i++) {
+                sb.append('0');
+            }
+            sb.append(f);
+        }
+        return sb.toString();
     }
 
     /** A percentage of a fraction: 0.934 → 93.4 %. */

@@ -61,15 +61,31 @@ public final class PairEvaluator {
     public static final class Ranking {
         private final Prepared p;
         private final Calc c;
+        private final boolean scoreFailing;
         private Verdict verdict;
         private double score;
 
+        /** A ranking that scores every driver, failing ones included. */
         public Ranking(Prepared p) {
-            this.p = p;
-            this.c = new Calc(p, false);
+            this(p, true);
         }
 
-        /** Ranks one driver; {@link #verdict()} and {@link #score()} then hold its outcome. */
+        /**
+         * @param scoreFailing whether a failing driver gets its score; when false, the rules after
+         *                     the first that fails are not run (the verdict is fail whatever they
+         *                     say) and {@link #score()} is NaN for it, for a shortlist that lists
+         *                     no failing driver but counts them
+         */
+        public Ranking(Prepared p, boolean scoreFailing) {
+            this.p = p;
+            this.c = new Calc(p, false);
+            this.scoreFailing = scoreFailing;
+        }
+
+        /**
+         * Ranks one driver; {@link #verdict()} and {@link #score()} then hold its outcome (the score
+         * NaN for a failing driver when failing drivers are not scored).
+         */
         public void rank(DriverPart d) {
             if (!p.s.nChannel()) {
                 PairResult r = pChannel(d, p.s, p.op, p.m);
@@ -86,6 +102,11 @@ public final class PairEvaluator {
                 Verdict rv = ch == QUICK ? c.lastVerdict : ch.verdict();
                 double rs = ch == QUICK ? c.lastScore : ch.score();
                 v = v.and(rv);
+                if (v == Verdict.FAIL && !scoreFailing) {
+                    verdict = Verdict.FAIL;
+                    score = Double.NaN;
+                    return;
+                }
                 sum += rule.weight() * rs;
                 w += rule.weight();
             }

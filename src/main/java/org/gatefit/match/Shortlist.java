@@ -244,8 +244,8 @@ public final class Shortlist {
             int warn;
             int fail;
 
-            Tally(PairEvaluator.Prepared p) {
-                ranking = new PairEvaluator.Ranking(p);
+            Tally(PairEvaluator.Prepared p, boolean all) {
+                ranking = new PairEvaluator.Ranking(p, all); // failing drivers are only counted unless all are listed
             }
         }
 
@@ -298,7 +298,7 @@ public final class Shortlist {
         public void accept(DriverPart d) {
             Tally t = tally;
             if (t == null) {
-                t = new Tally(prepared);
+                t = new Tally(prepared, all);
                 tally = t;
             }
             t.ranking.rank(d);

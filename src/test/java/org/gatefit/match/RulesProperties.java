@@ -129,6 +129,16 @@ class RulesProperties {
         bare.rank(d);
         assertEquals(full.verdict(), bare.verdict(), "verdict without check objects");
         assertEquals(full.score(), bare.score(), 0.0, "score without check objects");
+        // A shortlist that lists no failing driver stops at the first failing rule: the same
+        // verdict, and the same score for every driver it can list.
+        PairEvaluator.Ranking counting = new PairEvaluator.Ranking(PairEvaluator.prepare(s, op, Margins.DEFAULT), false);
+        counting.rank(d);
+        assertEquals(full.verdict(), counting.verdict(), "verdict when failing drivers are only counted");
+        if (full.verdict() == Verdict.FAIL) {
+            assertTrue(Double.isNaN(counting.score()), "a failing driver is not scored: " + counting.score());
+        } else {
+            assertEquals(full.score(), counting.score(), 0.0, "score of a driver that can be listed");
+        }
         for (int i = 0; i < full.checks().size(); i++) {
             assertEquals(full.checks().get(i).rule(), quick.checks().get(i).rule());
             assertEquals(full.checks().get(i).verdict(), quick.checks().get(i).verdict(), full.checks().get(i).rule().id());
