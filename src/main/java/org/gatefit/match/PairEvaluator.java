@@ -1106,12 +1106,10 @@ public final class PairEvaluator {
             qSwing = p.qSwing;
             qEstimated = p.qEstimated;
             qTotal = p.qTotal;
-            DriveCurrent.DriverResistance src = DriveCurrent.outputResistance(d.rSource(), swing, d.iSource());
-            DriveCurrent.DriverResistance snk = DriveCurrent.outputResistance(d.rSink(), swing, d.iSink());
-            rSrc = src.ohms();
-            rSnk = snk.ohms();
-            rSrcEstimated = src.estimated();
-            rSnkEstimated = snk.estimated();
+            rSrc = DriveCurrent.outputOhms(d.rSource(), swing, d.iSource());
+            rSnk = DriveCurrent.outputOhms(d.rSink(), swing, d.iSink());
+            rSrcEstimated = Double.isNaN(d.rSource());
+            rSnkEstimated = Double.isNaN(d.rSink());
             rOnTot = rSrc + (op.rG() + rInt) / n;
             rOffTot = rSnk + (op.rGOff() + rInt) / n;
             // Q_g is a required column, but a part built elsewhere may lack it: every figure that
@@ -1130,14 +1128,20 @@ public final class PairEvaluator {
                 }
             }
             if (qKnown && rOnTot > 0 && rOffTot > 0) {
-                pGate = detail ? GatePower.total(qTotal, swing, op.fSw()) : Double.NaN;
-                GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
-                        rInt / n);
                 double hs = op.highSide() && d.topology().bootstrapped() && !Double.isNaN(d.iQbs())
                         ? GatePower.highSideQuiescent(op.vDrive(), d.iQbs()) : 0;
-                pDriver = split.driver() + hs;
-                pExternal = split.external();
-                pInternal = split.internal();
+                if (detail) {
+                    pGate = GatePower.total(qTotal, swing, op.fSw());
+                    GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n,
+                            op.rGOff() / n, rInt / n);
+                    pDriver = split.driver() + hs;
+                    pExternal = split.external();
+                    pInternal = split.internal();
+                } else {
+                    // Only the driver's share is ruled on (driver-power); the others are figures.
+                    pDriver = GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
+                            rInt / n) + hs;
+                }
             }
             // The gate-loop figures and the recommended resistor are shown, never ruled on: skipped while ranking.
             if (detail && !Double.isNaN(s.cIss()) && s.cIss() > 0) {

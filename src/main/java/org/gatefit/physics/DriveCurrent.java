@@ -82,13 +82,22 @@ public final class DriveCurrent {
      */
     public static DriverResistance outputResistance(double catalogResistance, double supply,
             double ratedPeak) {
+        return new DriverResistance(outputOhms(catalogResistance, supply, ratedPeak),
+                !Require.given(catalogResistance));
+    }
+
+    /**
+     * {@link #outputResistance}'s ohms without its object (it is estimated exactly when
+     * {@code catalogResistance} is NaN), for ranking, which computes it for every candidate.
+     */
+    public static double outputOhms(double catalogResistance, double supply, double ratedPeak) {
         if (Require.given(catalogResistance)) {
             Require.nonNegative("driver output resistance", "Ω", catalogResistance);
-            return new DriverResistance(catalogResistance, false);
+            return catalogResistance;
         }
         Require.positive("driver supply", "V", supply);
         Require.positive("rated peak current", "A", ratedPeak);
-        return new DriverResistance(supply / ratedPeak, true);
+        return supply / ratedPeak;
     }
 
     /**

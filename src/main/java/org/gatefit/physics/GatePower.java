@@ -56,9 +56,26 @@ public final class GatePower {
         double off = DriveCurrent.totalResistance(rSink, rGateOff, rGateInternal);
         Require.positive("turn-on loop resistance", "Ω", on);
         Require.positive("turn-off loop resistance", "Ω", off);
-        return new Split(half * (rSource / on + rSink / off),
+        return new Split(driverShare(gateCharge, swing, frequency, rSource, rSink, rGateOn, rGateOff, rGateInternal),
                 half * (rGateOn / on + rGateOff / off),
                 half * rGateInternal * (1 / on + 1 / off));
+    }
+
+    /**
+     * {@link Split#driver()} alone, without the split's object: the driver's share of the gate
+     * power, {@code ½·Q_g·ΔV·f·(R_source/R_on + R_sink/R_off)}, W. Ranking computes it for every
+     * candidate; {@link #split} uses it, so both give the same bits. Same arguments and checks.
+     */
+    public static double driverShare(double gateCharge, double swing, double frequency, double rSource,
+            double rSink, double rGateOn, double rGateOff, double rGateInternal) {
+        double half = total(gateCharge, swing, frequency) / 2;
+        double on = DriveCurrent.totalResistance(rSource, rGateOn, rGateInternal);
+        double off = DriveCurrent.totalResistance(rSink, rGateOff, rGateInternal);
+        Require.positive("turn-on loop resistance", "Ω", on);
+        Require.positive("turn-off loop resistance", "Ω", off);
+        double share = half * (rSource / on + rSink / off);
+        Require.nonNegative("driver power", "W", share);
+        return share;
     }
 
     /** Quiescent power {@code V_DD·I_DD}, W. */
