@@ -25,14 +25,15 @@ import org.openjdk.jmh.annotations.Warmup;
  * Import throughput: one {@link Importer#run} of {@code rows} synthetic rows (half switches, half
  * drivers, two CSV files) into an empty catalog, all-or-nothing mode, one commit. Single shot per
  * iteration; rows/s = rows / the reported seconds. The CSVs are generated once and cached.
- * {@code -p rows=1000000} for a million rows (about a minute per iteration on 2 cores).
+ * {@code -p rows=1000000} for a million rows (6–15 s per iteration on 2 cores). Ten warm-ups: the JIT
+ * settles after about eight imports of 100,000 rows. Forked with the collector {@code bin/gatefit} uses.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 5)
+@Warmup(iterations = 10)
 @Measurement(iterations = 3)
-@Fork(1)
+@Fork(value = 1, jvmArgsAppend = {"-XX:+UseParallelGC"}) // the collector bin/gatefit runs with
 public class ImportBench {
     @Param({"10000", "100000"})
     public long rows;

@@ -111,7 +111,7 @@ public final class PairEvaluator {
                 w += rule.weight();
             }
             verdict = v.forPair();
-            score = Score.combine(sum, w, d, p.s, verdict);
+            score = Score.combine(sum, w, c.driverLife().availability, p.switchLife.availability, verdict);
         }
 
         public Verdict verdict() {
@@ -831,15 +831,48 @@ public final class PairEvaluator {
 
     /** The lifecycle rule while ranking: verdict and sub-score only. */
     private static Check quickLifecycle(Calc c) {
-        Verdict v = lifecycleVerdict(c.d.lifecycle(), c.d.stock()).and(lifecycleVerdict(c.s.lifecycle(), c.s.stock()));
-        return c.quick(Rule.LIFECYCLE, v, lifecycleScore(c.d, c.s, v));
+        Life d = c.driverLife();
+        Life s = c.p.switchLife;
+        Verdict v = d.verdict.and(s.verdict);
+        return c.quick(Rule.LIFECYCLE, v, lifecycleScore(d.noted || s.noted, v));
     }
 
     /** Sub-score of the lifecycle rule: 1 with nothing to note, else by the verdict (the worded check's table). */
     private static double lifecycleScore(DriverPart d, SwitchPart s, Verdict v) {
         boolean noted = !d.lifecycle().equals("active") || !s.lifecycle().equals("active") || d.stock() == 0
                 || s.stock() == 0;
+        return lifecycleScore(noted, v);
+    }
+
+    private static double lifecycleScore(boolean noted, Verdict v) {
         return !noted ? 1 : v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4;
+    }
+
+    /**
+     * One part's lifecycle and stock as the lifecycle rule ({@link #lifecycleVerdict}) and the score
+     * ({@link Score#availability}) read them: worked out once per switch and once per distinct
+     * lifecycle text while ranking, rather than matching the text three times per driver.
+     */
+    static final class Life {
+        final String lifecycle;
+        final boolean outOfStock;
+        final Verdict verdict;
+        final double availability;
+        /** Anything for the lifecycle check to note (not active, or out of stock). */
+        final boolean noted;
+
+        Life(String lifecycle, long stock) {
+            this.lifecycle = lifecycle;
+            this.outOfStock = stock == 0;
+            this.verdict = lifecycleVerdict(lifecycle, stock);
+            this.availability = Score.availability(lifecycle, stock);
+            this.noted = !lifecycle.equals("active") || outOfStock;
+        }
+
+        /** Whether this holds for a part with this lifecycle text (the same object, as a catalog's columns share) and stock. */
+        boolean isFor(String lifecycle, long stock) {
+            return this.lifecycle == lifecycle && outOfStock == (stock == 0);
+        }
     }
 
     /** Verdict of one part's lifecycle and stock (the same table as the sentences of {@link #lifecycle}). */
@@ -939,7 +972,11 @@ public final class PairEvaluator {
             this.iReq = Double.isNaN(qTotal) ? Double.NaN : DriveCurrent.required(qTotal, op.edge());
             this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
                     && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
+            this.switchLife = new Life(s.lifecycle(), s.stock());
         }
+
+        /** The switch's lifecycle and stock as the lifecycle rule and the score read them, once per question. */
+        final Life switchLife;
 
         /** The switch asked about. */
         public SwitchPart switchPart() {
@@ -1038,6 +1075,30 @@ public final class PairEvaluator {
         double rOffPath;
         double vInduced = Double.NaN;
         double dvdtAllowed = Double.NaN;
+
+        /**
+         * Drivers' lifecycles and stock states seen so far (see {@link Life#isFor}): a catalog has a
+         * handful of lifecycle texts, shared by its drivers, so nearly every driver finds its own here.
+         */
+        private final Life[] lastLives = new Life[16];
+        private int lastLivesNext;
+
+        Life driverLife() {
+            String lc = d.lifecycle();
+            long stock = d.stock();
+            for (Life l : lastLives) {
+                if (l == null) {
+                    break;
+                }
+                if (l.isFor(lc, stock)) {
+                    return l;
+                }
+            }
+            Life l = new Life(lc, stock);
+            lastLives[lastLivesNext] = l;
+            lastLivesNext = (lastLivesNext + 1) % lastLives.length;
+            return l;
+        }
 
         /** Every per-driver figure back to its starting value (NaN: not computed), before the next driver. */
         private void reset() {

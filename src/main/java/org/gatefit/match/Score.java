@@ -61,8 +61,13 @@ public final class Score {
 
     /** The score from the weighted sum of sub-scores and the weights' total (steps 2 to 4 above). */
     static double combine(double sum, double w, DriverPart d, SwitchPart s, Verdict pair) {
+        return combine(sum, w, availability(d.lifecycle(), d.stock()), availability(s.lifecycle(), s.stock()), pair);
+    }
+
+    /** {@link #combine(double, double, DriverPart, SwitchPart, Verdict)} with both parts' availability factors given. */
+    static double combine(double sum, double w, double driverAvailability, double switchAvailability, Verdict pair) {
         double electrical = w == 0 ? 0 : sum / w;
-        double score = electrical * availability(d.lifecycle(), d.stock()) * availability(s.lifecycle(), s.stock());
+        double score = electrical * driverAvailability * switchAvailability;
         if (pair == Verdict.FAIL) {
             score = Math.min(score, FAIL_CAP);
         }
