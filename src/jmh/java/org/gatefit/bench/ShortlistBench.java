@@ -114,18 +114,24 @@ public class ShortlistBench {
     private List<DriverPart> parsed;
     private double[] bind;
 
+    /** The operating point asked about: high side of a 48 V bus, 100 kHz, 12 V / 0 V, R_g 2.2 Ω, duty ≤ 0.6. */
+    public static OperatingPoint.Spec question() {
+        OperatingPoint.Spec q = new OperatingPoint.Spec();
+        q.highSide = true;
+        q.bus = 48.0;
+        q.fSw = 100e3;
+        q.rG = 2.2;
+        q.dutyMax = 0.6;
+        q.vDrive = 12.0;
+        return q;
+    }
+
     @Setup(Level.Trial)
     public void setUp(org.openjdk.jmh.infra.BenchmarkParams params) throws Exception {
         Path dir = BenchCatalogs.catalog(100, drivers);
         catalog = Catalog.open(dir).keepColumns(true);
         direct = Catalog.open(dir);
-        spec = new OperatingPoint.Spec();
-        spec.highSide = true;
-        spec.bus = 48.0;
-        spec.fSw = 100e3;
-        spec.rG = 2.2;
-        spec.dutyMax = 0.6;
-        spec.vDrive = 12.0;
+        spec = question();
         String method = params.getBenchmark().substring(params.getBenchmark().lastIndexOf('.') + 1);
         if (method.startsWith("gatefit")) {
             // gatefit's own fork runs nothing else before it is measured, as a gatefit process would:

@@ -34,14 +34,7 @@ public final class RankHarness {
         int runs = args.length > 1 ? Integer.parseInt(args[1]) : 200;
         Path dir = BenchCatalogs.catalog(100, drivers);
         try (Catalog c = Catalog.open(dir).keepColumns(true)) {
-            // The question of ShortlistBench: high side of a 48 V bus, 100 kHz, 12 V / 0 V, R_g 2.2 Ω, duty ≤ 0.6.
-            OperatingPoint.Spec spec = new OperatingPoint.Spec();
-            spec.highSide = true;
-            spec.bus = 48.0;
-            spec.fSw = 100e3;
-            spec.rG = 2.2;
-            spec.dutyMax = 0.6;
-            spec.vDrive = 12.0;
+            OperatingPoint.Spec spec = org.gatefit.bench.ShortlistBench.question();
             SwitchPart sw = SwitchPart.of(c.get(Kind.SWITCH, SyntheticCatalog.switchNumber(0)).orElseThrow());
             PairEvaluator.Prepared p = PairEvaluator.prepare(sw, spec.copy().resolve(sw), Margins.DEFAULT);
             List<DriverPart> left = new ArrayList<>();

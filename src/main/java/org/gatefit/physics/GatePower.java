@@ -52,10 +52,8 @@ public final class GatePower {
     public static Split split(double gateCharge, double swing, double frequency, double rSource,
             double rSink, double rGateOn, double rGateOff, double rGateInternal) {
         double half = total(gateCharge, swing, frequency) / 2;
-        double on = DriveCurrent.totalResistance(rSource, rGateOn, rGateInternal);
-        double off = DriveCurrent.totalResistance(rSink, rGateOff, rGateInternal);
-        Require.positive("turn-on loop resistance", "Ω", on);
-        Require.positive("turn-off loop resistance", "Ω", off);
+        double on = loop("turn-on loop resistance", rSource, rGateOn, rGateInternal);
+        double off = loop("turn-off loop resistance", rSink, rGateOff, rGateInternal);
         return new Split(driverShare(gateCharge, swing, frequency, rSource, rSink, rGateOn, rGateOff, rGateInternal),
                 half * (rGateOn / on + rGateOff / off),
                 half * rGateInternal * (1 / on + 1 / off));
@@ -69,13 +67,17 @@ public final class GatePower {
     public static double driverShare(double gateCharge, double swing, double frequency, double rSource,
             double rSink, double rGateOn, double rGateOff, double rGateInternal) {
         double half = total(gateCharge, swing, frequency) / 2;
-        double on = DriveCurrent.totalResistance(rSource, rGateOn, rGateInternal);
-        double off = DriveCurrent.totalResistance(rSink, rGateOff, rGateInternal);
-        Require.positive("turn-on loop resistance", "Ω", on);
-        Require.positive("turn-off loop resistance", "Ω", off);
-        double share = half * (rSource / on + rSink / off);
+        double share = half * (rSource / loop("turn-on loop resistance", rSource, rGateOn, rGateInternal)
+                + rSink / loop("turn-off loop resistance", rSink, rGateOff, rGateInternal));
         Require.nonNegative("driver power", "W", share);
         return share;
+    }
+
+    /** The resistance round one edge's loop, which must not be zero. */
+    private static double loop(String what, double rDriver, double rGate, double rGateInternal) {
+        double r = DriveCurrent.totalResistance(rDriver, rGate, rGateInternal);
+        Require.positive(what, "Ω", r);
+        return r;
     }
 
     /** Quiescent power {@code V_DD·I_DD}, W. */
