@@ -111,7 +111,7 @@ public final class PairEvaluator {
                 w += rule.weight();
             }
             verdict = v.forPair();
-            score = Score.combine(sum, w, c.driverLife().availability, p.switchLife.availability, verdict);
+            score = Score.combine(sum, w, c.life.availability(), p.switchLife.availability(), verdict);
         }
 
         public Verdict verdict() {
@@ -831,10 +831,10 @@ public final class PairEvaluator {
 
     /** The lifecycle rule while ranking: verdict and sub-score only. */
     private static Check quickLifecycle(Calc c) {
-        Life d = c.driverLife();
+        Life d = c.life;
         Life s = c.p.switchLife;
-        Verdict v = d.verdict.and(s.verdict);
-        return c.quick(Rule.LIFECYCLE, v, lifecycleScore(d.noted || s.noted, v));
+        Verdict v = d.verdict().and(s.verdict());
+        return c.quick(Rule.LIFECYCLE, v, lifecycleScore(d.noted() || s.noted(), v));
     }
 
     /** Sub-score of the lifecycle rule: 1 with nothing to note, else by the verdict (the worded check's table). */
@@ -852,21 +852,13 @@ public final class PairEvaluator {
      * One part's lifecycle and stock as the lifecycle rule ({@link #lifecycleVerdict}) and the score
      * ({@link Score#availability}) read them: worked out once per switch and once per distinct
      * lifecycle text while ranking, rather than matching the text three times per driver.
+     *
+     * @param noted anything for the lifecycle check to note (not active, or out of stock)
      */
-    static final class Life {
-        final String lifecycle;
-        final boolean outOfStock;
-        final Verdict verdict;
-        final double availability;
-        /** Anything for the lifecycle check to note (not active, or out of stock). */
-        final boolean noted;
-
-        Life(String lifecycle, long stock) {
-            this.lifecycle = lifecycle;
-            this.outOfStock = stock == 0;
-            this.verdict = lifecycleVerdict(lifecycle, stock);
-            this.availability = Score.availability(lifecycle, stock);
-            this.noted = !lifecycle.equals("active") || outOfStock;
+    record Life(String lifecycle, boolean outOfStock, Verdict verdict, double availability, boolean noted) {
+        static Life of(String lifecycle, long stock) {
+            return new Life(lifecycle, stock == 0, lifecycleVerdict(lifecycle, stock), Score.availability(lifecycle, stock),
+                    !lifecycle.equals("active") || stock == 0);
         }
 
         /** Whether this holds for a part with this lifecycle text (the same object, as a catalog's columns share) and stock. */
@@ -972,7 +964,7 @@ public final class PairEvaluator {
             this.iReq = Double.isNaN(qTotal) ? Double.NaN : DriveCurrent.required(qTotal, op.edge());
             this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
                     && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
-            this.switchLife = new Life(s.lifecycle(), s.stock());
+            this.switchLife = Life.of(s.lifecycle(), s.stock());
         }
 
         /** The switch's lifecycle and stock as the lifecycle rule and the score read them, once per question. */
@@ -1082,8 +1074,10 @@ public final class PairEvaluator {
          */
         private final Life[] lastLives = new Life[16];
         private int lastLivesNext;
+        /** The driver's lifecycle and stock as the lifecycle rule and the score read them. */
+        Life life;
 
-        Life driverLife() {
+        private Life driverLife() {
             String lc = d.lifecycle();
             long stock = d.stock();
             for (Life l : lastLives) {
@@ -1094,7 +1088,7 @@ public final class PairEvaluator {
                     return l;
                 }
             }
-            Life l = new Life(lc, stock);
+            Life l = Life.of(lc, stock);
             lastLives[lastLivesNext] = l;
             lastLivesNext = (lastLivesNext + 1) % lastLives.length;
             return l;
@@ -1162,6 +1156,7 @@ public final class PairEvaluator {
         Calc load(DriverPart d) {
             reset();
             this.d = d;
+            life = driverLife();
             OperatingPoint op = p.op;
             double swing = op.swing();
             qSwing = p.qSwing;
