@@ -692,7 +692,6 @@ final class ColumnSegment extends LeafReader {
         }
     }
 
-    /** All points of a column as one leaf (the merge visits them all; the codec builds the tree). */
     /** One-dimensional points of 8 bytes (a sortable long), as every number column indexes them. */
     abstract static class LongPoints extends PointValues {
         @Override
@@ -711,6 +710,7 @@ final class ColumnSegment extends LeafReader {
         }
     }
 
+    /** All points of a column as one leaf (the merge visits them all; the codec builds the tree). */
     static final class ColumnPoints extends LongPoints {
         private final Numeric n;
         private final int maxDoc;

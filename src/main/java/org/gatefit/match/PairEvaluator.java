@@ -166,7 +166,7 @@ public final class PairEvaluator {
                 case BOOTSTRAP -> bootstrap(c);
                 case DRIVER_POWER -> driverPower(c, m);
                 case DV_DT -> dvdt(c, m);
-                case LIFECYCLE -> c.detail ? lifecycle(c.d, c.s, true) : quickLifecycle(c);
+                case LIFECYCLE -> c.detail ? lifecycle(c.d, c.s) : quickLifecycle(c);
                 case CATALOG -> throw new IllegalStateException("the catalog rule belongs to stage checks, not to a pair");
             };
         } catch (IllegalArgumentException e) {
@@ -790,16 +790,8 @@ public final class PairEvaluator {
 
     // ---------------------------------------------------------------- lifecycle
 
+    /** Lifecycle and stock of both parts, worded (ranking uses {@link #quickLifecycle}). */
     static Check lifecycle(DriverPart d, SwitchPart s) {
-        return lifecycle(d, s, true);
-    }
-
-    /** Lifecycle and stock of both parts; without {@code detail} only verdict and score (ranking). */
-    static Check lifecycle(DriverPart d, SwitchPart s, boolean detail) {
-        if (!detail) {
-            Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
-            return new Check(Rule.LIFECYCLE, v, "", List.of(), lifecycleScore(d, s, v));
-        }
         Verdict v = lifecycleVerdict(d.lifecycle(), d.stock()).and(lifecycleVerdict(s.lifecycle(), s.stock()));
         List<String> notes = new ArrayList<>();
         for (String[] p : new String[][] {{d.partNumber(), d.lifecycle(), Long.toString(d.stock())},
@@ -825,8 +817,7 @@ public final class PairEvaluator {
         }
         String fix = v == Verdict.FAIL ? " — find a replacement ('gatefit replace')"
                 : " — check availability or plan a second source";
-        return new Check(Rule.LIFECYCLE, v, String.join("; ", notes) + fix, List.of(),
-                v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4);
+        return new Check(Rule.LIFECYCLE, v, String.join("; ", notes) + fix, List.of(), lifecycleScore(true, v));
     }
 
     /** The lifecycle rule while ranking: verdict and sub-score only. */
@@ -837,13 +828,7 @@ public final class PairEvaluator {
         return c.quick(Rule.LIFECYCLE, v, lifecycleScore(d.noted() || s.noted(), v));
     }
 
-    /** Sub-score of the lifecycle rule: 1 with nothing to note, else by the verdict (the worded check's table). */
-    private static double lifecycleScore(DriverPart d, SwitchPart s, Verdict v) {
-        boolean noted = !d.lifecycle().equals("active") || !s.lifecycle().equals("active") || d.stock() == 0
-                || s.stock() == 0;
-        return lifecycleScore(noted, v);
-    }
-
+    /** Sub-score of the lifecycle rule: 1 with nothing to note on either part, else by the verdict. */
     private static double lifecycleScore(boolean noted, Verdict v) {
         return !noted ? 1 : v == Verdict.FAIL ? 0 : v == Verdict.WARN ? 0.5 : 0.4;
     }
