@@ -24,10 +24,10 @@ import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
-import org.gatefit.match.PairEvaluator;
+import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.Shortlist;
-import org.gatefit.cli.ShortlistCommand;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Topology;
 import org.gatefit.match.Verdict;
@@ -55,7 +55,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * (active high), the default edge and margins; the best 10.
  *
  * <ul>
- * <li>{@code gatefit}: what {@code ShortlistCommand.run} does once the catalog is open: look up the
+ * <li>{@code gatefit}: what {@code Shortlist.run} does once the catalog is open: look up the
  *     switch, resolve the operating point, prefilter in Lucene (drivers certain to fail on their own
  *     values: topology, supply range, rated peak current, offset or isolation rating, UVLO, negative
  *     rail, obsolete), scan the rest on both cores, run every rule on every remaining driver, keep the
@@ -69,7 +69,7 @@ import org.openjdk.jmh.annotations.Warmup;
  *     a non-inverting input, not obsolete; an unknown value passes as gatefit's unknown does), ordered
  *     by the nearest SQL has to gatefit's order — drive-current margin, then price, then part number.
  * <li>{@code naiveFilter}: the same constraints and order over a {@code List<DriverPart>} in plain Java.
- * <li>{@code naiveRules}: every rule (PairEvaluator) over the same list, ranked as gatefit ranks —
+ * <li>{@code naiveRules}: every rule ({@code Rules.evaluate}) over the same list, ranked as gatefit ranks —
  *     gatefit's answer without Lucene.
  * </ul>
  * SQL cannot compute gatefit's score (eleven rules with margins), so its ten are not gatefit's ten;
@@ -252,7 +252,7 @@ public class ShortlistBench {
     private Shortlist.Result shortlist(Catalog c) throws Exception {
         SwitchPart sw = SwitchPart.of(c.get(Kind.SWITCH, SWITCH).orElseThrow());
         OperatingPoint op = spec.copy().resolve(sw);
-        return ShortlistCommand.run(c, sw, op, margins, TOP, false, Runtime.getRuntime().availableProcessors());
+        return Shortlist.run(new CatalogParts(c), sw, op, margins, TOP, false, Runtime.getRuntime().availableProcessors());
     }
 
     @Benchmark
@@ -323,7 +323,7 @@ public class ShortlistBench {
             if (d.topology() == Topology.LOW_SIDE || d.vSupplyMax() < swing || d.vSupplyMin() > swing) {
                 continue;
             }
-            PairResult pr = PairEvaluator.evaluate(d, sw, op, margins).withPrice(d.price());
+            PairResult pr = Rules.evaluate(d, sw, op, margins).withPrice(d.price());
             if (pr.verdict() == Verdict.FAIL) {
                 continue;
             }

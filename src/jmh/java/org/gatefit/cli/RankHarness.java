@@ -7,21 +7,22 @@ import java.util.List;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.RowCursor;
 import org.gatefit.index.Catalog;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
-import org.gatefit.match.PairEvaluator;
+import org.gatefit.match.Question;
+import org.gatefit.match.Rules;
 import org.gatefit.match.Shortlist;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.synth.BenchCatalogs;
 import org.gatefit.synth.SyntheticCatalog;
 
 /**
- * The ranking loop alone, on one thread: {@link PairEvaluator.Ranking#rank} over the drivers that
+ * The ranking loop alone, on one thread: {@link Rules.Ranking#rank} over the drivers that
  * {@code ShortlistBench}'s question leaves after the prefilter, in scan order, run after run, with
  * nanoseconds per driver. Steadier than a full benchmark for trying a change to the rules' hot
- * path (no scan, no threads, no Lucene). In this package for the prefilter's query
- * ({@link PairSupport#filter}); built only by the bench profile.
+ * path (no scan, no threads, no Lucene). Built only by the bench profile.
  *
  * <p>{@code java -cp target/benchmarks.jar org.gatefit.cli.RankHarness [drivers, default 1,000,000] [runs, default 200]}
  */
@@ -36,12 +37,12 @@ public final class RankHarness {
         try (Catalog c = Catalog.open(dir).keepColumns(true)) {
             OperatingPoint.Spec spec = org.gatefit.bench.ShortlistBench.question();
             SwitchPart sw = SwitchPart.of(c.get(Kind.SWITCH, SyntheticCatalog.switchNumber(0)).orElseThrow());
-            PairEvaluator.Prepared p = PairEvaluator.prepare(sw, spec.copy().resolve(sw), Margins.DEFAULT);
+            Question p = Question.of(sw, spec.copy().resolve(sw), Margins.DEFAULT);
             List<DriverPart> left = new ArrayList<>();
-            c.scanColumns(Kind.DRIVER, PairSupport.filter(c, Shortlist.prefilter(p)), 1,
+            new CatalogParts(c).scanColumns(Kind.DRIVER, Shortlist.prefilter(p), 1,
                     () -> (java.util.function.Consumer<RowCursor>) r -> left.add(DriverPart.of(r)));
             DriverPart[] ds = left.toArray(new DriverPart[0]);
-            PairEvaluator.Ranking ranking = new PairEvaluator.Ranking(p, false);
+            Rules.Ranking ranking = new Rules.Ranking(p, false);
             double[] ns = new double[runs];
             long verdicts = 0;
             for (int i = 0; i < runs; i++) {

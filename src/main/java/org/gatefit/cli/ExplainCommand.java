@@ -6,7 +6,7 @@ import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.OperatingPoint;
-import org.gatefit.match.PairEvaluator;
+import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
@@ -50,7 +50,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
-            r = PairEvaluator.evaluate(dr, sw, op, margins.margins());
+            r = Rules.evaluate(dr, sw, op, margins.margins());
             drive = GateDrive.of(sw, r);
         }
         try (Writer w = output.open(ctx)) {

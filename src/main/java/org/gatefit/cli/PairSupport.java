@@ -40,30 +40,4 @@ final class PairSupport {
         }
     }
 
-    /** A shortlist's prefilter as a query on this catalog (null: none). */
-    static org.apache.lucene.search.Query filter(org.gatefit.index.Catalog c, org.gatefit.match.Shortlist.Prefilter p)
-            throws BadValueException, java.io.IOException {
-        List<PartSearch.Condition> require = new ArrayList<>();
-        for (String s : p.require()) {
-            require.add(PartSearch.Condition.parse(s));
-        }
-        List<PartSearch.Exclusion> exclude = new ArrayList<>();
-        for (org.gatefit.match.Shortlist.Exclusion e : p.exclude()) {
-            List<PartSearch.Condition> when = new ArrayList<>();
-            for (String s : e.when()) {
-                when.add(PartSearch.Condition.parse(s));
-            }
-            org.apache.lucene.search.Query also = null;
-            if (e.text() != null) {
-                if (c.searcher() == null) {
-                    continue;
-                }
-                also = PartSearch.textMatching(c.searcher().getIndexReader(), Kind.DRIVER, e.text().column(),
-                        e.text().test());
-            }
-            exclude.add(new PartSearch.Exclusion(when, e.known(), also));
-        }
-        return PartSearch.filter(Kind.DRIVER, require, exclude);
-    }
-
 }

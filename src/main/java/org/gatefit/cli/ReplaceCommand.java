@@ -14,7 +14,7 @@ import org.gatefit.catalog.Bom;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.index.Catalog;
-import org.gatefit.index.PartSearch;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
 import org.gatefit.match.Replacement;
 import org.gatefit.report.ReplaceReports;
@@ -94,16 +94,8 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");
             }
             Row original = found.get(0);
-            List<PartSearch.Condition> pre = new ArrayList<>();
-            for (String s : Replacement.prefilter(original, includeObsolete)) {
-                pre.add(PartSearch.Condition.parse(s));
-            }
-            // Candidates stream from the scan into the search, which keeps only the best --top.
-            Replacement.Search search = new Replacement.Search(original, top, includeObsolete,
-                    stages == null ? "" : stages.toString(), stageRows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
-                    pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m);
-            c.scan(original.kind(), PartSearch.filter(original.kind(), pre), search);
-            r = search.result(c.count(original.kind()));
+            r = Replacement.search(new CatalogParts(c), original, top, includeObsolete,
+                    stages == null ? "" : stages.toString(), stageRows, b, m);
         }
         try (Writer w = output.open(ctx)) {
             ReplaceReports.render(r, output.format, w);

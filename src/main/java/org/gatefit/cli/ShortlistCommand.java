@@ -1,14 +1,13 @@
 package org.gatefit.cli;
 
 import java.io.Writer;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.Shortlist;
-import org.gatefit.match.PairEvaluator;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.report.MatchReports;
 import picocli.CommandLine.Command;
@@ -56,7 +55,8 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
-            Shortlist.Result r = run(c, sw, op, m, top, all, Runtime.getRuntime().availableProcessors());
+            Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,
+                    Runtime.getRuntime().availableProcessors());
             try (Writer w = output.open(ctx)) {
                 MatchReports.shortlist(r, output.format, output.colour(ctx), w);
             }
@@ -64,26 +64,4 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         return ExitCode.OK;
     }
 
-    /**
-     * The shortlist itself, once the catalog is open and the switch found (the benchmarks call it
-     * too): the prefilter as a Lucene query (none with {@code all}, or for fewer than
-     * {@link Shortlist#PREFILTER_FROM} drivers), a doc-value scan split over
-     * {@code threads} partitions, each ranking its drivers on verdict and score, the partitions'
-     * best merged and worded in full.
-     */
-    public static Shortlist.Result run(Catalog c, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
-                                       int threads) throws java.io.IOException, org.gatefit.catalog.BadValueException {
-        PairEvaluator.Prepared p = PairEvaluator.prepare(sw, op, m);
-        int drivers = c.count(Kind.DRIVER);
-        Shortlist.Prefilter pre = all || drivers < Shortlist.PREFILTER_FROM ? Shortlist.Prefilter.NONE
-                : Shortlist.prefilter(p);
-        Shortlist.Ranker template = new Shortlist.Ranker(p, top, all, pre.describe(), 0);
-        List<Shortlist.Ranker> parts = c.scanColumns(Kind.DRIVER, PairSupport.filter(c, pre), threads, template::sibling);
-        int scanned = 0;
-        for (Shortlist.Ranker r : parts) {
-            scanned += r.evaluated();
-        }
-        // Without a prefilter every live driver is scanned, so this is 0.
-        return Shortlist.Ranker.merge(parts.isEmpty() ? List.of(template) : parts, drivers - scanned).result();
-    }
 }

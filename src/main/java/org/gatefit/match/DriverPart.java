@@ -19,7 +19,7 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                          double rSink, double vSupplyMin, double vSupplyMax, double uvloOn, double uvloOff,
                          double vIh, double vIl, double vInMax, double vOffsetMax, Boolean bootstrapDiode,
                          double iQbs, double vNegMin, double tProp, double tMatch, Boolean millerClamp,
-                         double isolationVrms, double pMax, String lifecycle, long stock, double price) {
+                         double isolationVrms, double pMax, Lifecycle lifecycle, long stock, double price) {
 
     public DriverPart {
         Objects.requireNonNull(partNumber, "partNumber");
@@ -115,7 +115,7 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                 r.si(C.vSupplyMax), r.si(C.uvloOn), r.si(C.uvloOff), r.si(C.vIh), r.si(C.vIl),
                 r.si(C.vInMax), r.si(C.vOffsetMax), yesNo(r.text(C.bootstrapDiode)), r.si(C.iQbs),
                 r.si(C.vNegMin), r.si(C.tProp), r.si(C.tMatch), yesNo(r.text(C.millerClamp)),
-                r.si(C.isolation), r.si(C.pMax), life == null ? "unknown" : life,
+                r.si(C.isolation), r.si(C.pMax), Lifecycle.of(life),
                 Double.isNaN(stock) ? -1 : (long) stock, r.si(C.price));
     }
 

@@ -181,25 +181,45 @@ public final class Replacement {
     }
 
     /**
-     * Catalog conditions ({@code find --where} syntax) that only skip parts certain to be left
-     * out: an essential parameter that is required (so always known) and worse, and obsolete
-     * parts unless asked for.
+     * Catalog conditions that only skip parts certain to be left out: an essential parameter that
+     * is required (so always known) and worse, and obsolete parts unless asked for.
      */
-    public static List<String> prefilter(Row original, boolean includeObsolete) {
-        List<String> c = new ArrayList<>();
+    public static Prefilter prefilter(Row original, boolean includeObsolete) {
+        Prefilter.Builder b = new Prefilter.Builder();
         if (original.kind() == Kind.SWITCH) {
-            c.add("technology = " + original.text("technology"));
-            c.add("v_block_v >= " + Numbers.format(original.number("v_block_v")));
-            c.add("v_gs_max_v >= " + Numbers.format(original.number("v_gs_max_v")));
-            c.add("v_gs_min_v <= " + Numbers.format(original.number("v_gs_min_v")));
+            b.require(Prefilter.Condition.is("technology", Prefilter.Op.EQ, original.text("technology")));
+            b.require(Prefilter.Condition.of("v_block_v", Prefilter.Op.GE, original.number("v_block_v")));
+            b.require(Prefilter.Condition.of("v_gs_max_v", Prefilter.Op.GE, original.number("v_gs_max_v")));
+            b.require(Prefilter.Condition.of("v_gs_min_v", Prefilter.Op.LE, original.number("v_gs_min_v")));
         } else {
-            c.add("topology = " + original.text("topology"));
-            c.add("input_polarity = " + original.text("input_polarity"));
+            b.require(Prefilter.Condition.is("topology", Prefilter.Op.EQ, original.text("topology")));
+            b.require(Prefilter.Condition.is("input_polarity", Prefilter.Op.EQ, original.text("input_polarity")));
         }
         if (!includeObsolete) {
-            c.add("lifecycle != obsolete");
+            b.require(Prefilter.Condition.is("lifecycle", Prefilter.Op.NE, Lifecycle.OBSOLETE.id()));
         }
-        return c;
+        return b.build();
+    }
+
+    /**
+     * The replacement engine over a catalog: the candidates the prefilter leaves stream from a scan
+     * into a {@link Search}, which keeps only the best {@code top}. See {@link #run} for the parameters.
+     */
+    public static Result search(PartSource parts, Row original, int top, boolean includeObsolete, String stageFile,
+                                List<Row> stages, Bom bom, Margins m) throws java.io.IOException {
+        Search search = new Search(original, top, includeObsolete, stageFile, stages, bom,
+                pn -> lookup(parts, Kind.DRIVER, pn), pn -> lookup(parts, Kind.SWITCH, pn), m);
+        parts.scan(original.kind(), prefilter(original, includeObsolete), search);
+        return search.result(parts.count(original.kind()));
+    }
+
+    /** A lookup for the stage re-checks, which take plain functions. */
+    static Optional<Row> lookup(PartSource parts, Kind k, String pn) {
+        try {
+            return parts.get(k, pn);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     /**
@@ -277,7 +297,7 @@ public final class Replacement {
 
         @Override
         public void accept(Row cand) {
-            if (cand.key().equalsIgnoreCase(pn) || (!includeObsolete && "obsolete".equals(cand.text("lifecycle")))) {
+            if (cand.key().equalsIgnoreCase(pn) || (!includeObsolete && Lifecycle.of(cand.text("lifecycle")) == Lifecycle.OBSOLETE)) {
                 return;
             }
             Optional<Candidate> q = evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m,
@@ -381,7 +401,7 @@ public final class Replacement {
             }
             stageScore = sum / rep.results().size();
         }
-        boolean obsolete = "obsolete".equals(cand.text("lifecycle"));
+        boolean obsolete = Lifecycle.of(cand.text("lifecycle")) == Lifecycle.OBSOLETE;
         Grade grade;
         if (samePinout && worse == 0 && reverify == 0 && !stageFail && !stageWorse && !obsolete) {
             grade = Grade.DROP_IN;
@@ -410,10 +430,10 @@ public final class Replacement {
             reasons.add("other pinout (" + cand.text("pinout") + "): new footprint or layout");
         }
         long stock = Double.isNaN(cand.number("stock")) ? -1 : (long) cand.number("stock");
-        String life = cand.text("lifecycle") == null ? "unknown" : cand.text("lifecycle");
-        double score = Score.availability(life, stock) * Math.max(0.2, 1 - 0.05 * reverify - 0.1 * worse)
+        Lifecycle life = Lifecycle.of(cand.text("lifecycle"));
+        double score = life.availability(stock) * Math.max(0.2, 1 - 0.05 * reverify - 0.1 * worse)
                 * Math.max(0, Math.min(1, stageScore));
-        return Optional.of(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life, stock,
+        return Optional.of(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life.id(), stock,
                 cand.number("unit_price"), grade, Math.max(0, Math.min(1, score)), diffs, notes, reasons));
     }
 

@@ -1,7 +1,5 @@
 package org.gatefit.match;
 
-import java.util.List;
-
 /**
  * The ranking score of a pair, in [0,1], built so a person can follow it:
  * <ol>
@@ -35,36 +33,10 @@ public final class Score {
         return 0.35 + 0.3 * x;
     }
 
-    /** Availability factor of one part. */
-    static double availability(String lifecycle, long stock) {
-        double l = switch (lifecycle) {
-            case "active" -> 1.0;
-            case "preview" -> 0.9;
-            case "nrnd" -> 0.8;
-            case "ltb" -> 0.7;
-            case "obsolete" -> 0.3;
-            default -> 0.85;
-        };
-        return stock == 0 ? l * 0.8 : l;
-    }
-
-    static double of(List<Check> checks, DriverPart d, SwitchPart s, Verdict pair) {
-        double sum = 0;
-        double w = 0;
-        for (Check c : checks) {
-            int weight = c.rule().weight();
-            sum += weight * c.score();
-            w += weight;
-        }
-        return combine(sum, w, d, s, pair);
-    }
-
-    /** The score from the weighted sum of sub-scores and the weights' total (steps 2 to 4 above). */
-    static double combine(double sum, double w, DriverPart d, SwitchPart s, Verdict pair) {
-        return combine(sum, w, availability(d.lifecycle(), d.stock()), availability(s.lifecycle(), s.stock()), pair);
-    }
-
-    /** {@link #combine(double, double, DriverPart, SwitchPart, Verdict)} with both parts' availability factors given. */
+    /**
+     * The score from the weighted sum of sub-scores, the weights' total and both parts' availability
+     * factors ({@link Lifecycle#availability}): steps 2 to 4 above.
+     */
     static double combine(double sum, double w, double driverAvailability, double switchAvailability, Verdict pair) {
         double electrical = w == 0 ? 0 : sum / w;
         double score = electrical * driverAvailability * switchAvailability;

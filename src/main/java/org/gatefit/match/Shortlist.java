@@ -3,6 +3,7 @@ package org.gatefit.match;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.RowCursor;
 
 /**
@@ -45,153 +46,41 @@ public final class Shortlist {
     }
 
     /**
+     * The shortlist engine: the prefilter (none with {@code all}, or for fewer than
+     * {@link #PREFILTER_FROM} drivers), a column scan split over {@code threads} partitions, each
+     * ranking its drivers on verdict and score, the partitions' best merged and worded in full.
+     */
+    public static Result run(PartSource parts, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
+                             int threads) throws java.io.IOException {
+        Question q = Question.of(sw, op, m);
+        int drivers = parts.count(Kind.DRIVER);
+        Prefilter pre = all || drivers < PREFILTER_FROM ? Prefilter.NONE : prefilter(q);
+        Ranker template = new Ranker(q, top, all, pre.describe(), 0);
+        List<Ranker> ranked = parts.scanColumns(Kind.DRIVER, pre, threads, template::sibling);
+        int scanned = 0;
+        for (Ranker r : ranked) {
+            scanned += r.evaluated();
+        }
+        // Without a prefilter every live driver is scanned, so this is 0.
+        return Ranker.merge(ranked.isEmpty() ? List.of(template) : ranked, drivers - scanned).result();
+    }
+
+    /**
+     * The prefilter for a question: the conditions under which the rules declare a driver certain
+     * to fail ({@link Rules#prefilter}); each is checked against the rules by
+     * {@code ShortlistPrefilterTest}.
+     */
+    public static Prefilter prefilter(Question q) {
+        return Rules.prefilter(q);
+    }
+
+    /**
      * Catalogs with fewer drivers than this are evaluated driver by driver without a prefilter:
      * building and running the query costs more than evaluating a few hundred drivers (it loads
      * a good part of Lucene's query classes on a cold start), and the counts then cover every
      * failure by rule.
      */
     public static final int PREFILTER_FROM = 2_000;
-
-    /**
-     * What the catalog may skip without evaluating: drivers that a rule is certain to fail on
-     * values they have (never on a value they lack).
-     *
-     * @param require conditions every driver left must meet ({@code column op value}, as {@code find --where})
-     * @param exclude groups of conditions: a driver meeting every condition of a group is skipped
-     */
-    public record Prefilter(List<String> require, List<Exclusion> exclude) {
-        public Prefilter {
-            require = List.copyOf(require);
-            exclude = List.copyOf(exclude);
-        }
-
-        /** No prefilter: every driver is evaluated (p-channel switches, {@code --all}). */
-        public static final Prefilter NONE = new Prefilter(List.of(), List.of());
-
-        /** One line per condition, as printed with the results. */
-        public List<String> describe() {
-            List<String> out = new ArrayList<>(require);
-            for (Exclusion e : exclude) {
-                List<String> parts = new ArrayList<>(e.when());
-                for (String k : e.known()) {
-                    parts.add(k + " known");
-                }
-                if (e.text() != null) {
-                    parts.add(e.text().says());
-                }
-                out.add("skip " + String.join(" and ", parts) + " (" + e.rule().id() + " fails)");
-            }
-            return out;
-        }
-    }
-
-    /**
-     * Drivers meeting every condition of {@code when}, with values in the {@code known} columns and
-     * passing {@code text} (null: no text test), fail {@code rule}.
-     */
-    public record Exclusion(Rule rule, List<String> when, List<String> known, TextTest text) {
-        public Exclusion {
-            when = List.copyOf(when);
-            known = List.copyOf(known);
-        }
-
-        Exclusion(Rule rule, List<String> when) {
-            this(rule, when, List.of(), null);
-        }
-    }
-
-    /**
-     * A test of a text column's value as written.
-     *
-     * @param says how it reads in the printed prefilter
-     */
-    public record TextTest(String column, String says, java.util.function.Predicate<String> test) {
-    }
-
-    /**
-     * The prefilter for a question: conditions on a driver's own values that make one of the
-     * rules fail, whatever its other values (each is checked against the rules by
-     * {@code ShortlistPrefilterTest}). A p-channel switch gets none (its electrical checks are
-     * unknown, so no driver is certain to fail).
-     */
-    public static Prefilter prefilter(PairEvaluator.Prepared p) {
-        SwitchPart s = p.switchPart();
-        OperatingPoint op = p.point();
-        Margins m = p.margins();
-        if (!s.nChannel()) {
-            return Prefilter.NONE;
-        }
-        List<String> require = new ArrayList<>();
-        List<Exclusion> exclude = new ArrayList<>();
-        if (op.highSide()) {
-            require.add("topology != low-side");                    // high-side: cannot float
-        }
-        if (!Double.isNaN(s.vGsMax())) {                              // gate-voltage: supply range
-            require.add("v_supply_max_v >= " + down(op.swing()));
-            require.add("v_supply_min_v <= " + up(op.swing()));
-        }
-        double iReq = p.currentRequired();
-        if (!Double.isNaN(iReq) && iReq > 0) {
-            // drive-current: the peak through the loop never exceeds the rated peak, and a ratio
-            // below 1 (or below the margin, when the margin is under 1) fails.
-            String need = down(iReq * Math.min(1, m.driveCurrent()));
-            require.add("i_source_a >= " + need);
-            require.add("i_sink_a >= " + need);
-        }
-        if (op.highSide() && !Double.isNaN(op.bus())) {
-            String bus = down(op.bus());
-            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = high-side", "v_offset_max_v < " + bus)));
-            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = half-bridge", "v_offset_max_v < " + bus)));
-            exclude.add(new Exclusion(Rule.HIGH_SIDE, List.of("topology = isolated", "isolation_vrms < " + bus)));
-        }
-        exclude.add(new Exclusion(Rule.UVLO, List.of("uvlo_on_v > " + up(op.swing()))));
-        if (op.vDriveNeg() < 0 && !Double.isNaN(s.vGsMin()) && op.vDriveNeg() >= s.vGsMin()) {
-            exclude.add(new Exclusion(Rule.NEGATIVE_BIAS, List.of("v_neg_min_v > " + up(op.vDriveNeg()))));
-        }
-        // logic-level: with both thresholds known, a negative noise margin or an input maximum below
-        // the controller's high level fails.
-        if (Double.isFinite(op.vOh())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_ih_v > " + up(op.vOh())),
-                    List.of("v_il_v"), null));
-        }
-        if (Double.isFinite(op.vOl())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_il_v < " + down(op.vOl())),
-                    List.of("v_ih_v"), null));
-        }
-        if (Double.isFinite(op.vOhMax())) {
-            exclude.add(new Exclusion(Rule.LOGIC_LEVEL, List.of("v_in_max_v < " + down(op.vOhMax())),
-                    List.of("v_ih_v", "v_il_v"), null));
-        }
-        // polarity: no channel of the PWM's sense.
-        boolean wantInverting = !op.activeHigh();
-        String sense = wantInverting ? "inverting" : "non-inverting";
-        exclude.add(new Exclusion(Rule.POLARITY, List.of(), List.of(), new TextTest("input_polarity",
-                "input_polarity without a " + sense + " channel", t -> !DriverPart.offers(t, wantInverting))));
-        exclude.add(new Exclusion(Rule.LIFECYCLE, List.of("lifecycle = obsolete")));
-        return new Prefilter(require, exclude);
-    }
-
-    /**
-     * A limit for a condition that skips values below it, written with four significant digits and
-     * rounded down: it can only skip fewer drivers than the exact limit, never one the rules pass.
-     */
-    public static String down(double x) {
-        return limit(x, java.math.RoundingMode.FLOOR);
-    }
-
-    /** The same for a condition that skips values above the limit: rounded up. */
-    public static String up(double x) {
-        return limit(x, java.math.RoundingMode.CEILING);
-    }
-
-    /** A short number as it is (it reads back as the same double); a long one rounded to four digits. */
-    private static String limit(double x, java.math.RoundingMode mode) {
-        java.math.BigDecimal shortest = java.math.BigDecimal.valueOf(x).stripTrailingZeros();
-        if (shortest.precision() <= 6) {
-            return shortest.toPlainString();
-        }
-        return new java.math.BigDecimal(x).round(new java.math.MathContext(4, mode)).stripTrailingZeros().toPlainString();
-    }
 
     /** Best first, as {@link #RANKING} orders the full results: verdict, score, price (unknown last), part number. */
     private static int compare(Verdict av, double as, DriverPart a, Verdict bv, double bs, DriverPart b) {
@@ -222,7 +111,7 @@ public final class Shortlist {
      * partition its own ranker ({@link #sibling}); {@link #merge} joins them.
      */
     public static final class Ranker implements java.util.function.Consumer<RowCursor> {
-        private final PairEvaluator.Prepared prepared;
+        private final Question prepared;
         private final int top;
         private final boolean all;
         private final List<String> prefilterUsed;
@@ -239,20 +128,20 @@ public final class Shortlist {
         private int fail;
 
         private static final class Tally {
-            final PairEvaluator.Ranking ranking;
+            final Rules.Ranking ranking;
             int pass;
             int warn;
             int fail;
 
-            Tally(PairEvaluator.Prepared p, boolean all) {
-                ranking = new PairEvaluator.Ranking(p, all); // failing drivers are only counted unless all are listed
+            Tally(Question p, boolean all) {
+                ranking = new Rules.Ranking(p, all); // failing drivers are only counted unless all are listed
             }
         }
 
         /**
          * @param skipped drivers the catalog skipped by the prefilter (each certain to fail), for the counts
          */
-        public Ranker(PairEvaluator.Prepared prepared, int top, boolean all, List<String> prefilterUsed, int skipped) {
+        public Ranker(Question prepared, int top, boolean all, List<String> prefilterUsed, int skipped) {
             if (top < 1) {
                 throw new IllegalArgumentException("expected --top of at least 1, got " + top);
             }
@@ -351,7 +240,7 @@ public final class Shortlist {
         public Result result() {
             List<PairResult> out = new ArrayList<>(best.size());
             for (Ranked x : best) {
-                out.add(PairEvaluator.evaluate(x.driver(), prepared).withPrice(x.driver().price()));
+                out.add(Rules.evaluate(x.driver(), prepared).withPrice(x.driver().price()));
             }
             out.sort(RANKING);
             return new Result(prepared.switchPart(), prepared.point(), prepared.margins(), out, evaluated(), passing(),

@@ -163,7 +163,7 @@ public final class StageCheck {
             return new StageResult(st.key(), st.line(), dRef, d.pn(), sRef, s.pn(), Verdict.FAIL, 0, List.of(c), List.of(),
                     null, List.of());
         }
-        PairResult pr = PairEvaluator.evaluate(dp, sp, op, m);
+        PairResult pr = Rules.evaluate(dp, sp, op, m);
         List<Check> checks = new ArrayList<>();
         checks.add(new Check(Rule.CATALOG, Verdict.PASS, "driver " + describe(dRef, d.pn()) + " and switch "
                 + describe(sRef, s.pn()) + " are in the catalog", List.of(), 1));

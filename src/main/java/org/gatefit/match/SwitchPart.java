@@ -12,7 +12,7 @@ public record SwitchPart(String partNumber, String maker, String pinout, String 
                          boolean nChannel, double vBlock, double iCont, double rOn, double rOnVgs, double vCeSat,
                          double vThMin, double vThMax, double vGsMax, double vGsMin, double vGateOn,
                          double vGateOff, double qG, double qGVgs, double qGs, double qGd, double vPlateau,
-                         double cIss, double cRss, double rGInt, String lifecycle, long stock, double price) {
+                         double cIss, double cRss, double rGInt, Lifecycle lifecycle, long stock, double price) {
 
     public SwitchPart {
         Objects.requireNonNull(partNumber, "partNumber");
@@ -31,7 +31,7 @@ public record SwitchPart(String partNumber, String maker, String pinout, String 
                 r.si("v_th_max_v"), r.si("v_gs_max_v"), r.si("v_gs_min_v"), r.si("v_gate_on_v"),
                 r.si("v_gate_off_v"), r.si("q_g_nc"), r.si("q_g_vgs_v"), r.si("q_gs_nc"), r.si("q_gd_nc"),
                 r.si("v_plateau_v"), r.si("c_iss_pf"), r.si("c_rss_pf"), r.si("r_g_int_ohm"),
-                r.text("lifecycle") == null ? "unknown" : r.text("lifecycle"),
+                Lifecycle.of(r.text("lifecycle")),
                 Double.isNaN(r.number("stock")) ? -1 : (long) r.number("stock"), r.si("unit_price"));
     }
 

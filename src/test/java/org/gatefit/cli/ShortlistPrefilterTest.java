@@ -9,11 +9,14 @@ import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.index.Importer;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
-import org.gatefit.match.PairEvaluator;
+import org.gatefit.match.Prefilter;
+import org.gatefit.match.Question;
+import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.Shortlist;
 import org.gatefit.match.SwitchPart;
@@ -29,7 +32,7 @@ import org.junit.jupiter.api.io.TempDir;
  * shortlist with the prefilter lists exactly the working drivers, in the same order, that a full
  * evaluation of every driver without any prefilter finds, and its pass / warn / fail counts plus
  * the skipped drivers add up to the full evaluation's. The reference is the rules themselves
- * ({@code PairEvaluator.evaluate} on every pair), so this checks the prefilter, not the rules.
+ * ({@code Rules.evaluate} on every pair), so this checks the prefilter, not the rules.
  */
 class ShortlistPrefilterTest {
     private static final int DRIVERS = 3_000;
@@ -94,7 +97,7 @@ class ShortlistPrefilterTest {
                     int warn = 0;
                     int fail = 0;
                     for (DriverPart d : every) {
-                        PairResult r = PairEvaluator.evaluate(d, sw, op, Margins.DEFAULT).withPrice(d.price());
+                        PairResult r = Rules.evaluate(d, sw, op, Margins.DEFAULT).withPrice(d.price());
                         switch (r.verdict()) {
                             case PASS -> pass++;
                             case WARN, UNKNOWN -> warn++;
@@ -106,7 +109,7 @@ class ShortlistPrefilterTest {
                     }
                     full.sort(Shortlist.RANKING);
                     for (int threads : new int[] {1, 2}) {
-                        Shortlist.Result got = ShortlistCommand.run(c, sw, op, Margins.DEFAULT, DRIVERS, false, threads);
+                        Shortlist.Result got = Shortlist.run(new CatalogParts(c), sw, op, Margins.DEFAULT, DRIVERS, false, threads);
                         same(full.stream().map(PairResult::driver).toList(),
                                 got.candidates().stream().map(PairResult::driver).toList(), what);
                         assertEquals(full.stream().map(PairResult::score).toList(),
@@ -118,7 +121,7 @@ class ShortlistPrefilterTest {
                         skippedSomewhere += got.skipped();
                     }
                     // Top 10: the first ten of the full ranking.
-                    Shortlist.Result ten = ShortlistCommand.run(c, sw, op, Margins.DEFAULT, 10, false, 1);
+                    Shortlist.Result ten = Shortlist.run(new CatalogParts(c), sw, op, Margins.DEFAULT, 10, false, 1);
                     same(full.stream().limit(10).map(PairResult::driver).toList(),
                             ten.candidates().stream().map(PairResult::driver).toList(), what);
                 }
@@ -127,20 +130,32 @@ class ShortlistPrefilterTest {
         assertTrue(skippedSomewhere > DRIVERS, "the prefilter must actually skip drivers in these questions");
     }
 
+    /** A limit below which drivers are skipped ({@code x < limit}), as printed. */
+    private static String down(double x) {
+        return Prefilter.Condition.of("v_ih_v", Prefilter.Op.LT, x).value();
+    }
+
+    /** A limit above which drivers are skipped ({@code x > limit}), as printed. */
+    private static String up(double x) {
+        return Prefilter.Condition.of("v_ih_v", Prefilter.Op.GT, x).value();
+    }
+
     @Test
     void limitsArePrintedShortAndRoundedTowardsSkippingFewer() {
         // A limit below which drivers are skipped is rounded down, one above which they are skipped up.
-        assertEquals("0.22", Shortlist.down(0.22000000000000003));
-        assertEquals("0.2201", Shortlist.up(0.22000000000000003));
-        assertEquals("3.1", Shortlist.up(3.0999999999999996));
-        assertEquals("3.099", Shortlist.down(3.0999999999999996));
-        assertEquals("48", Shortlist.down(48));
-        assertEquals("-5", Shortlist.up(-5));
-        assertEquals("4.6", Shortlist.down(4.6), "a short number stays as written (it reads back exactly)");
-        assertEquals("1.356", Shortlist.down(1.3563628691983125));
+        assertEquals("0.22", down(0.22000000000000003));
+        assertEquals("0.2201", up(0.22000000000000003));
+        assertEquals("3.1", up(3.0999999999999996));
+        assertEquals("3.099", down(3.0999999999999996));
+        assertEquals("48", down(48));
+        assertEquals("-5", up(-5));
+        assertEquals("4.6", down(4.6), "a short number stays as written (it reads back exactly)");
+        assertEquals("1.356", down(1.3563628691983125));
         for (double x : new double[] {0.22000000000000003, 3.0999999999999996, 1.3563628691983125, -4.2, 1e-7}) {
-            assertTrue(Double.parseDouble(Shortlist.down(x)) <= x && Double.parseDouble(Shortlist.up(x)) >= x, "" + x);
+            assertTrue(Double.parseDouble(down(x)) <= x && Double.parseDouble(up(x)) >= x, "" + x);
         }
+        assertEquals("i_sink_a >= 1.356", Prefilter.Condition.of("i_sink_a", Prefilter.Op.GE, 1.3563628691983125).toString());
+        assertEquals("v_in_max_v <= 3.301", Prefilter.Condition.of("v_in_max_v", Prefilter.Op.LE, 3.3000000000000003).toString());
     }
 
     /** Lists equal, or a failure naming the first difference (not thousands of part numbers). */
@@ -158,7 +173,7 @@ class ShortlistPrefilterTest {
             c.scan(Kind.DRIVER, null, r -> every.add(DriverPart.of(r)));
             SwitchPart sw = SwitchPart.of(c.get(Kind.SWITCH, SyntheticCatalog.switchNumber(3)).orElseThrow());
             OperatingPoint op = questions().get(0).resolve(sw);
-            PairEvaluator.Prepared p = PairEvaluator.prepare(sw, op, Margins.DEFAULT);
+            Question p = Question.of(sw, op, Margins.DEFAULT);
             Shortlist.Ranker one = new Shortlist.Ranker(p, 25, true, List.of(), 0);
             every.forEach(one::accept);
             Shortlist.Ranker a = new Shortlist.Ranker(p, 25, true, List.of(), 0);

@@ -36,7 +36,7 @@ final class Parts {
         SwitchPart build() {
             return new SwitchPart(pn, "Testmaker", "PKG", "PKG", tech, true, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
                     vThMax, vGsMax, vGsMin, vGateOn, vGateOff, qG, qGVgs, qGs, qGd, vPlateau, cIss, cRss, rGInt,
-                    lifecycle, stock, price);
+                    Lifecycle.of(lifecycle), stock, price);
         }
     }
 
@@ -57,7 +57,7 @@ final class Parts {
         DriverPart build() {
             return new DriverPart(pn, "Testmaker", "PKG", "PKG", topology, 2, inverting, iSource, iSink, rSource, rSink,
                     vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs, vNegMin,
-                    tProp, tMatch, millerClamp, isolationVrms, pMax, lifecycle, stock, price);
+                    tProp, tMatch, millerClamp, isolationVrms, pMax, Lifecycle.of(lifecycle), stock, price);
         }
     }
 
@@ -90,6 +90,6 @@ final class Parts {
 
     static PairResult eval(Sw s, Dr d, OperatingPoint.Spec op, Margins m) {
         SwitchPart sp = s.build();
-        return PairEvaluator.evaluate(d.build(), sp, op.resolve(sp), m);
+        return Rules.evaluate(d.build(), sp, op.resolve(sp), m);
     }
 }

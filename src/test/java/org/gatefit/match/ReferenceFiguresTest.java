@@ -9,7 +9,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * The check values of REFERENCES.md, fed through {@link PairEvaluator} as parts and an operating
+ * The check values of REFERENCES.md, fed through {@link Rules} as parts and an operating
  * point, read back as the pair's named figures (DESIGN.md names). Each row names its section.
  */
 class ReferenceFiguresTest {

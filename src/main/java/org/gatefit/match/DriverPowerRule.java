@@ -1,0 +1,59 @@
+package org.gatefit.match;
+
+import java.util.List;
+import org.gatefit.match.Check.Comparison;
+
+/**
+ * {@code driver-power}: the share of the gate-drive power Q_g·ΔV·f dissipated in the driver (its
+ * output resistance against the external and internal gate resistance; REFERENCES.md §2), plus the
+ * high side's quiescent power, against the package limit derated by the driver-power margin.
+ */
+final class DriverPowerRule implements PairRule {
+    enum Why implements Reason { NO_CHARGE, NO_LIMIT, OVER_LIMIT, HOT, COOL }
+
+    @Override
+    public Rule rule() {
+        return Rule.DRIVER_POWER;
+    }
+
+    @Override
+    public void judge(PairFigures f, Outcome out) {
+        double pMax = f.d.pMax();
+        double allowed = pMax * f.m.driverPower();
+        if (Double.isNaN(f.pDriver)) {
+            out.unknown(Why.NO_CHARGE);
+        } else if (Double.isNaN(pMax)) {
+            out.unknown(Why.NO_LIMIT);
+        } else if (f.pDriver > pMax) {
+            out.fail(Why.OVER_LIMIT);
+        } else if (f.pDriver > allowed) {
+            out.warn(Why.HOT, (pMax - f.pDriver) / (pMax - allowed));
+        } else {
+            out.pass(Why.COOL, allowed / Math.max(f.pDriver, 1e-12) - 1);
+        }
+    }
+
+    @Override
+    public Worded word(PairFigures f, Reason why) {
+        Why w = (Why) why;
+        if (w == Why.NO_CHARGE) {
+            return new Worded("gate charge unknown, so driver dissipation cannot be estimated");
+        }
+        double pMax = f.d.pMax();
+        double allowed = pMax * f.m.driverPower();
+        String est = Eng.of(f.pDriver, "W") + " in the driver (of " + Eng.of(f.pGate, "W") + " gate-drive power at "
+                + Eng.of(f.op.fSw(), "Hz") + (f.rSrcEstimated || f.rSnkEstimated ? ", output resistance estimated as V/I_peak" : "")
+                + ")";
+        List<Comparison> cmp = List.of(new Comparison("driver dissipation", f.pDriver, "≤", allowed, "W"));
+        return switch (w) {
+            case NO_CHARGE -> throw new IllegalStateException("worded above");
+            case NO_LIMIT -> new Worded(est + "; the package limit (p_max_w) is unknown — check it against the datasheet");
+            case OVER_LIMIT -> new Worded(est + " exceeds its " + Eng.of(pMax, "W") + " package limit — add external gate"
+                    + " resistance to move loss out of the driver, lower the frequency, or add a buffer stage", cmp);
+            case HOT -> new Worded(est + " uses more than " + Eng.pct(f.m.driverPower()) + " of its "
+                    + Eng.of(pMax, "W") + " limit — check the temperature rise at your ambient", cmp);
+            case COOL -> new Worded(est + ", within " + Eng.pct(f.m.driverPower()) + " of its " + Eng.of(pMax, "W") + " limit",
+                    cmp);
+        };
+    }
+}

@@ -1,0 +1,76 @@
+package org.gatefit.match;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * {@code lifecycle}: production status and stock of both parts ({@link Lifecycle}): obsolete
+ * fails, not-recommended, last-time-buy, preview and out of stock warn, an unknown status is
+ * unknown. Weight 0 in the electrical score: it counts through availability ({@link Score}).
+ */
+final class LifecycleRule implements PairRule {
+    enum Why implements Reason { CLEAR, NOTED }
+
+    @Override
+    public Rule rule() {
+        return Rule.LIFECYCLE;
+    }
+
+    /** Whether a part has anything to note: not active, or out of stock. */
+    private static boolean noted(Lifecycle l, long stock) {
+        return l != Lifecycle.ACTIVE || stock == 0;
+    }
+
+    @Override
+    public void judge(PairFigures f, Outcome out) {
+        judge(f.d, f.s, out);
+    }
+
+    /** The judgement on the parts alone (a p-channel pair has no figures, but a lifecycle). */
+    static void judge(DriverPart d, SwitchPart s, Outcome out) {
+        if (!noted(d.lifecycle(), d.stock()) && !noted(s.lifecycle(), s.stock())) {
+            out.pass(Why.CLEAR, 1);
+            return;
+        }
+        switch (d.lifecycle().verdict(d.stock()).and(s.lifecycle().verdict(s.stock()))) {
+            case FAIL -> out.fail(Why.NOTED);
+            case WARN -> out.warn(Why.NOTED, 0.5);
+            case UNKNOWN -> out.unknown(Why.NOTED);
+            case PASS -> throw new IllegalStateException("a noted part never passes");
+        }
+    }
+
+    @Override
+    public Worded word(PairFigures f, Reason why) {
+        return word(f.d, f.s, (Why) why);
+    }
+
+    static Worded word(DriverPart d, SwitchPart s, Why why) {
+        return switch (why) {
+            case CLEAR -> new Worded("both parts are active" + (d.stock() > 0 && s.stock() > 0 ? " and in stock" : ""));
+            case NOTED -> {
+                List<String> notes = new ArrayList<>();
+                note(notes, d.partNumber(), d.lifecycle(), d.stock());
+                note(notes, s.partNumber(), s.lifecycle(), s.stock());
+                boolean fails = d.lifecycle().verdict(d.stock()).and(s.lifecycle().verdict(s.stock())) == Verdict.FAIL;
+                yield new Worded(String.join("; ", notes) + (fails ? " — find a replacement ('gatefit replace')"
+                        : " — check availability or plan a second source"));
+            }
+        };
+    }
+
+    private static void note(List<String> notes, String pn, Lifecycle l, long stock) {
+        if (l.note() != null) {
+            notes.add(pn + " " + l.note());
+        }
+        if (stock == 0) {
+            notes.add(pn + " is out of stock");
+        }
+    }
+
+    /** An obsolete driver fails. */
+    @Override
+    public void certainFailures(Question q, Prefilter.Builder b) {
+        b.skip(Rule.LIFECYCLE, Prefilter.Condition.is("lifecycle", Prefilter.Op.EQ, Lifecycle.OBSOLETE.id()));
+    }
+}

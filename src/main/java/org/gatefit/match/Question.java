@@ -1,0 +1,104 @@
+package org.gatefit.match;
+
+import java.util.Objects;
+import java.util.Optional;
+import org.gatefit.physics.DriveCurrent;
+import org.gatefit.physics.GateCharge;
+
+/**
+ * One question put to the rules — a switch at an operating point, with margins — and the
+ * switch-side figures every driver shares (gate charge over the actual swing, the current the edge
+ * needs), computed once. Immutable.
+ */
+public final class Question {
+    final SwitchPart s;
+    final OperatingPoint op;
+    final Margins m;
+    /** Switches in parallel on the output. */
+    final int n;
+    /** Internal gate resistance, 0 when unknown (the operating point says so). */
+    final double rInt;
+    /** Q_g of one switch over the actual swing, C. */
+    final double qSwing;
+    /** Whether {@link #qSwing} is an estimate (extrapolated or taken as the datasheet's Q_g). */
+    final boolean qEstimated;
+    /** Q_g of all switches on the output, C; NaN when unknown. */
+    final double qTotal;
+    /** Gate current the target edge needs (before the drive-current margin), A; NaN when Q_g is unknown. */
+    final double iReq;
+    /** Whether the switch has a Miller plateau between the off and on levels (turn-on and turn-off times). */
+    final boolean plateau;
+
+    private Question(SwitchPart s, OperatingPoint op, Margins m) {
+        this.s = Objects.requireNonNull(s, "switch");
+        this.op = Objects.requireNonNull(op, "operating point");
+        this.m = Objects.requireNonNull(m, "margins");
+        this.n = op.parallel();
+        this.rInt = s.rGIntOrZero();
+        double qs;
+        boolean est;
+        try {
+            // q_g_vgs_v is the swing Q_g is specified over. When it equals the switch's recommended
+            // bipolar swing (e.g. −5 V to +18 V for SiC), the datasheet curve starts at the negative
+            // level: extrapolate from the recommended on level and take the negative part's charge,
+            // C_iss·|V_off,spec|, back out (REFERENCES.md §1 gate-charge curve; an estimate).
+            double vSpec = s.qGVgs();
+            double specNegCharge = 0;
+            if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
+                    && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5) {
+                vSpec = s.vGateOn();
+                double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
+                        : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
+                specNegCharge = cEq * -s.vGateOff();
+            }
+            Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG() - specNegCharge, s.qGs(), s.qGd(), vSpec,
+                    s.vPlateau(), s.cIss(), op.vDrive(), op.vDriveNeg());
+            if (q.isPresent()) {
+                qs = q.get().coulombs();
+                est = q.get().estimated() || specNegCharge > 0;
+            } else {
+                qs = s.qG();
+                est = true;
+            }
+        } catch (IllegalArgumentException e) {
+            qs = s.qG();
+            est = true;
+        }
+        this.qSwing = qs;
+        this.qEstimated = est;
+        this.qTotal = n * qs;
+        this.iReq = Double.isNaN(qTotal) ? Double.NaN : DriveCurrent.required(qTotal, op.edge());
+        this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
+                && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
+    }
+
+    /** The question for a switch at an operating point (after defaults) with these margins. */
+    public static Question of(SwitchPart s, OperatingPoint op, Margins m) {
+        return new Question(s, op, m);
+    }
+
+    /** The switch asked about. */
+    public SwitchPart switchPart() {
+        return s;
+    }
+
+    /** The operating point after defaults. */
+    public OperatingPoint point() {
+        return op;
+    }
+
+    /** The margins applied. */
+    public Margins margins() {
+        return m;
+    }
+
+    /** Total gate charge over the swing (all switches in parallel), C; NaN when Q_g is unknown. */
+    public double gateCharge() {
+        return qTotal;
+    }
+
+    /** Gate current the target edge needs (before the drive-current margin), A; NaN when Q_g is unknown. */
+    public double currentRequired() {
+        return iReq;
+    }
+}

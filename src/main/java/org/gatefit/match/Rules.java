@@ -1,0 +1,176 @@
+package org.gatefit.match;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Runs every rule of DESIGN.md on driver–switch pairs. Both ways of running them — the full
+ * evaluation with sentences, comparisons and figures ({@link #evaluate}) and the ranking of many
+ * drivers on verdict and score alone ({@link Ranking}) — call each rule's one {@link PairRule#judge};
+ * only the wording is left out while ranking.
+ */
+public final class Rules {
+    /** The rules a pair is checked against, in the order checks are listed ({@code catalog} belongs to stage checks). */
+    private static final PairRule[] PAIR_RULES = {new DriveCurrentRule(), new GateVoltageRule(), new NegativeBiasRule(),
+        new UvloRule(), new LogicLevelRule(), new PolarityRule(), new HighSideRule(), new BootstrapRule(),
+        new DriverPowerRule(), new DvDtRule(), new LifecycleRule()};
+
+    private Rules() {
+    }
+
+    /** All checks and figures of a pair. */
+    public static PairResult evaluate(DriverPart d, SwitchPart s, OperatingPoint op, Margins m) {
+        return evaluate(d, Question.of(s, op, m));
+    }
+
+    /** All checks and figures of a pair, with the switch side computed once ({@link Question}). */
+    public static PairResult evaluate(DriverPart d, Question q) {
+        if (!q.s.nChannel()) {
+            return pChannel(d, q);
+        }
+        PairFigures f = new PairFigures(q, d, true);
+        Outcome out = new Outcome();
+        List<Check> checks = new ArrayList<>(PAIR_RULES.length);
+        Verdict v = Verdict.PASS;
+        double sum = 0;
+        int w = 0;
+        for (PairRule rule : PAIR_RULES) {
+            String refused = judge(rule, f, out);
+            PairRule.Worded said = refused != null ? new PairRule.Worded("cannot estimate: " + refused)
+                    : rule.word(f, out.why());
+            checks.add(new Check(rule.rule(), out.verdict(), said.message(), said.compared(), out.score()));
+            v = v.and(out.verdict());
+            sum += rule.rule().weight() * out.score();
+            w += rule.rule().weight();
+        }
+        v = v.forPair();
+        double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
+                q.s.lifecycle().availability(q.s.stock()), v);
+        return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, f.figures(), q.op, q.m, Double.NaN);
+    }
+
+    /**
+     * Judges one rule; a physics model refusing the pair's values (out of its domain) makes the rule
+     * unknown, and the refusal is returned for the sentence (null when the rule judged).
+     */
+    private static String judge(PairRule rule, PairFigures f, Outcome out) {
+        try {
+            rule.judge(f, out);
+            return null;
+        } catch (IllegalArgumentException e) {
+            out.unknown(Reason.Common.CANNOT_ESTIMATE);
+            return e.getMessage();
+        }
+    }
+
+    /** The prefilter of a question: every rule's declared certain failures ({@link PairRule#certainFailures}). */
+    public static Prefilter prefilter(Question q) {
+        if (!q.s.nChannel()) {
+            return Prefilter.NONE; // every electrical check is unknown, so no driver is certain to fail
+        }
+        Prefilter.Builder b = new Prefilter.Builder();
+        for (PairRule r : PAIR_RULES) {
+            r.certainFailures(q, b);
+        }
+        return b.build();
+    }
+
+    /**
+     * Verdicts and scores for one question, driver after driver (a ranker keeps one per thread;
+     * each driver's figures are one small immutable value). Not thread-safe.
+     */
+    public static final class Ranking {
+        private final Question q;
+        private final boolean scoreFailing;
+        private final Outcome out = new Outcome();
+        private Verdict verdict;
+        private double score;
+
+        /** A ranking that scores every driver, failing ones included. */
+        public Ranking(Question q) {
+            this(q, true);
+        }
+
+        /**
+         * @param scoreFailing whether a failing driver gets its score; when false, the rules after
+         *                     the first that fails are not run (the verdict is fail whatever they
+         *                     say) and {@link #score()} is NaN for it, for a shortlist that lists
+         *                     no failing driver but counts them
+         */
+        public Ranking(Question q, boolean scoreFailing) {
+            this.q = q;
+            this.scoreFailing = scoreFailing;
+        }
+
+        /**
+         * Ranks one driver; {@link #verdict()} and {@link #score()} then hold its outcome (the score
+         * NaN for a failing driver when failing drivers are not scored).
+         */
+        public void rank(DriverPart d) {
+            if (!q.s.nChannel()) {
+                PairResult r = pChannel(d, q);
+                verdict = r.verdict();
+                score = r.score();
+                return;
+            }
+            PairFigures f = new PairFigures(q, d, false);
+            Verdict v = Verdict.PASS;
+            double sum = 0;
+            int w = 0;
+            for (PairRule rule : PAIR_RULES) {
+                judge(rule, f, out);
+                v = v.and(out.verdict());
+                if (v == Verdict.FAIL && !scoreFailing) {
+                    verdict = Verdict.FAIL;
+                    score = Double.NaN;
+                    return;
+                }
+                sum += rule.rule().weight() * out.score();
+                w += rule.rule().weight();
+            }
+            verdict = v.forPair();
+            score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), q.s.lifecycle().availability(q.s.stock()),
+                    verdict);
+        }
+
+        public Verdict verdict() {
+            return verdict;
+        }
+
+        public double score() {
+            return score;
+        }
+    }
+
+    /**
+     * The rules model an n-type gate (on level positive against the source). A p-channel switch's
+     * gate drive is the mirror image and is not modelled: every electrical check says so.
+     */
+    private static PairResult pChannel(DriverPart d, Question q) {
+        SwitchPart s = q.s;
+        List<Check> checks = new ArrayList<>();
+        double sum = 0;
+        int w = 0;
+        Verdict v = Verdict.PASS;
+        Outcome out = new Outcome();
+        for (PairRule r : PAIR_RULES) {
+            Check c;
+            if (r instanceof LifecycleRule) {
+                LifecycleRule.judge(d, s, out);
+                PairRule.Worded said = LifecycleRule.word(d, s, (LifecycleRule.Why) out.why());
+                c = new Check(r.rule(), out.verdict(), said.message(), List.of(), out.score());
+            } else {
+                c = new Check(r.rule(), Verdict.UNKNOWN, s.partNumber() + " is a p-channel switch; gatefit's rules model"
+                        + " n-channel gate drive only — check this pair by hand against both datasheets", List.of(),
+                        Score.UNKNOWN);
+            }
+            checks.add(c);
+            v = v.and(c.verdict());
+            sum += r.rule().weight() * c.score();
+            w += r.rule().weight();
+        }
+        v = v.forPair();
+        double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), s.lifecycle().availability(s.stock()), v);
+        return new PairResult(d.partNumber(), s.partNumber(), v, score, checks, List.of(), q.op, q.m, Double.NaN);
+    }
+}
