@@ -91,6 +91,6 @@ public final class CatalogParts implements PartSource {
     }
 
     private static PartSearch.Condition condition(Prefilter.Condition c) {
-        return new PartSearch.Condition(c.column(), PartSearch.Op.valueOf(c.op().name()), c.value());
+        return new PartSearch.Condition(c.column(), c.op(), c.value());
     }
 }

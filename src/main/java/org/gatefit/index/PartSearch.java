@@ -32,6 +32,7 @@ import org.gatefit.catalog.Cells;
 import org.gatefit.catalog.Column;
 import org.gatefit.catalog.ColumnType;
 import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Op;
 import org.gatefit.catalog.Row;
 import org.gatefit.catalog.Schema;
 
@@ -42,30 +43,6 @@ import org.gatefit.catalog.Schema;
  */
 public final class PartSearch {
     private static final Pattern WHERE = Pattern.compile("^\\s*([A-Za-z][A-Za-z0-9_]*)\\s*(<=|>=|!=|=|<|>)\\s*(.*?)\\s*$");
-
-    /** Comparison operators of {@code --where}. */
-    public enum Op {
-        LT("<"), LE("<="), GT(">"), GE(">="), EQ("="), NE("!=");
-
-        private final String symbol;
-
-        Op(String symbol) {
-            this.symbol = symbol;
-        }
-
-        public String symbol() {
-            return symbol;
-        }
-
-        static Op of(String s) {
-            for (Op o : values()) {
-                if (o.symbol.equals(s)) {
-                    return o;
-                }
-            }
-            throw new IllegalArgumentException("expected one of < <= > >= = !=, got " + s);
-        }
-    }
 
     /** One {@code --where} condition as typed. */
     public record Condition(String column, Op op, String value) {

@@ -14,11 +14,6 @@ final class BootstrapRule implements PairRule {
         DUTY_TOO_HIGH, NO_DUTY, BELOW_FULL, EXTERNAL_DIODE_NO_BUS, SIZED }
 
     @Override
-    public Rule rule() {
-        return Rule.BOOTSTRAP;
-    }
-
-    @Override
     public void judge(PairFigures f, Outcome out) {
         OperatingPoint op = f.op;
         double duty = op.dutyMax();

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
 import org.gatefit.physics.ESeries;
@@ -12,11 +13,6 @@ import org.gatefit.physics.ESeries;
  */
 final class DriveCurrentRule implements PairRule {
     enum Why implements Reason { NO_CHARGE, ENOUGH, THIN, SHORT }
-
-    @Override
-    public Rule rule() {
-        return Rule.DRIVE_CURRENT;
-    }
 
     /** Whether the source (turn-on) side is the weaker one relative to the need (ties: the source). */
     private static boolean sourceWorse(PairFigures f) {
@@ -96,8 +92,8 @@ final class DriveCurrentRule implements PairRule {
     public void certainFailures(Question q, Prefilter.Builder b) {
         if (!Double.isNaN(q.iReq) && q.iReq > 0) {
             double need = q.iReq * Math.min(1, q.m.driveCurrent());
-            b.require(Prefilter.Condition.of("i_source_a", Prefilter.Op.GE, need));
-            b.require(Prefilter.Condition.of("i_sink_a", Prefilter.Op.GE, need));
+            b.require(Prefilter.Condition.of("i_source_a", Op.GE, need));
+            b.require(Prefilter.Condition.of("i_sink_a", Op.GE, need));
         }
     }
 }

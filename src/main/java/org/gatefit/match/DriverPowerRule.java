@@ -12,11 +12,6 @@ final class DriverPowerRule implements PairRule {
     enum Why implements Reason { NO_CHARGE, NO_LIMIT, OVER_LIMIT, HOT, COOL }
 
     @Override
-    public Rule rule() {
-        return Rule.DRIVER_POWER;
-    }
-
-    @Override
     public void judge(PairFigures f, Outcome out) {
         double pMax = f.d.pMax();
         double allowed = pMax * f.m.driverPower();

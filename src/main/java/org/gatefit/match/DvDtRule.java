@@ -11,11 +11,6 @@ import org.gatefit.match.Check.Comparison;
 final class DvDtRule implements PairRule {
     enum Why implements Reason { NO_SWITCH_DATA, NO_SLEW, CLAMP_HOLDS, FALSE_TURN_ON, THIN, LOW }
 
-    @Override
-    public Rule rule() {
-        return Rule.DV_DT;
-    }
-
     private static double seen(PairFigures f) {
         return f.vInduced + f.op.vDriveNeg();
     }

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
@@ -13,11 +14,6 @@ import org.gatefit.match.Check.Comparison;
 final class GateVoltageRule implements PairRule {
     enum Why implements Reason { NO_LIMIT, SUPPLY_HIGH, SUPPLY_LOW, OVER_LIMIT, BELOW_THRESHOLD, NEAR_LIMIT, NO_FULL_LEVEL,
         UNDER_ENHANCED, FITS }
-
-    @Override
-    public Rule rule() {
-        return Rule.GATE_VOLTAGE;
-    }
 
     private static double limit(PairFigures f) {
         return f.s.vGsMax() * (1 - f.m.gateHeadroom());
@@ -111,8 +107,8 @@ final class GateVoltageRule implements PairRule {
     @Override
     public void certainFailures(Question q, Prefilter.Builder b) {
         if (!Double.isNaN(q.s.vGsMax())) {
-            b.require(Prefilter.Condition.of("v_supply_max_v", Prefilter.Op.GE, q.op.swing()));
-            b.require(Prefilter.Condition.of("v_supply_min_v", Prefilter.Op.LE, q.op.swing()));
+            b.require(Prefilter.Condition.of("v_supply_max_v", Op.GE, q.op.swing()));
+            b.require(Prefilter.Condition.of("v_supply_min_v", Op.LE, q.op.swing()));
         }
     }
 }

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
 
@@ -12,11 +13,6 @@ import org.gatefit.match.Check.Comparison;
 final class HighSideRule implements PairRule {
     enum Why implements Reason { LOW_SIDE, CANNOT_FLOAT, NO_ISOLATION, NO_BUS_ISOLATED, ISOLATION_BELOW_BUS, ISOLATION_THIN,
         ISOLATED_OK, NO_OFFSET, NO_BUS_OFFSET, OFFSET_BELOW_BUS, OFFSET_THIN, OFFSET_OK }
-
-    @Override
-    public Rule rule() {
-        return Rule.HIGH_SIDE;
-    }
 
     @Override
     public void judge(PairFigures f, Outcome out) {
@@ -101,15 +97,15 @@ final class HighSideRule implements PairRule {
         if (!q.op.highSide()) {
             return;
         }
-        b.require(Prefilter.Condition.is("topology", Prefilter.Op.NE, Topology.LOW_SIDE.id()));
+        b.require(Prefilter.Condition.is("topology", Op.NE, Topology.LOW_SIDE.id()));
         if (!Double.isNaN(q.op.bus())) {
             double bus = q.op.bus();
-            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Prefilter.Op.EQ, Topology.HIGH_SIDE.id()),
-                    Prefilter.Condition.of("v_offset_max_v", Prefilter.Op.LT, bus));
-            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Prefilter.Op.EQ, Topology.HALF_BRIDGE.id()),
-                    Prefilter.Condition.of("v_offset_max_v", Prefilter.Op.LT, bus));
-            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Prefilter.Op.EQ, Topology.ISOLATED.id()),
-                    Prefilter.Condition.of("isolation_vrms", Prefilter.Op.LT, bus));
+            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Op.EQ, Topology.HIGH_SIDE.id()),
+                    Prefilter.Condition.of("v_offset_max_v", Op.LT, bus));
+            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Op.EQ, Topology.HALF_BRIDGE.id()),
+                    Prefilter.Condition.of("v_offset_max_v", Op.LT, bus));
+            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Op.EQ, Topology.ISOLATED.id()),
+                    Prefilter.Condition.of("isolation_vrms", Op.LT, bus));
         }
     }
 }

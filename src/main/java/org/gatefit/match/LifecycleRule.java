@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -10,11 +11,6 @@ import java.util.List;
  */
 final class LifecycleRule implements PairRule {
     enum Why implements Reason { CLEAR, NOTED }
-
-    @Override
-    public Rule rule() {
-        return Rule.LIFECYCLE;
-    }
 
     /** Whether a part has anything to note: not active, or out of stock. */
     private static boolean noted(Lifecycle l, long stock) {
@@ -71,6 +67,6 @@ final class LifecycleRule implements PairRule {
     /** An obsolete driver fails. */
     @Override
     public void certainFailures(Question q, Prefilter.Builder b) {
-        b.skip(Rule.LIFECYCLE, Prefilter.Condition.is("lifecycle", Prefilter.Op.EQ, Lifecycle.OBSOLETE.id()));
+        b.skip(Rule.LIFECYCLE, Prefilter.Condition.is("lifecycle", Op.EQ, Lifecycle.OBSOLETE.id()));
     }
 }

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
@@ -11,11 +12,6 @@ import org.gatefit.match.Check.Comparison;
  */
 final class LogicLevelRule implements PairRule {
     enum Why implements Reason { NO_THRESHOLDS, OVER_INPUT_MAX, HIGH_MISSED, LOW_MISSED, THIN, CLEAR }
-
-    @Override
-    public Rule rule() {
-        return Rule.LOGIC_LEVEL;
-    }
 
     @Override
     public void judge(PairFigures f, Outcome out) {
@@ -80,13 +76,13 @@ final class LogicLevelRule implements PairRule {
     public void certainFailures(Question q, Prefilter.Builder b) {
         OperatingPoint op = q.op;
         if (Double.isFinite(op.vOh())) {
-            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_ih_v", Prefilter.Op.GT, op.vOh()), "v_il_v");
+            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_ih_v", Op.GT, op.vOh()), "v_il_v");
         }
         if (Double.isFinite(op.vOl())) {
-            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_il_v", Prefilter.Op.LT, op.vOl()), "v_ih_v");
+            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_il_v", Op.LT, op.vOl()), "v_ih_v");
         }
         if (Double.isFinite(op.vOhMax())) {
-            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_in_max_v", Prefilter.Op.LT, op.vOhMax()),
+            b.skipKnown(Rule.LOGIC_LEVEL, Prefilter.Condition.of("v_in_max_v", Op.LT, op.vOhMax()),
                     "v_ih_v", "v_il_v");
         }
     }

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
@@ -11,11 +12,6 @@ import org.gatefit.match.Check.Comparison;
  */
 final class NegativeBiasRule implements PairRule {
     enum Why implements Reason { NO_LIMIT, BELOW_LIMIT, NO_RAIL, BEYOND_RAIL, NEAR_LIMIT, CLAMP_HOLDS, LESS_NEGATIVE, FITS }
-
-    @Override
-    public Rule rule() {
-        return Rule.NEGATIVE_BIAS;
-    }
 
     private static double limit(PairFigures f) {
         return f.s.vGsMin() * (1 - f.m.gateHeadroom());
@@ -97,7 +93,7 @@ final class NegativeBiasRule implements PairRule {
     public void certainFailures(Question q, Prefilter.Builder b) {
         double off = q.op.vDriveNeg();
         if (off < 0 && !Double.isNaN(q.s.vGsMin()) && off >= q.s.vGsMin()) {
-            b.skip(Rule.NEGATIVE_BIAS, Prefilter.Condition.of("v_neg_min_v", Prefilter.Op.GT, off));
+            b.skip(Rule.NEGATIVE_BIAS, Prefilter.Condition.of("v_neg_min_v", Op.GT, off));
         }
     }
 }

@@ -18,9 +18,6 @@ import org.gatefit.match.Check.Comparison;
 sealed interface PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBiasRule, UvloRule, LogicLevelRule,
         PolarityRule, HighSideRule, BootstrapRule, DriverPowerRule, DvDtRule, LifecycleRule {
 
-    /** The rule's id, weight and description. */
-    Rule rule();
-
     /**
      * Judges the pair: calls one of {@code out}'s pass, warn, fail or unknown with a reason of this
      * rule. May throw {@link IllegalArgumentException} when a physics model refuses the pair's

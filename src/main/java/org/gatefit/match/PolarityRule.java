@@ -9,11 +9,6 @@ final class PolarityRule implements PairRule {
     enum Why implements Reason { BOTH_SENSES, INVERTING_MATCH, MATCH, INVERTING_ON_ACTIVE_HIGH, NON_INVERTING_ON_ACTIVE_LOW }
 
     @Override
-    public Rule rule() {
-        return Rule.POLARITY;
-    }
-
-    @Override
     public void judge(PairFigures f, Outcome out) {
         DriverPart d = f.d;
         boolean wantInverting = !f.op.activeHigh();

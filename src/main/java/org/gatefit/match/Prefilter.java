@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.function.Predicate;
+import org.gatefit.catalog.Op;
 
 /**
  * What a catalog may skip without evaluating, for one shortlist question: drivers that a rule is
@@ -50,21 +51,6 @@ public record Prefilter(List<Condition> require, List<Exclusion> exclude) {
             out.add("skip " + String.join(" and ", parts) + " (" + e.rule().id() + " fails)");
         }
         return out;
-    }
-
-    /** Comparison operators of a condition, with the symbols {@code find --where} reads. */
-    public enum Op {
-        LT("<"), LE("<="), GT(">"), GE(">="), EQ("="), NE("!=");
-
-        private final String symbol;
-
-        Op(String symbol) {
-            this.symbol = symbol;
-        }
-
-        public String symbol() {
-            return symbol;
-        }
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -187,16 +188,16 @@ public final class Replacement {
     public static Prefilter prefilter(Row original, boolean includeObsolete) {
         Prefilter.Builder b = new Prefilter.Builder();
         if (original.kind() == Kind.SWITCH) {
-            b.require(Prefilter.Condition.is("technology", Prefilter.Op.EQ, original.text("technology")));
-            b.require(Prefilter.Condition.of("v_block_v", Prefilter.Op.GE, original.number("v_block_v")));
-            b.require(Prefilter.Condition.of("v_gs_max_v", Prefilter.Op.GE, original.number("v_gs_max_v")));
-            b.require(Prefilter.Condition.of("v_gs_min_v", Prefilter.Op.LE, original.number("v_gs_min_v")));
+            b.require(Prefilter.Condition.is("technology", Op.EQ, original.text("technology")));
+            b.require(Prefilter.Condition.of("v_block_v", Op.GE, original.number("v_block_v")));
+            b.require(Prefilter.Condition.of("v_gs_max_v", Op.GE, original.number("v_gs_max_v")));
+            b.require(Prefilter.Condition.of("v_gs_min_v", Op.LE, original.number("v_gs_min_v")));
         } else {
-            b.require(Prefilter.Condition.is("topology", Prefilter.Op.EQ, original.text("topology")));
-            b.require(Prefilter.Condition.is("input_polarity", Prefilter.Op.EQ, original.text("input_polarity")));
+            b.require(Prefilter.Condition.is("topology", Op.EQ, original.text("topology")));
+            b.require(Prefilter.Condition.is("input_polarity", Op.EQ, original.text("input_polarity")));
         }
         if (!includeObsolete) {
-            b.require(Prefilter.Condition.is("lifecycle", Prefilter.Op.NE, Lifecycle.OBSOLETE.id()));
+            b.require(Prefilter.Condition.is("lifecycle", Op.NE, Lifecycle.OBSOLETE.id()));
         }
         return b.build();
     }

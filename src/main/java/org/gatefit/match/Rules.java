@@ -11,9 +11,16 @@ import java.util.List;
  */
 public final class Rules {
     /** The rules a pair is checked against, in the order checks are listed ({@code catalog} belongs to stage checks). */
-    private static final PairRule[] PAIR_RULES = {new DriveCurrentRule(), new GateVoltageRule(), new NegativeBiasRule(),
-        new UvloRule(), new LogicLevelRule(), new PolarityRule(), new HighSideRule(), new BootstrapRule(),
-        new DriverPowerRule(), new DvDtRule(), new LifecycleRule()};
+    private static final Entry[] PAIR_RULES = {new Entry(Rule.DRIVE_CURRENT, new DriveCurrentRule()),
+        new Entry(Rule.GATE_VOLTAGE, new GateVoltageRule()), new Entry(Rule.NEGATIVE_BIAS, new NegativeBiasRule()),
+        new Entry(Rule.UVLO, new UvloRule()), new Entry(Rule.LOGIC_LEVEL, new LogicLevelRule()),
+        new Entry(Rule.POLARITY, new PolarityRule()), new Entry(Rule.HIGH_SIDE, new HighSideRule()),
+        new Entry(Rule.BOOTSTRAP, new BootstrapRule()), new Entry(Rule.DRIVER_POWER, new DriverPowerRule()),
+        new Entry(Rule.DV_DT, new DvDtRule()), new Entry(Rule.LIFECYCLE, new LifecycleRule())};
+
+    /** A rule's id (name, weight, description) and its implementation. */
+    private record Entry(Rule id, PairRule rule) {
+    }
 
     private Rules() {
     }
@@ -34,14 +41,14 @@ public final class Rules {
         Verdict v = Verdict.PASS;
         double sum = 0;
         int w = 0;
-        for (PairRule rule : PAIR_RULES) {
-            String refused = judge(rule, f, out);
+        for (Entry e : PAIR_RULES) {
+            String refused = judge(e.rule(), f, out);
             PairRule.Worded said = refused != null ? new PairRule.Worded("cannot estimate: " + refused)
-                    : rule.word(f, out.why());
-            checks.add(new Check(rule.rule(), out.verdict(), said.message(), said.compared(), out.score()));
+                    : e.rule().word(f, out.why());
+            checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
             v = v.and(out.verdict());
-            sum += rule.rule().weight() * out.score();
-            w += rule.rule().weight();
+            sum += e.id().weight() * out.score();
+            w += e.id().weight();
         }
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
@@ -69,8 +76,8 @@ public final class Rules {
             return Prefilter.NONE; // every electrical check is unknown, so no driver is certain to fail
         }
         Prefilter.Builder b = new Prefilter.Builder();
-        for (PairRule r : PAIR_RULES) {
-            r.certainFailures(q, b);
+        for (Entry e : PAIR_RULES) {
+            e.rule().certainFailures(q, b);
         }
         return b.build();
     }
@@ -117,16 +124,16 @@ public final class Rules {
             Verdict v = Verdict.PASS;
             double sum = 0;
             int w = 0;
-            for (PairRule rule : PAIR_RULES) {
-                judge(rule, f, out);
+            for (Entry e : PAIR_RULES) {
+                judge(e.rule(), f, out);
                 v = v.and(out.verdict());
                 if (v == Verdict.FAIL && !scoreFailing) {
                     verdict = Verdict.FAIL;
                     score = Double.NaN;
                     return;
                 }
-                sum += rule.rule().weight() * out.score();
-                w += rule.rule().weight();
+                sum += e.id().weight() * out.score();
+                w += e.id().weight();
             }
             verdict = v.forPair();
             score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), q.s.lifecycle().availability(q.s.stock()),
@@ -153,21 +160,21 @@ public final class Rules {
         int w = 0;
         Verdict v = Verdict.PASS;
         Outcome out = new Outcome();
-        for (PairRule r : PAIR_RULES) {
+        for (Entry e : PAIR_RULES) {
             Check c;
-            if (r instanceof LifecycleRule) {
+            if (e.rule() instanceof LifecycleRule) {
                 LifecycleRule.judge(d, s, out);
                 PairRule.Worded said = LifecycleRule.word(d, s, (LifecycleRule.Why) out.why());
-                c = new Check(r.rule(), out.verdict(), said.message(), List.of(), out.score());
+                c = new Check(e.id(), out.verdict(), said.message(), List.of(), out.score());
             } else {
-                c = new Check(r.rule(), Verdict.UNKNOWN, s.partNumber() + " is a p-channel switch; gatefit's rules model"
+                c = new Check(e.id(), Verdict.UNKNOWN, s.partNumber() + " is a p-channel switch; gatefit's rules model"
                         + " n-channel gate drive only — check this pair by hand against both datasheets", List.of(),
                         Score.UNKNOWN);
             }
             checks.add(c);
             v = v.and(c.verdict());
-            sum += r.rule().weight() * c.score();
-            w += r.rule().weight();
+            sum += e.id().weight() * c.score();
+            w += e.id().weight();
         }
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), s.lifecycle().availability(s.stock()), v);

@@ -1,5 +1,6 @@
 package org.gatefit.match;
 
+import org.gatefit.catalog.Op;
 import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.match.Check.Comparison;
@@ -11,11 +12,6 @@ import org.gatefit.match.Check.Comparison;
  */
 final class UvloRule implements PairRule {
     enum Why implements Reason { NO_UVLO, NEVER_STARTS, HALF_ON, NEAR_START, NO_SWITCH_LEVELS, SAFE }
-
-    @Override
-    public Rule rule() {
-        return Rule.UVLO;
-    }
 
     /** The falling threshold, or the rising one when the falling one is unknown. */
     private static double offUvlo(DriverPart d) {
@@ -107,6 +103,6 @@ final class UvloRule implements PairRule {
     /** A driver whose UVLO rising threshold is above the supply never starts (NEVER_STARTS). */
     @Override
     public void certainFailures(Question q, Prefilter.Builder b) {
-        b.skip(Rule.UVLO, Prefilter.Condition.of("uvlo_on_v", Prefilter.Op.GT, q.op.swing()));
+        b.skip(Rule.UVLO, Prefilter.Condition.of("uvlo_on_v", Op.GT, q.op.swing()));
     }
 }

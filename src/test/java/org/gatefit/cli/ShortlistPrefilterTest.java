@@ -1,5 +1,6 @@
 package org.gatefit.cli;
 
+import org.gatefit.catalog.Op;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -132,12 +133,12 @@ class ShortlistPrefilterTest {
 
     /** A limit below which drivers are skipped ({@code x < limit}), as printed. */
     private static String down(double x) {
-        return Prefilter.Condition.of("v_ih_v", Prefilter.Op.LT, x).value();
+        return Prefilter.Condition.of("v_ih_v", Op.LT, x).value();
     }
 
     /** A limit above which drivers are skipped ({@code x > limit}), as printed. */
     private static String up(double x) {
-        return Prefilter.Condition.of("v_ih_v", Prefilter.Op.GT, x).value();
+        return Prefilter.Condition.of("v_ih_v", Op.GT, x).value();
     }
 
     @Test
@@ -154,8 +155,8 @@ class ShortlistPrefilterTest {
         for (double x : new double[] {0.22000000000000003, 3.0999999999999996, 1.3563628691983125, -4.2, 1e-7}) {
             assertTrue(Double.parseDouble(down(x)) <= x && Double.parseDouble(up(x)) >= x, "" + x);
         }
-        assertEquals("i_sink_a >= 1.356", Prefilter.Condition.of("i_sink_a", Prefilter.Op.GE, 1.3563628691983125).toString());
-        assertEquals("v_in_max_v <= 3.301", Prefilter.Condition.of("v_in_max_v", Prefilter.Op.LE, 3.3000000000000003).toString());
+        assertEquals("i_sink_a >= 1.356", Prefilter.Condition.of("i_sink_a", Op.GE, 1.3563628691983125).toString());
+        assertEquals("v_in_max_v <= 3.301", Prefilter.Condition.of("v_in_max_v", Op.LE, 3.3000000000000003).toString());
     }
 
     /** Lists equal, or a failure naming the first difference (not thousands of part numbers). */
