@@ -40,12 +40,19 @@ public final class Eng {
         return digits + " " + PREFIX[e3 + 5] + unit;
     }
 
-    /** Three significant digits, trailing zeros dropped. */
+    /** Three significant digits, trailing zeros dropped; "unknown" for NaN, ∞ for an unbounded value. */
     public static String num(double v) {
         if (v == 0) {
             return "0";
         }
+        if (!Double.isFinite(v)) {
+            return Double.isNaN(v) ? "unknown" : v > 0 ? "∞" : "−∞";
+        }
         double a = Math.abs(v);
+        if (a >= 1e15) {
+            // Far beyond any catalog figure (an extreme value the schema admits): keep it short.
+            return String.format(Locale.ROOT, "%.3g", v);
+        }
         int digits = a >= 100 ? 0 : a >= 10 ? 1 : a >= 1 ? 2 : 3;
         if (a < 0.01) {
             return String.format(Locale.ROOT, "%.3g", v);

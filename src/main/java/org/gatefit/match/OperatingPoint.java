@@ -176,7 +176,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             double on;
             if (vDrive != null) {
                 on = vDrive;
-            } else if (!Double.isNaN(sw.vGateOn())) {
+            } else if (sw.vGateOn() > 0) {
                 on = sw.vGateOn();
                 a.add("on level: " + Eng.of(on, "V") + ", the switch's recommended level (give --drive or v_drive_v)");
             } else if (!Double.isNaN(sw.rOnVgs()) && sw.rOnVgs() > 0) {

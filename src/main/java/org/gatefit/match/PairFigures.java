@@ -100,8 +100,9 @@ final class PairFigures {
             tOnPl = SwitchingTimes.plateauOn(n * s.qGd(), rOnTot, op.vDrive(), s.vPlateau());
             tOffPl = SwitchingTimes.plateauOff(n * s.qGd(), rOffTot, s.vPlateau(), op.vDriveNeg());
             if (detail && !Double.isNaN(s.cIss())) {
-                tdOn = SwitchingTimes.delayOn(rOnTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
-                tdOff = SwitchingTimes.delayOff(rOffTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg());
+                tdOn = shown(() -> SwitchingTimes.delayOn(rOnTot, n * s.cIss(), op.vDrive(), s.vPlateau(), op.vDriveNeg()));
+                tdOff = shown(() -> SwitchingTimes.delayOff(rOffTot, n * s.cIss(), op.vDrive(), s.vPlateau(),
+                        op.vDriveNeg()));
             }
         }
         plateauOn = tOnPl;
@@ -116,18 +117,15 @@ final class PairFigures {
         if (qKnown && rOnTot > 0 && rOffTot > 0) {
             double hs = op.highSide() && d.topology().bootstrapped() && !Double.isNaN(d.iQbs())
                     ? GatePower.highSideQuiescent(op.vDrive(), d.iQbs()) : 0;
+            // Only the driver's share is ruled on (driver-power); the split's other shares are figures,
+            // computed for the pairs that are shown (split's driver share is this same function).
+            pd = GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n, rInt / n) + hs;
             if (detail) {
-                pg = GatePower.total(qTotal, swing, op.fSw());
-                GatePower.Split split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n,
-                        op.rGOff() / n, rInt / n);
-                pd = split.driver() + hs;
-                pe = split.external();
-                pi = split.internal();
-            } else {
-                // Only the driver's share is ruled on (driver-power); the others are figures. The
-                // same function computes split's driver share, so the bits agree.
-                pd = GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
-                        rInt / n) + hs;
+                pg = shown(() -> GatePower.total(qTotal, swing, op.fSw()));
+                pe = shown(() -> GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
+                        rInt / n).external());
+                pi = shown(() -> GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
+                        rInt / n).internal());
             }
         }
         pGate = pg;
@@ -135,33 +133,12 @@ final class PairFigures {
         pExternal = pe;
         pInternal = pi;
 
-        double rc = Double.NaN;
-        double z = Double.NaN;
-        double lo = Double.NaN;
-        double hi = Double.NaN;
-        double rec = Double.NaN;
-        if (detail && !Double.isNaN(s.cIss()) && s.cIss() > 0) {
-            double cg = n * s.cIss();
-            rc = GateLoop.criticalResistance(op.loop(), cg);
-            z = GateLoop.dampingRatio(rOnTot, op.loop(), cg);
-            // Per-switch external resistor range: damping target at the low end, the drive-current edge at the high end.
-            double fixed = rSrc + rInt / n;
-            lo = Math.max(0, n * (DAMPING_TARGET * rc - fixed));
-            hi = n * (swing * op.edge() / (Margins.DEFAULT.driveCurrent() * qTotal) - fixed);
-            if (hi >= lo && hi > 0) {
-                // Aim at half the edge-limited maximum (margin on the edge, damping to spare; common
-                // practice, no source), but never below the damping minimum.
-                double aim = Math.max(lo, hi / 2);
-                double pick = ESeries.E24.roundNearest(aim);
-                if (pick < lo) {
-                    pick = ESeries.E24.roundUp(lo);
-                }
-                if (pick > hi) {
-                    pick = ESeries.E24.roundDown(hi);
-                }
-                rec = pick >= lo && pick <= hi ? pick : Double.NaN;
-            }
-        }
+        double[] loop = detail && !Double.isNaN(s.cIss()) && s.cIss() > 0 ? gateLoop(q, rSrc, rOnTot) : null;
+        double rc = loop == null ? Double.NaN : loop[0];
+        double z = loop == null ? Double.NaN : loop[1];
+        double lo = loop == null ? Double.NaN : loop[2];
+        double hi = loop == null ? Double.NaN : loop[3];
+        double rec = loop == null ? Double.NaN : loop[4];
         rCrit = rc;
         zeta = z;
         rgMin = lo;
@@ -196,7 +173,7 @@ final class PairFigures {
                     bDuty = Bootstrap.maxDuty(Bootstrap.refreshTime(op.rBoot(), bCRec,
                             Bootstrap.REFRESH_TIME_CONSTANTS), op.fSw());
                     if (detail && op.rBoot() > 0) {
-                        bInrush = Bootstrap.inrush(op.vDrive(), op.diodeDrop(), op.rBoot());
+                        bInrush = shown(() -> Bootstrap.inrush(op.vDrive(), op.diodeDrop(), op.rBoot()));
                     }
                 }
             }
@@ -227,13 +204,57 @@ final class PairFigures {
             double step = Double.isNaN(op.bus()) ? sl * 1e-6 : op.bus();
             vi = rOffPath > 0 ? DvDt.induced(s.cRss(), sl, rOffPath, s.cIss(), step) : 0;
             if (detail && !Double.isNaN(s.vThMin()) && s.vThMin() > 0 && rOffPath > 0 && step > 0) {
-                allowed = DvDt.allowedRcLimited(s.cRss(), rOffPath, s.cIss(), step, s.vThMin(), op.vDriveNeg());
+                double r = rOffPath;
+                allowed = shown(() -> DvDt.allowedRcLimited(s.cRss(), r, s.cIss(), step, s.vThMin(), op.vDriveNeg()));
             }
         } else if (!Double.isNaN(sl) && !Double.isNaN(s.cRss())) {
             vi = DvDt.inducedBound(s.cRss(), sl, rOffPath);
         }
         vInduced = vi;
         dvdtAllowed = allowed;
+    }
+
+    /**
+     * A figure only shown, never ruled on: NaN (left out) when its model refuses the pair's values,
+     * so a display figure can never change a verdict.
+     */
+    private static double shown(java.util.function.DoubleSupplier figure) {
+        try {
+            return figure.getAsDouble();
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            return Double.NaN;
+        }
+    }
+
+    /**
+     * The gate-loop figures (shown only): critical resistance, damping with the chosen resistor, and
+     * the per-switch external resistor range with its recommended E24 value — damping target at the
+     * low end, the drive-current edge at the high end. Each is NaN where its model refuses the values.
+     */
+    private static double[] gateLoop(Question q, double rSrc, double rOnTot) {
+        OperatingPoint op = q.op;
+        int n = q.n;
+        double cg = n * q.s.cIss();
+        double rc = shown(() -> GateLoop.criticalResistance(op.loop(), cg));
+        double z = shown(() -> GateLoop.dampingRatio(rOnTot, op.loop(), cg));
+        double fixed = rSrc + q.rInt / n;
+        double lo = Math.max(0, n * (DAMPING_TARGET * rc - fixed));
+        double hi = n * (op.swing() * op.edge() / (Margins.DEFAULT.driveCurrent() * q.qTotal) - fixed);
+        double rec = Double.NaN;
+        if (hi >= lo && hi > 0 && Double.isFinite(hi)) {
+            // Aim at half the edge-limited maximum (margin on the edge, damping to spare; common
+            // practice, no source), but never below the damping minimum.
+            double aim = Math.max(lo, hi / 2);
+            double pick = shown(() -> ESeries.E24.roundNearest(aim));
+            if (pick < lo) {
+                pick = shown(() -> ESeries.E24.roundUp(lo));
+            }
+            if (pick > hi) {
+                pick = shown(() -> ESeries.E24.roundDown(hi));
+            }
+            rec = pick >= lo && pick <= hi ? pick : Double.NaN;
+        }
+        return new double[] {rc, z, Double.isNaN(rc) ? Double.NaN : lo, hi, rec};
     }
 
     /** The on level for full enhancement: where R_DS(on) / V_CE(sat) is specified, else the recommended level. */

@@ -32,19 +32,25 @@ public final class Rules {
 
     /** All checks and figures of a pair, with the switch side computed once ({@link Question}). */
     public static PairResult evaluate(DriverPart d, Question q) {
-        if (!q.s.nChannel()) {
-            return pChannel(d, q);
+        String without = withoutFigures(q);
+        PairFigures f = null;
+        if (without == null) {
+            try {
+                f = new PairFigures(q, d, true);
+            } catch (IllegalArgumentException | ArithmeticException e) {
+                without = "cannot estimate: " + e.getMessage();
+            }
         }
-        PairFigures f = new PairFigures(q, d, true);
         Outcome out = new Outcome();
         List<Check> checks = new ArrayList<>(PAIR_RULES.length);
         Verdict v = Verdict.PASS;
         double sum = 0;
         int w = 0;
         for (Entry e : PAIR_RULES) {
-            String refused = judge(e.rule(), f, out);
-            PairRule.Worded said = refused != null ? new PairRule.Worded("cannot estimate: " + refused)
-                    : e.rule().word(f, out.why());
+            String refused = judge(e, f, d, q, out);
+            PairRule.Worded said = refused == null ? e.rule().word(f, out.why())
+                    : e.rule() instanceof LifecycleRule ? LifecycleRule.word(d, q.s, (LifecycleRule.Why) out.why())
+                    : new PairRule.Worded(f == null ? without : "cannot estimate: " + refused);
             checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
             v = v.and(out.verdict());
             sum += e.id().weight() * out.score();
@@ -53,20 +59,52 @@ public final class Rules {
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
                 q.s.lifecycle().availability(q.s.stock()), v);
-        return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, f.figures(), q.op, q.m, Double.NaN);
+        return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, f == null ? List.of() : f.figures(), q.op,
+                q.m, Double.NaN);
     }
 
     /**
-     * Judges one rule; a physics model refusing the pair's values (out of its domain) makes the rule
-     * unknown, and the refusal is returned for the sentence (null when the rule judged).
+     * Why no pair of this question has figures, or null when they can be computed: the rules model
+     * an n-type gate (on level positive against the source); a p-channel switch's gate drive is the
+     * mirror image and is not modelled, so every electrical check says so.
      */
-    private static String judge(PairRule rule, PairFigures f, Outcome out) {
-        try {
-            rule.judge(f, out);
+    private static String withoutFigures(Question q) {
+        return q.s.nChannel() ? null : q.s.partNumber() + " is a p-channel switch; gatefit's rules model n-channel gate"
+                + " drive only — check this pair by hand against both datasheets";
+    }
+
+    /** The figures of a pair for ranking, or null when the rules cannot compute them (every electrical rule unknown). */
+    private static PairFigures figuresOrNull(Question q, DriverPart d) {
+        if (withoutFigures(q) != null) {
             return null;
-        } catch (IllegalArgumentException e) {
+        }
+        try {
+            return new PairFigures(q, d, false);
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            return null;
+        }
+    }
+
+    /**
+     * Judges one rule. Without figures (a p-channel switch, or a physics model that refused the
+     * pair's values) every rule but the lifecycle is unknown; a rule whose own model refuses the
+     * values is unknown too. Returns why a rule could not judge (for the sentence), or null when it did.
+     */
+    private static String judge(Entry e, PairFigures f, DriverPart d, Question q, Outcome out) {
+        if (f == null) {
+            if (e.rule() instanceof LifecycleRule) {
+                LifecycleRule.judge(d, q.s, out);
+                return "";
+            }
             out.unknown(Reason.Common.CANNOT_ESTIMATE);
-            return e.getMessage();
+            return "";
+        }
+        try {
+            e.rule().judge(f, out);
+            return null;
+        } catch (IllegalArgumentException | ArithmeticException x) {
+            out.unknown(Reason.Common.CANNOT_ESTIMATE);
+            return x.getMessage();
         }
     }
 
@@ -114,18 +152,12 @@ public final class Rules {
          * NaN for a failing driver when failing drivers are not scored).
          */
         public void rank(DriverPart d) {
-            if (!q.s.nChannel()) {
-                PairResult r = pChannel(d, q);
-                verdict = r.verdict();
-                score = r.score();
-                return;
-            }
-            PairFigures f = new PairFigures(q, d, false);
+            PairFigures f = figuresOrNull(q, d);
             Verdict v = Verdict.PASS;
             double sum = 0;
             int w = 0;
             for (Entry e : PAIR_RULES) {
-                judge(e.rule(), f, out);
+                judge(e, f, d, q, out);
                 v = v.and(out.verdict());
                 if (v == Verdict.FAIL && !scoreFailing) {
                     verdict = Verdict.FAIL;
@@ -147,37 +179,5 @@ public final class Rules {
         public double score() {
             return score;
         }
-    }
-
-    /**
-     * The rules model an n-type gate (on level positive against the source). A p-channel switch's
-     * gate drive is the mirror image and is not modelled: every electrical check says so.
-     */
-    private static PairResult pChannel(DriverPart d, Question q) {
-        SwitchPart s = q.s;
-        List<Check> checks = new ArrayList<>();
-        double sum = 0;
-        int w = 0;
-        Verdict v = Verdict.PASS;
-        Outcome out = new Outcome();
-        for (Entry e : PAIR_RULES) {
-            Check c;
-            if (e.rule() instanceof LifecycleRule) {
-                LifecycleRule.judge(d, s, out);
-                PairRule.Worded said = LifecycleRule.word(d, s, (LifecycleRule.Why) out.why());
-                c = new Check(e.id(), out.verdict(), said.message(), List.of(), out.score());
-            } else {
-                c = new Check(e.id(), Verdict.UNKNOWN, s.partNumber() + " is a p-channel switch; gatefit's rules model"
-                        + " n-channel gate drive only — check this pair by hand against both datasheets", List.of(),
-                        Score.UNKNOWN);
-            }
-            checks.add(c);
-            v = v.and(c.verdict());
-            sum += e.id().weight() * c.score();
-            w += e.id().weight();
-        }
-        v = v.forPair();
-        double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), s.lifecycle().availability(s.stock()), v);
-        return new PairResult(d.partNumber(), s.partNumber(), v, score, checks, List.of(), q.op, q.m, Double.NaN);
     }
 }

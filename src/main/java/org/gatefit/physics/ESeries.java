@@ -41,6 +41,13 @@ public enum ESeries {
         return mantissas.clone();
     }
 
+    /**
+     * The values a series rounds: 1e-30 to 1e30 covers every component value (femtofarads to
+     * gigaohms) with room to spare; beyond it the decade arithmetic would underflow or overflow.
+     */
+    static final double MIN_VALUE = 1e-30;
+    static final double MAX_VALUE = 1e30;
+
     /** Round to the nearest series value on a log scale (ties up). */
     public double roundNearest(double value) {
         double up = roundUp(value);
@@ -54,7 +61,7 @@ public enum ESeries {
      * the same value (ESeriesTest).
      */
     public double roundUp(double value) {
-        Require.positive("value to round", "", value);
+        Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         double t = value * (1 - EPS);
         if (t > table[0] && t <= table[table.length - 1]) {
             int i = java.util.Arrays.binarySearch(table, t);
@@ -65,7 +72,7 @@ public enum ESeries {
 
     /** {@link #roundUp} by walking the decades around the value. */
     double roundUpByDecades(double value) {
-        Require.positive("value to round", "", value);
+        Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         int decade = (int) Math.floor(Math.log10(value));
         for (int d = decade - 1; d <= decade + 1; d++) {
             for (int m : mantissas) {
@@ -80,7 +87,7 @@ public enum ESeries {
 
     /** Round down to the largest series value ≤ {@code value} (for a maximum resistance); as {@link #roundUp}. */
     public double roundDown(double value) {
-        Require.positive("value to round", "", value);
+        Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         double t = value * (1 + EPS);
         if (t >= table[0] && t < table[table.length - 1]) {
             int i = java.util.Arrays.binarySearch(table, t);
@@ -91,7 +98,7 @@ public enum ESeries {
 
     /** {@link #roundDown} by walking the decades around the value. */
     double roundDownByDecades(double value) {
-        Require.positive("value to round", "", value);
+        Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         int decade = (int) Math.floor(Math.log10(value));
         for (int d = decade + 1; d >= decade - 1; d--) {
             for (int k = mantissas.length - 1; k >= 0; k--) {

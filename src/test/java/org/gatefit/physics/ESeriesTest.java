@@ -71,12 +71,17 @@ class ESeriesTest {
     }
 
     @Test
-    void rejectsNonPositiveValues() {
-        assertEquals("expected value to round > 0, got 0.0",
+    void rejectsValuesOutsideComponentRange() {
+        assertEquals("expected value to round in [1.0E-30, 1.0E30], got 0.0",
                 assertThrows(IllegalArgumentException.class, () -> ESeries.E12.roundUp(0))
                         .getMessage());
         assertThrows(IllegalArgumentException.class, () -> ESeries.E24.roundDown(-1));
         assertThrows(IllegalArgumentException.class,
                 () -> ESeries.E6.roundNearest(Double.POSITIVE_INFINITY));
+        // A subnormal capacitance (an extreme value a catalog admits) is refused, not walked into
+        // decades that underflow.
+        assertThrows(IllegalArgumentException.class, () -> ESeries.E12.roundUp(1.485e-317));
+        assertThrows(IllegalArgumentException.class, () -> ESeries.E24.roundDown(1e300));
+        assertEquals(1e-12, ESeries.E12.roundUp(1e-12), 1e-24, "a picofarad is in range");
     }
 }
