@@ -1,11 +1,7 @@
 package org.gatefit.catalog;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.Reader;
-import java.io.UncheckedIOException;
 import java.math.BigInteger;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -16,9 +12,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 
 /**
  * A bill of materials as EDA tools export it: a designator column (also called reference or
@@ -35,10 +28,11 @@ public final class Bom {
     private static final List<String> QUANTITY = List.of("quantity", "qty", "qty.", "count");
     private static final List<String> DNP = List.of("dnp", "do not place", "do not populate", "dni", "not fitted", "nf");
     private static final Pattern RANGE = Pattern.compile("^([A-Za-z_]+)(\\d+)\\s*[-–]\\s*([A-Za-z_]*)(\\d+)$");
-    private static final Pattern DASH = Pattern.compile("\\s*[-–]\\s*");
     private static final Pattern SINGLE = Pattern.compile("^[A-Za-z_]+\\d*[A-Za-z]?$");
     /** Most designators one range may expand to (guards against "R1-R999999"). */
     static final int RANGE_LIMIT = 10_000;
+    /** Longest designator or range, in characters (reading a longer number would take time growing with its square). */
+    static final int DESIGNATOR_CHARS = 100;
 
     /**
      * One designator of the BOM.
@@ -84,27 +78,31 @@ public final class Bom {
     /** Expands a designator cell: {@code "Q1, Q3-Q6"} → Q1, Q3, Q4, Q5, Q6. */
     public static List<String> expand(String cell) throws BadValueException {
         List<String> out = new ArrayList<>();
-        for (String part : DASH.matcher(cell).replaceAll("-").split("[,;\\s]+")) {
+        for (String part : joinDashes(cell).split("[,;\\s]+")) {
             String p = part.strip();
             if (p.isEmpty()) {
                 continue;
+            }
+            if (p.length() > DESIGNATOR_CHARS) {
+                throw new BadValueException(Problem.quote(p) + " is too long for a designator or range (expected at most "
+                        + DESIGNATOR_CHARS + " characters, e.g. Q1 or Q3-Q6)");
             }
             Matcher m = RANGE.matcher(p);
             if (m.matches()) {
                 String prefix = m.group(1);
                 if (!m.group(3).isEmpty() && !m.group(3).equalsIgnoreCase(prefix)) {
-                    throw new BadValueException("range '" + p + "' mixes prefixes " + prefix + " and " + m.group(3)
+                    throw new BadValueException("range " + Problem.quote(p) + " mixes prefixes " + prefix + " and " + m.group(3)
                             + " (expected e.g. Q3-Q6)");
                 }
                 // BigInteger: the digits may be longer than a long holds ("R1-R99999999999999999999")
                 BigInteger a = new BigInteger(m.group(2));
                 BigInteger b = new BigInteger(m.group(4));
                 if (b.compareTo(a) < 0) {
-                    throw new BadValueException("range '" + p + "' runs backwards (expected the lower number first)");
+                    throw new BadValueException("range " + Problem.quote(p) + " runs backwards (expected the lower number first)");
                 }
                 BigInteger count = b.subtract(a).add(BigInteger.ONE);
                 if (count.compareTo(BigInteger.valueOf(RANGE_LIMIT)) > 0) {
-                    throw new BadValueException("range '" + p + "' expands to " + count + " designators (at most "
+                    throw new BadValueException("range " + Problem.quote(p) + " expands to " + count + " designators (at most "
                             + RANGE_LIMIT + ")");
                 }
                 int width = m.group(2).length() > 1 && m.group(2).startsWith("0") ? m.group(2).length() : 0;
@@ -118,141 +116,156 @@ public final class Bom {
             } else if (SINGLE.matcher(p).matches()) {
                 out.add(p.toUpperCase(Locale.ROOT));
             } else {
-                throw new BadValueException("'" + p + "' is not a designator (expected e.g. Q1, or a range such as Q3-Q6)");
+                throw new BadValueException(Problem.quote(p) + " is not a designator (expected e.g. Q1, or a range such as Q3-Q6)");
             }
         }
         return out;
     }
 
-    /** Reads a BOM; every problem is reported with file, line and column. */
+    /**
+     * The cell with each dash ({@code -} or {@code –}) written {@code -} and the spaces around it
+     * removed ({@code Q3 – Q6} → {@code Q3-Q6}), in one pass (a regular expression for it takes
+     * time growing with the square of a run of spaces).
+     */
+    private static String joinDashes(String cell) {
+        StringBuilder sb = new StringBuilder(cell.length());
+        int n = cell.length();
+        for (int i = 0; i < n; ) {
+            char c = cell.charAt(i);
+            if (space(c)) {
+                int j = i;
+                while (j < n && space(cell.charAt(j))) {
+                    j++;
+                }
+                boolean dashBefore = sb.length() > 0 && sb.charAt(sb.length() - 1) == '-';
+                boolean dashAfter = j < n && (cell.charAt(j) == '-' || cell.charAt(j) == '–');
+                if (!dashBefore && !dashAfter) {
+                    sb.append(cell, i, j);
+                }
+                i = j;
+            } else {
+                sb.append(c == '–' ? '-' : c);
+                i++;
+            }
+        }
+        return sb.toString();
+    }
+
+    /** What {@code \s} matches in a regular expression, and the split below splits on. */
+    private static boolean space(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == 0x0B || c == '\f' || c == '\r';
+    }
+
+    /**
+     * Reads a BOM through the same front end as catalogs ({@link SheetReader#records}: UTF-8 with
+     * or without a byte-order mark, comma, semicolon or tab separated, lines of any length); every
+     * problem is reported with file, line and column.
+     */
     public static Bom read(Path path, String name) throws IOException, CatalogDataException {
-        byte[] head = new byte[3];
-        try (var in = Files.newInputStream(path)) {
-            int n = in.readNBytes(head, 0, 3);
-            if (n == 0) {
-                throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM is empty (expected a header with"
-                        + " designator and part-number columns)"));
-            }
+        if (Files.size(path) == 0) {
+            throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM is empty (expected a header with"
+                    + " designator and part-number columns)"));
         }
-        try (Reader r = Files.newBufferedReader(path, StandardCharsets.UTF_8)) {
-            BufferedReader br = new BufferedReader(r);
-            br.mark(4);
-            if (br.read() != '\uFEFF') {
-                br.reset();
-            }
-            String firstLine;
-            br.mark(1 << 16);
-            firstLine = br.readLine();
-            br.reset();
-            char delim = firstLine == null ? ',' : count(firstLine, ';') > count(firstLine, ',') ? ';'
-                    : count(firstLine, '\t') > count(firstLine, ',') ? '\t' : ',';
-            CSVFormat f = CSVFormat.DEFAULT.builder().setDelimiter(delim).setIgnoreEmptyLines(false).get();
-            try (CSVParser p = CSVParser.builder().setReader(br).setFormat(f).get()) {
-                return parse(p, name);
-            } catch (UncheckedIOException e) {
-                throw new CatalogDataException(Problem.ofLine(name, 0, "cannot read the BOM as CSV: "
-                        + e.getCause().getMessage()));
-            }
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM is not UTF-8 text (expected a UTF-8 CSV file)"));
-        }
+        Reading reading = new Reading(name);
+        SheetReader.records(path, name, reading);
+        return reading.finish();
     }
 
-    private static int count(String s, char c) {
-        int n = 0;
-        for (int i = 0; i < s.length(); i++) {
-            if (s.charAt(i) == c) {
-                n++;
-            }
-        }
-        return n;
-    }
+    /** The BOM as its records arrive: the header's columns, then one entry per designator. */
+    private static final class Reading implements SheetReader.Records {
+        private final String name;
+        private final List<Problem> problems = new ArrayList<>();
+        private final List<String> notes = new ArrayList<>();
+        private final Map<String, Entry> map = new LinkedHashMap<>();
+        private int dCol = -1;
+        private int pCol = -1;
+        private int qCol = -1;
+        private int nCol = -1;
+        private List<String> headerCells;
 
-    private static Bom parse(CSVParser p, String name) throws CatalogDataException {
-        List<Problem> problems = new ArrayList<>();
-        List<String> notes = new ArrayList<>();
-        Map<String, Entry> map = new LinkedHashMap<>();
-        int dCol = -1;
-        int pCol = -1;
-        int qCol = -1;
-        int nCol = -1;
-        long prevEnd = 0;
-        boolean header = true;
-        List<String> headerCells = List.of();
-        for (CSVRecord rec : p) {
-            long line = prevEnd + 1;
-            prevEnd = p.getCurrentLineNumber();
-            if (rec.size() == 1 && rec.get(0).isBlank()) {
-                continue;
-            }
-            if (header) {
-                headerCells = rec.toList();
-                for (int i = 0; i < rec.size(); i++) {
-                    String h = rec.get(i).strip().toLowerCase(Locale.ROOT);
-                    if (dCol < 0 && DESIGNATOR.contains(h)) {
-                        dCol = i;
-                    } else if (pCol < 0 && PART.contains(h)) {
-                        pCol = i;
-                    } else if (qCol < 0 && QUANTITY.contains(h)) {
-                        qCol = i;
-                    } else if (nCol < 0 && DNP.contains(h)) {
-                        nCol = i;
-                    }
-                }
-                if (dCol < 0 || pCol < 0) {
-                    throw new CatalogDataException(Problem.ofLine(name, line, "the BOM header lacks a "
-                            + (dCol < 0 ? "designator column (expected one named Designator, Reference or RefDes)"
-                            : "part-number column (expected one named Manufacturer Part Number, MPN or Part Number)")
-                            + "; found: " + String.join(", ", headerCells)));
-                }
-                header = false;
-                continue;
+        Reading(String name) {
+            this.name = name;
+        }
+
+        @Override
+        public void record(long line, List<String> rec) throws CatalogDataException {
+            if (headerCells == null) {
+                header(line, rec);
+                return;
             }
             String dCell = dCol < rec.size() ? rec.get(dCol) : "";
             String pn = pCol < rec.size() ? rec.get(pCol).strip() : "";
             if (dCell.isBlank()) {
-                continue;
+                return;
             }
             List<String> des;
             try {
                 des = expand(dCell);
             } catch (BadValueException e) {
-                problems.add(new Problem(name, line, headerCells.get(dCol).strip(), dCol + 1, dCell, e.getMessage()));
-                continue;
+                problems.add(new Problem(name, line, column(dCol), dCol + 1, dCell, e.getMessage()));
+                return;
             }
             boolean dnp = nCol >= 0 && nCol < rec.size() && truthy(rec.get(nCol));
             if (pn.isEmpty() && !dnp) {
-                problems.add(new Problem(name, line, headerCells.get(pCol).strip(), pCol + 1, "",
-                        "no part number for " + dCell.strip() + " (expected a part number, or mark the row do-not-place)"));
-                continue;
+                problems.add(new Problem(name, line, column(pCol), pCol + 1, "", "no part number for "
+                        + Problem.excerpt(dCell.strip()) + " (expected a part number, or mark the row do-not-place)"));
+                return;
             }
             if (qCol >= 0 && qCol < rec.size() && !rec.get(qCol).isBlank()) {
                 try {
                     long q = Units.parseInteger(rec.get(qCol));
                     if (q != des.size()) {
                         notes.add(name + " line " + line + ": quantity " + q + " but " + des.size() + " designators ("
-                                + dCell.strip() + ")");
+                                + Problem.excerpt(dCell.strip()) + ")");
                     }
                 } catch (BadValueException e) {
-                    problems.add(new Problem(name, line, headerCells.get(qCol).strip(), qCol + 1, rec.get(qCol),
-                            e.getMessage()));
+                    problems.add(new Problem(name, line, column(qCol), qCol + 1, rec.get(qCol), e.getMessage()));
                 }
             }
             for (String d : des) {
                 Entry prev = map.putIfAbsent(d, new Entry(d, pn, dnp, line));
                 if (prev != null) {
-                    problems.add(new Problem(name, line, headerCells.get(dCol).strip(), dCol + 1, dCell,
+                    problems.add(new Problem(name, line, column(dCol), dCol + 1, dCell,
                             "designator " + d + " is also on line " + prev.line() + " (expected each designator once)"));
                 }
             }
         }
-        if (header) {
-            throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM has no header line"));
+
+        private void header(long line, List<String> rec) throws CatalogDataException {
+            headerCells = rec;
+            for (int i = 0; i < rec.size(); i++) {
+                String h = rec.get(i).strip().toLowerCase(Locale.ROOT);
+                if (dCol < 0 && DESIGNATOR.contains(h)) {
+                    dCol = i;
+                } else if (pCol < 0 && PART.contains(h)) {
+                    pCol = i;
+                } else if (qCol < 0 && QUANTITY.contains(h)) {
+                    qCol = i;
+                } else if (nCol < 0 && DNP.contains(h)) {
+                    nCol = i;
+                }
+            }
+            if (dCol < 0 || pCol < 0) {
+                throw new CatalogDataException(Problem.ofLine(name, line, "the BOM header lacks a "
+                        + (dCol < 0 ? "designator column (expected one named Designator, Reference or RefDes)"
+                        : "part-number column (expected one named Manufacturer Part Number, MPN or Part Number)")
+                        + "; found: " + Problem.names(headerCells)));
+            }
         }
-        if (!problems.isEmpty()) {
-            throw new CatalogDataException(problems, problems.size());
+
+        private String column(int i) {
+            return Problem.excerpt(headerCells.get(i).strip());
         }
-        return new Bom(name, map, notes);
+
+        Bom finish() throws CatalogDataException {
+            if (headerCells == null) {
+                throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM has no header line"));
+            }
+            if (!problems.isEmpty()) {
+                throw new CatalogDataException(problems, problems.size());
+            }
+            return new Bom(name, map, notes);
+        }
     }
 
     private static boolean truthy(String s) {

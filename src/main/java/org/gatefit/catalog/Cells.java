@@ -217,7 +217,7 @@ public final class Cells {
                 v = SPACE.matcher(v).replaceAll("");
             }
             if (!c.pattern().matcher(v).matches()) {
-                throw new BadValueException("'" + t + "' is not valid (expected " + c.description()
+                throw new BadValueException(Problem.quote(t) + " is not valid (expected " + c.description()
                         .replaceAll("\\.$", "").toLowerCase(Locale.ROOT) + ")");
             }
         }
@@ -246,13 +246,14 @@ public final class Cells {
             };
         }
         if (!c.choices().contains(v)) {
-            throw new BadValueException("'" + t + "' is not one of the allowed values (expected one of "
+            throw new BadValueException(Problem.quote(t) + " is not one of the allowed values (expected one of "
                     + String.join(", ", c.choices()) + ")");
         }
         return v;
     }
 
     private static double plainNumber(Column c, String t, boolean decimalComma) throws BadValueException {
+        Units.checkLength(t, c.expectation());
         String s = decimalComma ? t.replace(',', '.') : t;
         if (Units.plainDecimal(s)) {
             return Units.plainDecimalValue(s); // what the pattern and parseDouble below give, without them
@@ -267,7 +268,7 @@ public final class Cells {
             }
             return d;
         } catch (NumberFormatException e) {
-            throw new BadValueException("'" + t + "' is not a number (expected " + c.expectation() + ")");
+            throw new BadValueException(Problem.quote(t) + " is not a number (expected " + c.expectation() + ")");
         }
     }
 
@@ -276,12 +277,12 @@ public final class Cells {
             double min = c.minimum();
             if (c.minExclusive() ? v <= min : v < min) {
                 String rel = c.minExclusive() ? "above " : "at least ";
-                throw new BadValueException("'" + t + "' is out of range (expected a value " + rel
+                throw new BadValueException(Problem.quote(t) + " is out of range (expected a value " + rel
                         + Numbers.format(min) + unitSuffix(c) + ")");
             }
         }
         if (c.maximum() != null && v > c.maximum()) {
-            throw new BadValueException("'" + t + "' is out of range (expected a value at most "
+            throw new BadValueException(Problem.quote(t) + " is out of range (expected a value at most "
                     + Numbers.format(c.maximum()) + unitSuffix(c) + ")");
         }
     }

@@ -20,6 +20,50 @@ public record Problem(String file, long line, String column, int columnNumber, S
         if (line < 0) {
             throw new IllegalArgumentException("expected a line number ≥ 0, got " + line);
         }
+        column = excerpt(column);
+        text = excerpt(text); // a megabyte cell is not kept (up to 200 problems per file) nor reported whole
+    }
+
+    /** Characters of a cell that messages and reports quote, at most. */
+    public static final int QUOTED = 80;
+
+    /**
+     * {@code s} when it is at most {@link #QUOTED} characters long, else its first {@link #QUOTED}
+     * characters (never half a surrogate pair), an ellipsis and its length: {@code 1234…
+     * (1,000,000 characters)}. Null stays null.
+     */
+    public static String excerpt(String s) {
+        if (s == null || s.length() <= QUOTED) {
+            return s;
+        }
+        int end = Character.isHighSurrogate(s.charAt(QUOTED - 1)) ? QUOTED - 1 : QUOTED;
+        return s.substring(0, end) + "… (" + String.format(java.util.Locale.ROOT, "%,d", s.length()) + " characters)";
+    }
+
+    /** Text from a cell for a message: {@code 'text'}, or {@code 'first 80 characters…' (N characters)}. */
+    public static String quote(String s) {
+        if (s == null || s.length() <= QUOTED) {
+            return "'" + s + "'";
+        }
+        String e = excerpt(s);
+        int paren = e.lastIndexOf(" (");
+        return "'" + e.substring(0, paren) + "'" + e.substring(paren);
+    }
+
+    /** Names for a message, each {@link #excerpt excerpted}, the first 20 of them: {@code a, b, c … and 7 more}. */
+    public static String names(java.util.List<String> names) {
+        StringBuilder sb = new StringBuilder();
+        int n = 0;
+        for (String name : names) {
+            if (n == 20) {
+                return sb.append(" … and ").append(names.size() - n).append(" more").toString();
+            }
+            if (n++ > 0) {
+                sb.append(", ");
+            }
+            sb.append(excerpt(name));
+        }
+        return sb.toString();
     }
 
     /** A problem of a whole line. */

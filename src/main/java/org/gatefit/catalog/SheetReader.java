@@ -119,6 +119,22 @@ public final class SheetReader {
     }
 
     private Summary read(InputStream in, Sink sink) throws IOException {
+        CsvLexer lexer = lexer(in);
+        if (lexer == null) {
+            return new Summary(file, null, "", 0, 0, List.of(), List.of(), ',', problems, problemCount, true);
+        }
+        return readRecords(lexer, delimiter, sink);
+    }
+
+    /** Separator of the file {@link #lexer} opened. */
+    private char delimiter = ',';
+
+    /**
+     * The front end of every sheet: a UTF-8 byte-order mark skipped, UTF-16 refused, strict UTF-8,
+     * the separator told from the header line. Returns the lexer, or null after adding the
+     * problem that stops the reading.
+     */
+    private CsvLexer lexer(InputStream in) throws IOException {
         // Nothing here closes the stream: the caller owns it (and hashes the rest of it).
         PushbackInputStream pin = new PushbackInputStream(in, 3);
         byte[] bom = pin.readNBytes(3);
@@ -127,23 +143,63 @@ public final class SheetReader {
             keep = 0;
         } else if (bom.length >= 2 && (((bom[0] & 0xff) == 0xFE && (bom[1] & 0xff) == 0xFF)
                 || ((bom[0] & 0xff) == 0xFF && (bom[1] & 0xff) == 0xFE))) {
-            return fatal(null, List.of(), ',', Problem.ofLine(file, 1,
-                    "the file is UTF-16 text (expected UTF-8; save it as \"CSV UTF-8\")"));
+            add(Problem.ofLine(file, 1, "the file is UTF-16 text (expected UTF-8; save it as \"CSV UTF-8\")"));
+            return null;
         }
         if (bom.length == 0) {
-            return fatal(null, List.of(), ',', Problem.ofLine(file, 0,
+            add(Problem.ofLine(file, 0,
                     "the file is empty (expected a header line naming the columns, then one row per part)"));
+            return null;
         }
         pin.unread(bom, 0, keep);
         CsvLexer lexer = new CsvLexer(new StrictUtf8Reader(pin));
-        char delimiter;
         try {
             delimiter = lexer.sniffDelimiter();
         } catch (CharacterCodingException e) {
-            return fatal(null, List.of(), ',', notUtf8(1));
+            add(notUtf8(1));
+            return null;
         }
         lexer.delimiter(delimiter);
-        return readRecords(lexer, delimiter, sink);
+        return lexer;
+    }
+
+    /** Receives the records of a sheet read by {@link #records}. */
+    interface Records {
+        /**
+         * One record that is not blank.
+         *
+         * @param line  physical line it starts on
+         * @param cells its cells as written
+         */
+        void record(long line, List<String> cells) throws CatalogDataException;
+    }
+
+    /**
+     * Reads a sheet that has no schema (a BOM) through the same front end and CSV rules as
+     * catalogs, handing every non-blank record to {@code sink}; lines of any length. A file that
+     * cannot be read as CSV (empty, UTF-16, not UTF-8, an unclosed quote) is bad input naming the
+     * file and line.
+     */
+    static void records(Path path, String displayName, Records sink) throws IOException, CatalogDataException {
+        SheetReader r = new SheetReader(displayName, null);
+        try (InputStream in = Files.newInputStream(path)) {
+            CsvLexer lexer = r.lexer(in);
+            if (lexer == null) {
+                throw new CatalogDataException(r.problems, r.problemCount);
+            }
+            while (true) {
+                try {
+                    if (!lexer.next()) {
+                        return;
+                    }
+                } catch (IOException e) {
+                    throw new CatalogDataException(r.readFailure(e, lexer.startLine()));
+                }
+                if (!lexer.blank()) {
+                    sink.record(lexer.startLine(), lexer.toList());
+                }
+            }
+        }
     }
 
     private Summary readRecords(CsvLexer lexer, char delimiter, Sink sink) throws IOException {
@@ -198,7 +254,7 @@ public final class SheetReader {
                 Long before = seen.putIfAbsent(id, start);
                 if (before != null) {
                     rowProblems.add(new Problem(file, start, keyColumn, layout.position(keyColumn), row.key(),
-                            "duplicate " + keyColumn.replace('_', ' ') + " '" + row.key() + "', also on line " + before
+                            "duplicate " + keyColumn.replace('_', ' ') + " " + Problem.quote(row.key()) + ", also on line " + before
                                     + " (expected each " + (layout.kind == Kind.STAGE ? "stage" : "part") + " once per file)"));
                 }
             }
@@ -261,7 +317,7 @@ public final class SheetReader {
         if (l.kind == null) {
             add(Problem.ofLine(file, line, "cannot tell what the file holds (expected a 'technology' column for"
                     + " switches, 'topology' for drivers or 'stage' for a stage sheet, or give --kind); found columns: "
-                    + String.join(", ", header)));
+                    + Problem.names(header)));
             return null;
         }
         Schema schema = Schema.of(l.kind);
@@ -275,16 +331,17 @@ public final class SheetReader {
             }
             Integer dup = firstSeen.putIfAbsent(name, i);
             if (dup != null) {
-                add(new Problem(file, line, name, i + 1, header.get(i), "duplicate column '" + name
-                        + "', also column " + (dup + 1) + " (expected each column once)"));
+                add(new Problem(file, line, name, i + 1, header.get(i), "duplicate column " + Problem.quote(name)
+                        + ", also column " + (dup + 1) + " (expected each column once)"));
                 ok = false;
                 continue;
             }
             if (schema.column(name).isPresent()) {
                 l.index.put(name, i);
             } else {
-                l.unknown.add(header.get(i).strip());
-                l.extraIndex.put(i, header.get(i).strip());
+                String extra = Cells.restoreText(header.get(i).strip()); // as export neutralised it
+                l.unknown.add(extra);
+                l.extraIndex.put(i, extra);
             }
         }
         List<String> missing = new ArrayList<>();
@@ -297,7 +354,7 @@ public final class SheetReader {
             add(Problem.ofLine(file, line, "missing required column" + (missing.size() > 1 ? "s " : " ")
                     + String.join(", ", missing) + " for a " + l.kind.id() + " " + (l.kind == Kind.STAGE ? "sheet" : "catalog")
                     + " (expected columns: " + String.join(", ", schema.requiredNames()) + "; found: "
-                    + String.join(", ", header) + ")"));
+                    + Problem.names(header) + ")"));
             ok = false;
         }
         if (!ok) {
@@ -376,8 +433,8 @@ public final class SheetReader {
         }
         for (int i : l.unnamed) {
             if (!rec.get(i).isBlank()) {
-                out.add(new Problem(file, line, null, i + 1, rec.get(i), "value '" + rec.get(i).strip()
-                        + "' in column " + (i + 1) + ", which has no header name (expected a header for every column"
+                out.add(new Problem(file, line, null, i + 1, rec.get(i), "value " + Problem.quote(rec.get(i).strip())
+                        + " in column " + (i + 1) + ", which has no header name (expected a header for every column"
                         + " that holds values)"));
             }
         }

@@ -42,11 +42,12 @@ public final class Units {
      *                     semicolons or tabs, as spreadsheets in many locales write them)
      */
     public static double parse(String text, Unit unit, boolean decimalComma) throws BadValueException {
+        checkLength(text.strip(), expectation(unit, null));
         try {
             return parseNumber(text, unit, decimalComma);
         } catch (NumberFormatException | ArithmeticException e) {
             // BigDecimal refuses exponents beyond int range ("1e99999999999") and scale overflow.
-            throw new BadValueException("'" + text + "' is out of range (expected " + expectation(unit, null) + ")");
+            throw new BadValueException(Problem.quote(text) + " is out of range (expected " + expectation(unit, null) + ")");
         }
     }
 
@@ -66,12 +67,12 @@ public final class Units {
         }
         Matcher m = NUMBER.matcher(t);
         if (!m.matches()) {
-            throw new BadValueException("'" + text + "' is not a number (expected " + expectation(unit, null) + ")");
+            throw new BadValueException(Problem.quote(text) + " is not a number (expected " + expectation(unit, null) + ")");
         }
         String num = m.group(1);
         if (num.indexOf(',') >= 0) {
             if (!decimalComma) {
-                throw new BadValueException("'" + text + "' uses a comma as decimal mark; in a comma-separated file"
+                throw new BadValueException(Problem.quote(text) + " uses a comma as decimal mark; in a comma-separated file"
                         + " write a point (expected " + expectation(unit, null) + ")");
             }
             num = num.replace(',', '.');
@@ -83,7 +84,7 @@ public final class Units {
         }
         if (suffix.equals("%")) {
             if (unit.dimension() != Dimension.RATIO) {
-                throw new BadValueException("'" + text + "' is a percentage, but this column is in "
+                throw new BadValueException(Problem.quote(text) + " is a percentage, but this column is in "
                         + unit.plural() + " (expected " + expectation(unit, null) + ")");
             }
             return finish(value.movePointLeft(2), 0, unit, text);
@@ -94,12 +95,12 @@ public final class Units {
         }
         for (Dimension other : Dimension.values()) {
             if (other != unit.dimension() && suffixExponent(suffix, other) != null && !isPrefixOnly(suffix)) {
-                throw new BadValueException("'" + text + "' is a " + other.quantity() + " (" + suffix
+                throw new BadValueException(Problem.quote(text) + " is a " + other.quantity() + " (" + suffix
                         + "), but this column is a " + unit.dimension().quantity() + " (expected "
                         + expectation(unit, null) + ")");
             }
         }
-        throw new BadValueException("'" + text + "' has an unknown unit '" + suffix + "' (expected "
+        throw new BadValueException(Problem.quote(text) + " has an unknown unit '" + suffix + "' (expected "
                 + expectation(unit, null) + ")");
     }
 
@@ -178,9 +179,26 @@ public final class Units {
         return negative ? -d : d;
     }
 
+    /**
+     * Longest number a cell or option may hold, in characters (after surrounding spaces are
+     * removed). A double has 17 significant digits; 100 characters leave room for leading zeros,
+     * an exponent and a unit. Longer text is refused before it is parsed: {@link BigDecimal}'s
+     * parsing grows with the square of the digits (a million digits took 15 s).
+     */
+    public static final int MAX_NUMBER_CHARS = 100;
+
+    /** Refuses a number longer than {@link #MAX_NUMBER_CHARS}; {@code expected} words what the column takes. */
+    static void checkLength(String t, String expected) throws BadValueException {
+        if (t.length() > MAX_NUMBER_CHARS) {
+            throw new BadValueException(Problem.quote(t) + " is too long for a number (expected at most "
+                    + MAX_NUMBER_CHARS + " characters: " + expected + ")");
+        }
+    }
+
     /** Parses a whole non-negative or signed count, e.g. stock; a point with zeros after it is accepted. */
     public static long parseInteger(String text) throws BadValueException {
         String t = text.strip();
+        checkLength(t, "an integer, e.g. 1200");
         int n = t.length();
         if (n > 0 && n <= 18) {
             // Plain digits with an optional sign (the common case): the same value BigDecimal gives.
@@ -203,7 +221,7 @@ public final class Units {
             BigDecimal d = new BigDecimal(t);
             return d.longValueExact();
         } catch (NumberFormatException | ArithmeticException e) {
-            throw new BadValueException("'" + text + "' is not a whole number (expected an integer, e.g. 1200)");
+            throw new BadValueException(Problem.quote(text) + " is not a whole number (expected an integer, e.g. 1200)");
         }
     }
 
@@ -291,7 +309,7 @@ public final class Units {
         BigDecimal inColumn = value.scaleByPowerOfTen(valueExp - unit.exponent());
         double d = inColumn.doubleValue();
         if (!Double.isFinite(d)) {
-            throw new BadValueException("'" + text + "' is out of range (expected " + expectation(unit, null) + ")");
+            throw new BadValueException(Problem.quote(text) + " is out of range (expected " + expectation(unit, null) + ")");
         }
         return d == 0 ? 0.0 : d;
     }

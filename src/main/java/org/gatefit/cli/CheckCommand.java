@@ -3,7 +3,6 @@ package org.gatefit.cli;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -65,11 +64,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             CheckReports.render(report, output.format, output.colour(ctx), w);
         }
         if (junit != null) {
-            Path parent = ctx.path(junit).toAbsolutePath().getParent();
-            if (parent != null) {
-                Files.createDirectories(parent);
-            }
-            try (Writer w = Files.newBufferedWriter(ctx.path(junit), StandardCharsets.UTF_8)) {
+            try (Writer w = OutputOptions.open(ctx, junit)) {
                 CheckReports.junit(report, w);
             }
         }

@@ -1,5 +1,6 @@
 package org.gatefit.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.nio.file.NoSuchFileException;
@@ -94,6 +95,7 @@ public final class Cli {
         cl.setUsageHelpWidth(100);
         cl.setExecutionStrategy(parsed -> {
             rejectHtml(parsed);
+            checkFiles(parsed, ctx);
             return new CommandLine.RunLast().execute(parsed);
         });
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> handle(ex, cmd, top.verbose));
@@ -109,14 +111,43 @@ public final class Cli {
 
     /** Runs with the real streams and environment. */
     public static int run(String... args) {
-        PrintWriter out = new PrintWriter(System.out, true);
+        PrintWriter out = StdoutWriter.of(new java.io.FileOutputStream(java.io.FileDescriptor.out));
         PrintWriter err = new PrintWriter(System.err, true);
         // System.console() is non-null only when standard input and output are a terminal.
-        int code = create(out, err, System.getenv(), Clock.systemUTC(), System.console() != null, null, reachable(args))
-                .execute(args);
+        return run(out, err, System.getenv(), Clock.systemUTC(), System.console() != null, args);
+    }
+
+    /**
+     * Runs as {@code main} does with the given streams; a write to {@code out} that failed (disk
+     * full, closed pipe) makes it exit 4 with one message, whatever the command.
+     */
+    static int run(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal,
+                   String... args) {
+        int code = create(out, err, env, clock, terminal, null, reachable(args)).execute(args);
         out.flush();
+        if (out.checkError()) {
+            IOException why = out instanceof StdoutWriter s ? s.failure() : null;
+            String command = java.util.Arrays.stream(args).filter(COMMANDS::contains).findFirst().map(c -> " " + c)
+                    .orElse("");
+            err.println("gatefit" + command + ": cannot write to standard output: "
+                    + (why == null ? "a write failed" : WriteFailedException.reason(why)) + " (the output is incomplete)");
+            code = ExitCode.ENVIRONMENT;
+        }
         err.flush();
         return code;
+    }
+
+    /** {@link FileArgs#check}, its refusals handled as a command's exceptions (exit 2 or 3). */
+    private static void checkFiles(CommandLine.ParseResult parsed, Context ctx) {
+        try {
+            FileArgs.check(parsed, ctx);
+        } catch (UsageException | CatalogDataException e) {
+            CommandLine.ParseResult last = parsed;
+            while (last.hasSubcommand()) {
+                last = last.subcommand();
+            }
+            throw new CommandLine.ExecutionException(last.commandSpec().commandLine(), e.getMessage(), e);
+        }
     }
 
     /** {@code --format html} on a command without an HTML report is a usage error (exit 2), before any work. */

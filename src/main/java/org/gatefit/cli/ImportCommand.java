@@ -1,5 +1,6 @@
 package org.gatefit.cli;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -36,6 +37,9 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Path dir = catalogDir();
+        if (rejects != null) {
+            checkRejectsFolder();
+        }
         List<String> names = new ArrayList<>();
         List<Path> paths = new ArrayList<>();
         for (Path f : files) {
@@ -62,5 +66,22 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
         ctx.out.println("catalog: " + dir + (replace ? " (replaced the imported kinds)" : ""));
         ctx.out.flush();
         return ExitCode.OK;
+    }
+
+    /**
+     * The rejects file's folder must exist and be writable, checked before the import (the import
+     * writes the rejects beside it under a temporary name, which no message should show).
+     */
+    private void checkRejectsFolder() throws UsageException, WriteFailedException {
+        Path folder = ctx.path(rejects).toAbsolutePath().getParent();
+        String shown = rejects.getParent() != null ? rejects.getParent().toString() : String.valueOf(folder);
+        if (folder != null && !Files.isDirectory(folder)) {
+            throw new UsageException("--skip-invalid " + rejects + ": the folder " + shown + " does not exist (create it,"
+                    + " or name a file in an existing folder); nothing was imported");
+        }
+        if (folder != null && !Files.isWritable(folder)) {
+            throw new WriteFailedException("--skip-invalid " + rejects, "the folder " + shown + " is not writable;"
+                    + " nothing was imported");
+        }
     }
 }

@@ -3,8 +3,6 @@ package org.gatefit.cli;
 import java.io.FilterWriter;
 import java.io.IOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.gatefit.report.Format;
 import picocli.CommandLine.Option;
@@ -29,7 +27,11 @@ final class OutputOptions {
         return open(ctx, output);
     }
 
-    /** Standard output when {@code output} is null, else the file (parent folders created). */
+    /**
+     * Standard output when {@code output} is null, else the file (parent folders created), which
+     * takes the place of an earlier file of that name only when written completely
+     * ({@link OutputFile}).
+     */
     static Writer open(Context ctx, Path given) throws IOException {
         Path output = ctx.path(given);
         if (output == null) {
@@ -40,10 +42,6 @@ final class OutputOptions {
                 }
             };
         }
-        Path parent = output.toAbsolutePath().getParent();
-        if (parent != null) {
-            Files.createDirectories(parent);
-        }
-        return Files.newBufferedWriter(output, StandardCharsets.UTF_8);
+        return OutputFile.open(output, given.toString());
     }
 }

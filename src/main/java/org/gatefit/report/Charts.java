@@ -316,6 +316,6 @@ final class Charts {
         chart.draw(g, new Rectangle2D.Double(0, 0, w, h));
         String svg = g.getSVGElement(null, false, new ViewBox(0, 0, w, h), null, null);
         svg = svg.replaceAll("\\s+xmlns(:[a-z]+)?=(\"[^\"]*\"|'[^']*')", "");
-        return svg.replaceFirst("<svg", "<svg role=\"img\" aria-label=\"" + Html.esc(name) + "\"");
+        return Html.xmlChars(svg).replaceFirst("<svg", "<svg role=\"img\" aria-label=\"" + Html.esc(name) + "\"");
     }
 }

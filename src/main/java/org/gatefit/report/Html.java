@@ -55,7 +55,11 @@ final class Html {
     private Html() {
     }
 
-    /** Escapes text for HTML element content and quoted attribute values; drops control characters. */
+    /**
+     * Escapes text for HTML element content and quoted attribute values (and XML's); drops every
+     * character XML 1.0 forbids (§2.2 Char: controls other than tab and line feed, unpaired
+     * surrogates, U+FFFE, U+FFFF) and carriage returns.
+     */
     static String esc(String s) {
         if (s == null) {
             return "";
@@ -69,14 +73,40 @@ final class Html {
                 case '&' -> sb.append("&amp;");
                 case '"' -> sb.append("&quot;");
                 case '\'' -> sb.append("&#39;");
-                default -> {
-                    if (c >= 0x20 || c == '\n' || c == '\t') {
-                        sb.append(c);
-                    }
+                case '\r' -> {
                 }
+                default -> i = keep(s, i, sb);
             }
         }
         return sb.toString();
+    }
+
+    /**
+     * {@code s} without the characters XML 1.0 forbids, for markup made by a library (the charts'
+     * SVG), which escapes markup but passes such characters through.
+     */
+    static String xmlChars(String s) {
+        StringBuilder sb = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            i = keep(s, i, sb);
+        }
+        return sb.toString();
+    }
+
+    /**
+     * Appends {@code s.charAt(i)} when XML 1.0 allows it (tab, line feed, carriage return,
+     * U+0020–U+D7FF, U+E000–U+FFFD, a surrogate pair: U+10000–U+10FFFF); returns the index of the
+     * last character used.
+     */
+    private static int keep(String s, int i, StringBuilder sb) {
+        char c = s.charAt(i);
+        if (c >= 0x20 && c < 0xD800 || c >= 0xE000 && c <= 0xFFFD || c == '\n' || c == '\t' || c == '\r') {
+            sb.append(c);
+        } else if (Character.isHighSurrogate(c) && i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1))) {
+            sb.append(c).append(s.charAt(i + 1));
+            return i + 1;
+        }
+        return i;
     }
 
     /** The document head and the start of the body. */

@@ -147,7 +147,7 @@ public final class PartsReport {
         header.addAll(s.names());
         header.addAll(extras);
         CSVPrinter p = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get());
-        p.printRecord(header);
+        p.printRecord(header.stream().map(Cells::neutraliseText).toList()); // extra columns' names are outside text
         for (Row r : parts) {
             List<String> rec = new ArrayList<>(header.size());
             if (withKind) {

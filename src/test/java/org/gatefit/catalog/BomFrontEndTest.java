@@ -1,0 +1,77 @@
+package org.gatefit.catalog;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Issue 14, finding 10: a BOM is read through the same front end as catalogs (SheetReader's), so a
+ * header line longer than 64 KiB reads like any other, and input that is truly bad is a
+ * CatalogDataException (exit 3) naming the file and line, never an I/O error. Invented designators
+ * and parts (TST-…).
+ */
+class BomFrontEndTest {
+    /** An extra column whose name alone is longer than the 64 KiB a mark/reset reader looked ahead. */
+    static final String LONG = "notes " + "x".repeat(70_000);
+
+    @TempDir
+    Path tmp;
+
+    private Path write(String name, byte[] bytes) throws Exception {
+        return Files.write(tmp.resolve(name), bytes);
+    }
+
+    private static byte[] utf8(String s) {
+        return s.getBytes(StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void aHeaderLineLongerThan64KiBReadsLikeAnyOther() throws Exception {
+        Bom b = Bom.read(write("bom.csv", utf8("Designator," + LONG + ",MPN\nQ1-Q2,,TST-SW1\nU1,,TST-DRV1\n")), "bom.csv");
+        assertEquals(3, b.size());
+        assertEquals("TST-SW1", b.get("Q2").orElseThrow().partNumber());
+        assertEquals(3, b.get("U1").orElseThrow().line());
+    }
+
+    @Test
+    void aLongSemicolonSeparatedHeaderAfterAByteOrderMarkReadsToo() throws Exception {
+        ByteArrayOutputStream f = new ByteArrayOutputStream();
+        f.write(new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF});
+        f.writeBytes(utf8("Designator;\"" + LONG + "\";MPN\r\nQ1;;TST-SW1\r\n"));
+        Bom b = Bom.read(write("bom.csv", f.toByteArray()), "bom.csv");
+        assertEquals("TST-SW1", b.get("Q1").orElseThrow().partNumber());
+    }
+
+    @Test
+    void aBadRowAfterALongHeaderIsBadInputNamingFileAndLine() throws Exception {
+        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("bad.csv",
+                utf8("Designator," + LONG + ",MPN\nQ1,,TST-SW1\nQ2,\"never closed,TST-SW1\n")), "bad.csv"));
+        assertTrue(e.getMessage().startsWith("bad.csv line 3: a double quote opened in the row starting here is never"
+                + " closed"), e.getMessage());
+    }
+
+    @Test
+    void aHeaderWithoutTheColumnsListsWhatItFoundShortly() throws Exception {
+        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("bad.csv",
+                utf8("Designator," + LONG + "\nQ1,x\n")), "bad.csv"));
+        assertTrue(e.getMessage().startsWith("bad.csv line 1: the BOM header lacks a part-number column"), e.getMessage());
+        assertTrue(e.getMessage().length() < 400, () -> Problem.excerpt(e.getMessage()));
+    }
+
+    @Test
+    void notUtf8OrUtf16IsBadInputNamingFileAndLine() throws Exception {
+        byte[] latin1 = "Designator,MPN\nQ1,TST-SW1\nQ2,TST-\u00e9\n".getBytes(StandardCharsets.ISO_8859_1);
+        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("l.csv", latin1), "l.csv"));
+        assertTrue(e.getMessage().startsWith("l.csv line 3: the file is not UTF-8 text"), e.getMessage());
+        byte[] utf16 = "Designator,MPN\nQ1,TST-SW1\n".getBytes(StandardCharsets.UTF_16);
+        e = assertThrows(CatalogDataException.class, () -> Bom.read(write("w.csv", utf16), "w.csv"));
+        assertTrue(e.getMessage().startsWith("w.csv line 1: the file is UTF-16 text"), e.getMessage());
+    }
+}
