@@ -1,14 +1,12 @@
 package org.gatefit.cli;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.gatefit.catalog.Bom;
 import org.gatefit.catalog.CatalogDataException;
@@ -16,6 +14,7 @@ import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.catalog.SheetReader;
 import org.gatefit.index.Catalog;
+import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
 import org.gatefit.match.StageCheck;
 import org.gatefit.report.CheckReports;
@@ -89,8 +88,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
                 ctx.err.println("note: the catalog in " + c.directory() + " is empty; every stage will fail the catalog rule");
             }
             try (Progress bar = ctx.progress("stages checked", rows.size() >= Progress.LONG_CHECK ? rows.size() : 0)) {
-                return StageCheck.run(stagesFile.toString(), rows, b, pn -> PairSupport.lookup(c, Kind.DRIVER, pn),
-                        pn -> PairSupport.lookup(c, Kind.SWITCH, pn), m, bar::update);
+                return StageCheck.run(stagesFile.toString(), rows, b, new CatalogParts(c), m, bar::update);
             }
         }
     }

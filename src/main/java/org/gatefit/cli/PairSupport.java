@@ -1,13 +1,9 @@
 package org.gatefit.cli;
 
 import java.io.IOException;
-import java.util.ArrayList;
-import java.util.List;
-import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.index.Catalog;
-import org.gatefit.index.PartSearch;
 
 /** Lookups the pair commands share. */
 final class PairSupport {
@@ -19,15 +15,6 @@ final class PairSupport {
         return c.get(kind, pn).orElseThrow(() -> new UsageException("no " + kind + " '" + pn + "' in the catalog "
                 + c.directory() + (c.isEmpty() ? " (it is empty: import parts with 'gatefit import FILE...')"
                 : " (try 'gatefit find --kind " + kind + " " + pn.replaceAll("[^A-Za-z0-9]+", " ").strip() + "')")));
-    }
-
-    /** A catalog lookup for the engines, which take plain functions. */
-    static java.util.Optional<Row> lookup(Catalog c, Kind k, String pn) {
-        try {
-            return c.get(k, pn);
-        } catch (IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        }
     }
 
     /** The operating point for a switch, or a usage error naming what is missing or wrong. */

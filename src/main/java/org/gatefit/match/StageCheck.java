@@ -88,6 +88,13 @@ public final class StageCheck {
         return run(file, stages, bom, drivers, switches, m, n -> { });
     }
 
+    /** The check engine over a catalog: {@link #run(String, List, Bom, Function, Function, Margins, java.util.function.IntConsumer)} with its parts. */
+    public static Report run(String file, List<Row> stages, Bom bom, PartSource parts, Margins m,
+                             java.util.function.IntConsumer progress) {
+        return run(file, stages, bom, pn -> Replacement.lookup(parts, org.gatefit.catalog.Kind.DRIVER, pn),
+                pn -> Replacement.lookup(parts, org.gatefit.catalog.Kind.SWITCH, pn), m, progress);
+    }
+
     /** As {@link #run(String, List, Bom, Function, Function, Margins)}, telling {@code progress} the stages done so far. */
     public static Report run(String file, List<Row> stages, Bom bom, Function<String, Optional<Row>> drivers,
                              Function<String, Optional<Row>> switches, Margins m, java.util.function.IntConsumer progress) {
