@@ -31,10 +31,10 @@ public interface RowCursor {
 
     /**
      * What {@code make} builds from this row; a catalog that keeps its decoded columns also keeps
-     * this object per part (one per {@code key}), so a later scan gets it without rebuilding.
+     * this object per part (one per type {@code key}), so a later scan gets it without rebuilding.
      * {@code make} must depend on the row only, and what it returns must not change.
      */
-    default <T> T memo(Object key, java.util.function.Function<RowCursor, T> make) {
+    default <T> T memo(Class<T> key, java.util.function.Function<RowCursor, ? extends T> make) {
         return make.apply(this);
     }
 

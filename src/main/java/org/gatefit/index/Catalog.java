@@ -63,7 +63,7 @@ public final class Catalog implements AutoCloseable {
     /** Decoded columns per segment, when {@link #keepColumns} is on; null otherwise. */
     private volatile java.util.concurrent.ConcurrentHashMap<Long, Object> columns;
     /** Objects built from rows ({@link RowCursor#memo}) per segment and key, when {@link #keepColumns} is on. */
-    private volatile java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos;
+    private volatile java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos; // (segment, type) → one object per document
 
     private Catalog(Path dir, Directory directory, DirectoryReader reader) {
         this.dir = dir;
@@ -600,8 +600,7 @@ public final class Catalog implements AutoCloseable {
         }
 
         @Override
-        @SuppressWarnings("unchecked")
-        public <T> T memo(Object key, java.util.function.Function<RowCursor, T> make) {
+        public <T> T memo(Class<T> key, java.util.function.Function<RowCursor, ? extends T> make) {
             if (memos == null) {
                 return make.apply(this);
             }
@@ -616,7 +615,7 @@ public final class Catalog implements AutoCloseable {
                 o = make.apply(this);
                 memoSlots[doc] = o;
             }
-            return (T) o;
+            return key.cast(o);
         }
 
         @Override

@@ -105,7 +105,7 @@ class CatalogScanTest {
 
         @Override
         public void accept(RowCursor r) {
-            seen.add(r.memo("test", x -> new StringBuilder(x.text(key))));
+            seen.add(r.memo(StringBuilder.class, x -> new StringBuilder(x.text(key))));
         }
     }
 
