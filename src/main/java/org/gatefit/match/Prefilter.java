@@ -88,9 +88,13 @@ public record Prefilter(List<Condition> require, List<Exclusion> exclude) {
             return new Condition(column, op, Double.NaN, Objects.requireNonNull(choice));
         }
 
-        /** The value as {@code find --where} would write it. */
+        /** The value as {@code find --where} would write it (in exponent form when plain digits would be long). */
         public String value() {
-            return text != null ? text : BigDecimal.valueOf(number).stripTrailingZeros().toPlainString();
+            if (text != null) {
+                return text;
+            }
+            String plain = BigDecimal.valueOf(number).stripTrailingZeros().toPlainString();
+            return plain.length() <= 24 ? plain : Double.toString(number);
         }
 
         @Override
