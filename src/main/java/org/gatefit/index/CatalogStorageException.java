@@ -49,6 +49,12 @@ public final class CatalogStorageException extends IOException {
      * missing, or the files are of a Lucene version this one does not read; null otherwise.
      */
     static String damage(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) { // a missing file first: Lucene wraps it in a corruption
+            if (t instanceof NoSuchFileException || t instanceof FileNotFoundException) {
+                String f = t instanceof NoSuchFileException n ? n.getFile() : t.getMessage();
+                return "a file of the index is missing: " + f;
+            }
+        }
         for (Throwable t = e; t != null; t = t.getCause()) {
             if (t instanceof CorruptIndexException c) {
                 return c.getOriginalMessage() + " in " + fileName(c.getResourceDescription());
@@ -58,10 +64,6 @@ public final class CatalogStorageException extends IOException {
             }
             if (t instanceof EOFException) {
                 return "a file is cut short: " + t.getMessage();
-            }
-            if (t instanceof NoSuchFileException || t instanceof FileNotFoundException) {
-                String f = t instanceof NoSuchFileException n ? n.getFile() : t.getMessage();
-                return "a file of the index is missing: " + f;
             }
         }
         return null;
