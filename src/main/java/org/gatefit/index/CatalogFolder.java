@@ -126,7 +126,7 @@ final class CatalogFolder {
     /** Writes the marker (durably) unless it is there; {@code dir} must exist. */
     static void mark(Path dir) throws IOException {
         Path m = dir.resolve(MARKER);
-        byte[] text = ("This folder is a gatefit catalog (index format " + Fields.FORMAT + ").\n"
+        byte[] text = ("This folder is a gatefit catalog.\n"
                 + "gatefit owns every file in it: do not add, change or remove files here.\n"
                 + "To start again, import your CSV files into a new folder, or delete this whole folder.\n")
                 .getBytes(StandardCharsets.UTF_8);
