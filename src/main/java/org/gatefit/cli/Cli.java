@@ -42,7 +42,7 @@ public final class Cli {
 
     /** The subcommands, by name, in the order help lists them. */
     private static final List<String> COMMANDS = List.of("import", "validate", "info", "find", "show", "export",
-            "shortlist", "explain", "check", "replace", "demo", "completion");
+            "shortlist", "explain", "check", "replace", "verify", "demo", "completion");
 
     private static Object command(String name, Context ctx) {
         return switch (name) {
@@ -56,6 +56,7 @@ public final class Cli {
             case "explain" -> new ExplainCommand(ctx);
             case "check" -> new CheckCommand(ctx);
             case "replace" -> new ReplaceCommand(ctx);
+            case "verify" -> new VerifyCommand(ctx);
             case "demo" -> new DemoCommand(ctx);
             case "completion" -> new CompletionCommand(ctx);
             default -> throw new IllegalArgumentException("no command " + name);
@@ -177,7 +178,8 @@ public final class Cli {
         } else if (ex instanceof NoSuchFileException e) {
             err.println("gatefit " + cmd.getCommandName() + ": no such file: " + e.getFile());
             code = ExitCode.BAD_DATA;
-        } else if (ex instanceof CatalogBusyException || ex instanceof org.gatefit.index.CatalogFormatException) {
+        } else if (ex instanceof CatalogBusyException || ex instanceof org.gatefit.index.CatalogFormatException
+                || ex instanceof org.gatefit.index.CatalogStorageException) {
             err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
             code = ExitCode.ENVIRONMENT;
         } else if (ex instanceof java.io.IOException) {

@@ -60,6 +60,10 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
             ctx.out.printf("%s: %d %s rows imported%s (sha256 %s)%n", s.file(), s.rows(), s.kind(),
                     s.rejected() > 0 ? ", " + s.rejected() + " rejected" : "", s.sha256().substring(0, 12));
         }
+        for (var removed : r.removed().entrySet()) {
+            ctx.err.println("note: --replace removed the " + removed.getValue() + " " + removed.getKey()
+                    + (removed.getValue() == 1 ? " part" : " parts") + " the catalog held before this import");
+        }
         if (r.rejected() > 0) {
             ctx.err.println("note: " + r.rejected() + " rejected rows written to " + rejects + " with their reasons");
         }

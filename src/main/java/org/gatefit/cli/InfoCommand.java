@@ -21,7 +21,7 @@ final class InfoCommand extends CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        try (Catalog c = Catalog.open(catalogDir()); Writer w = output.open(ctx)) {
+        try (Catalog c = Catalog.openIfPresent(catalogDir()); Writer w = output.open(ctx)) {
             CatalogReports.info(c.directory(), c.counts(), c.history(), output.format, w);
         }
         return ExitCode.OK;

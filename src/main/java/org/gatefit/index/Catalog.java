@@ -31,6 +31,7 @@ import org.apache.lucene.search.Weight;
 import org.gatefit.catalog.Column;
 import org.gatefit.catalog.ColumnType;
 import org.gatefit.catalog.Schema;
+import org.apache.lucene.index.CheckIndex;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexNotFoundException;
 import org.apache.lucene.index.Term;
@@ -72,12 +73,33 @@ public final class Catalog implements AutoCloseable {
         this.searcher = reader == null ? null : new IndexSearcher(reader);
     }
 
-    /** Opens the catalog in {@code dir}; a directory without an index gives an empty catalog. */
+    /**
+     * Opens the catalog in {@code dir} for a command that needs its data.
+     *
+     * @throws CatalogFormatException  when there is no catalog there yet (a missing or empty folder, or
+     *                                 one nothing was imported into), or the path is not a catalog
+     * @throws CatalogStorageException when the catalog's files are damaged
+     */
     public static Catalog open(Path dir) throws IOException {
-        if (!Files.isDirectory(dir)) {
+        Catalog c = openIfPresent(dir);
+        if (c.reader == null) {
+            c.close();
+            throw new CatalogFormatException("there is no catalog in " + dir + " yet: import your CSV files first"
+                    + " (gatefit --catalog " + dir + " import FILE...)");
+        }
+        return c;
+    }
+
+    /**
+     * Opens the catalog in {@code dir}; a missing or empty folder, or a catalog nothing was imported
+     * into yet, gives an empty catalog. A path that is a file or a folder of other files is refused,
+     * and nothing in the folder is changed.
+     */
+    public static Catalog openIfPresent(Path dir) throws IOException {
+        if (CatalogFolder.inspect(dir) == CatalogFolder.State.NONE) {
             return new Catalog(dir, null, null);
         }
-        Directory d = FSDirectory.open(dir);
+        Directory d = new CatalogFolder.Own(FSDirectory.open(dir), null);
         try {
             if (!DirectoryReader.indexExists(d)) {
                 d.close();
@@ -86,7 +108,8 @@ public final class Catalog implements AutoCloseable {
             DirectoryReader r = DirectoryReader.open(d);
             try {
                 checkFormat(dir, r.getIndexCommit().getUserData());
-            } catch (IOException e) {
+                verifySmall(r);
+            } catch (IOException | RuntimeException e) {
                 r.close();
                 throw e;
             }
@@ -94,10 +117,143 @@ public final class Catalog implements AutoCloseable {
         } catch (IndexNotFoundException e) {
             d.close();
             return new Catalog(dir, null, null);
-        } catch (IOException | RuntimeException e) {
+        } catch (IOException e) {
+            d.close();
+            throw CatalogStorageException.reading(dir, e);
+        } catch (RuntimeException e) {
             d.close();
             throw e;
         }
+    }
+
+    /**
+     * Catalogs up to this size (files of the commit, in bytes) have every checksum checked each
+     * time they are opened, so a damaged byte is reported instead of read as a value. Opening
+     * already checks the commit, segment and field-info files and each metadata file in full and
+     * every data file's footer; the data files of a larger catalog are checked by {@code gatefit
+     * verify} and, before each commit, by import.
+     */
+    static final long VERIFY_ON_OPEN_BYTES = 8L << 20;
+
+    private static void verifySmall(DirectoryReader r) throws IOException {
+        long bytes = 0;
+        for (LeafReaderContext leaf : r.leaves()) {
+            if (!(leaf.reader() instanceof org.apache.lucene.index.SegmentReader sr)) {
+                return;
+            }
+            bytes += sr.getSegmentInfo().sizeInBytes();
+            if (bytes > VERIFY_ON_OPEN_BYTES) {
+                return;
+            }
+        }
+        for (LeafReaderContext leaf : r.leaves()) {
+            leaf.reader().checkIntegrity();
+        }
+    }
+
+    /**
+     * What {@link #verify} checked in a sound catalog.
+     *
+     * @param files    files of the last commit, every one's checksum verified
+     * @param bytes    their size in all
+     * @param segments segments, each checked by Lucene's index checker
+     * @param parts    switches and drivers
+     */
+    public record Verification(int files, long bytes, int segments, long parts) {
+    }
+
+    /**
+     * Verifies the catalog in {@code dir}: the checksum of every file of its last commit (naming
+     * each damaged one), then Lucene's index checker ({@link CheckIndex}: every segment opened and
+     * its postings, doc values, points and stored fields walked). Holds the import lock meanwhile
+     * (on a read-only folder, where no import can run, without it). Changes nothing.
+     *
+     * @throws CatalogStorageException when something is damaged: the message says what and what to do
+     * @throws CatalogBusyException    when an import is running
+     */
+    public static Verification verify(Path dir) throws IOException, CatalogBusyException {
+        if (CatalogFolder.inspect(dir) == CatalogFolder.State.NONE) {
+            throw new CatalogFormatException("there is no catalog in " + dir + " yet: nothing to verify");
+        }
+        try (Directory fs = FSDirectory.open(dir); Directory d = new CatalogFolder.Own(fs, null)) {
+            if (!DirectoryReader.indexExists(d)) {
+                throw new CatalogFormatException("there is no catalog in " + dir + " yet (nothing was imported into it):"
+                        + " nothing to verify");
+            }
+            org.apache.lucene.store.Lock lock = null;
+            try {
+                lock = fs.obtainLock(CatalogFolder.LOCK);
+            } catch (org.apache.lucene.store.LockObtainFailedException e) {
+                throw new CatalogBusyException("an import into the catalog in " + dir + " is running;"
+                        + " verify it when the import has finished", e);
+            } catch (IOException e) {
+                // a folder that cannot take the lock file (read-only) takes no import either
+            }
+            try (org.apache.lucene.store.Lock held = lock) {
+                return verify(dir, d);
+            }
+        }
+    }
+
+    private static Verification verify(Path dir, Directory d) throws IOException {
+        org.apache.lucene.index.SegmentInfos commit;
+        try {
+            commit = org.apache.lucene.index.SegmentInfos.readLatestCommit(d);
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
+        }
+        checkFormat(dir, commit.getUserData());
+        List<String> bad = new ArrayList<>();
+        IOException first = null;
+        long bytes = 0;
+        List<String> files = new ArrayList<>(commit.files(true));
+        java.util.Collections.sort(files);
+        for (String f : files) {
+            try (org.apache.lucene.store.IndexInput in = d.openInput(f, org.apache.lucene.store.IOContext.READONCE)) {
+                bytes += in.length();
+                org.apache.lucene.codecs.CodecUtil.checksumEntireFile(in);
+            } catch (IOException e) {
+                String what = CatalogStorageException.damage(e);
+                bad.add(f + ": " + (what == null ? e.toString() : what));
+                first = first == null ? e : first;
+            }
+        }
+        if (!bad.isEmpty()) {
+            throw CatalogStorageException.damaged(dir, bad.size() + " of " + files.size() + " files failed their"
+                    + " checksum: " + String.join("; ", bad), first);
+        }
+        java.io.ByteArrayOutputStream log = new java.io.ByteArrayOutputStream();
+        CheckIndex.Status status;
+        try (CheckIndex checker = new CheckIndex(d, null)) {
+            checker.setInfoStream(new java.io.PrintStream(log, true, java.nio.charset.StandardCharsets.UTF_8));
+            status = checker.checkIndex();
+        }
+        if (!status.clean) {
+            List<String> why = new ArrayList<>();
+            Throwable cause = null;
+            for (CheckIndex.Status.SegmentInfoStatus seg : status.segmentInfos) {
+                if (seg.error != null) {
+                    String what = CatalogStorageException.damage(seg.error);
+                    why.add("segment " + seg.name + ": " + (what == null ? String.valueOf(seg.error.getMessage()) : what));
+                    cause = cause == null ? seg.error : cause;
+                }
+            }
+            if (why.isEmpty()) {
+                why.add(status.missingSegments ? "the commit file cannot be read" : "Lucene's index checker found"
+                        + " problems: " + log.toString(java.nio.charset.StandardCharsets.UTF_8).strip());
+            }
+            throw CatalogStorageException.damaged(dir, String.join("; ", why), cause);
+        }
+        long parts = 0;
+        try (DirectoryReader r = DirectoryReader.open(d)) {
+            IndexSearcher s = new IndexSearcher(r);
+            for (Kind k : Kind.values()) {
+                if (k.isPart()) {
+                    parts += s.count(new TermQuery(new Term(Fields.KIND, k.id())));
+                }
+            }
+        }
+        return new Verification(files.size(), bytes, status.numSegments, parts);
     }
 
     /**
@@ -144,10 +300,14 @@ public final class Catalog implements AutoCloseable {
 
     /** Number of parts of a kind. */
     public int count(Kind kind) throws IOException {
-        if (searcher == null) {
-            return 0;
+        try {
+            if (searcher == null) {
+                return 0;
+            }
+            return searcher.count(new TermQuery(new Term(Fields.KIND, kind.id())));
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
         }
-        return searcher.count(new TermQuery(new Term(Fields.KIND, kind.id())));
     }
 
     /** Parts per kind (switch, driver). */
@@ -166,28 +326,32 @@ public final class Catalog implements AutoCloseable {
      * segment, then one stored-fields load.
      */
     public Optional<Row> get(Kind kind, String partNumber) throws IOException {
-        if (reader == null) {
-            return Optional.empty();
-        }
-        BytesRef id = new BytesRef(Fields.id(kind.id(), partNumber));
-        for (LeafReaderContext leaf : reader.leaves()) {
-            Terms terms = leaf.reader().terms(Fields.ID);
-            if (terms == null) {
-                continue;
+        try {
+            if (reader == null) {
+                return Optional.empty();
             }
-            TermsEnum te = terms.iterator();
-            if (!te.seekExact(id)) {
-                continue;
-            }
-            PostingsEnum pe = te.postings(null, PostingsEnum.NONE);
-            Bits live = leaf.reader().getLiveDocs();
-            for (int doc = pe.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = pe.nextDoc()) {
-                if (live == null || live.get(doc)) {
-                    return Optional.of(Documents.row(leaf.reader(), doc));
+            BytesRef id = new BytesRef(Fields.id(kind.id(), partNumber));
+            for (LeafReaderContext leaf : reader.leaves()) {
+                Terms terms = leaf.reader().terms(Fields.ID);
+                if (terms == null) {
+                    continue;
+                }
+                TermsEnum te = terms.iterator();
+                if (!te.seekExact(id)) {
+                    continue;
+                }
+                PostingsEnum pe = te.postings(null, PostingsEnum.NONE);
+                Bits live = leaf.reader().getLiveDocs();
+                for (int doc = pe.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS; doc = pe.nextDoc()) {
+                    if (live == null || live.get(doc)) {
+                        return Optional.of(Documents.row(leaf.reader(), doc));
+                    }
                 }
             }
+            return Optional.empty();
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
         }
-        return Optional.empty();
     }
 
     /** Parts with this part number, of any kind. */
@@ -203,19 +367,23 @@ public final class Catalog implements AutoCloseable {
 
     /** Runs a query and loads the matching parts, in the order of {@code sort} (null: by score). */
     public List<Row> search(Query query, Sort sort, int limit) throws IOException {
-        if (searcher == null || query instanceof MatchNoDocsQuery) {
-            return List.of();
+        try {
+            if (searcher == null || query instanceof MatchNoDocsQuery) {
+                return List.of();
+            }
+            int n = Math.max(1, Math.min(limit, Math.max(1, reader.maxDoc())));
+            TopDocs td = sort == null ? searcher.search(query, n) : searcher.search(query, n, sort);
+            // Each row comes from its stored record, so the hits are read in rank order.
+            List<LeafReaderContext> leaves = reader.leaves();
+            List<Row> rows = new ArrayList<>(td.scoreDocs.length);
+            for (ScoreDoc hit : td.scoreDocs) {
+                LeafReaderContext leaf = leaves.get(ReaderUtil.subIndex(hit.doc, leaves));
+                rows.add(Documents.row(leaf.reader(), hit.doc - leaf.docBase));
+            }
+            return rows;
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
         }
-        int n = Math.max(1, Math.min(limit, Math.max(1, reader.maxDoc())));
-        TopDocs td = sort == null ? searcher.search(query, n) : searcher.search(query, n, sort);
-        // Each row comes from its stored record, so the hits are read in rank order.
-        List<LeafReaderContext> leaves = reader.leaves();
-        List<Row> rows = new ArrayList<>(td.scoreDocs.length);
-        for (ScoreDoc hit : td.scoreDocs) {
-            LeafReaderContext leaf = leaves.get(ReaderUtil.subIndex(hit.doc, leaves));
-            rows.add(Documents.row(leaf.reader(), hit.doc - leaf.docBase));
-        }
-        return rows;
     }
 
     /**
@@ -280,6 +448,15 @@ public final class Catalog implements AutoCloseable {
 
     /** {@link #scanColumns(Kind, Query, int, java.util.function.Supplier)} with partitions of at least {@code minPartition} documents. */
     public <S extends java.util.function.Consumer<RowCursor>> List<S> scanColumns(Kind kind, Query filter,
+            int parallelism, int minPartition, java.util.function.Supplier<S> sinks) throws IOException {
+        try {
+            return scanPartitions(kind, filter, parallelism, minPartition, sinks);
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
+        }
+    }
+
+    private <S extends java.util.function.Consumer<RowCursor>> List<S> scanPartitions(Kind kind, Query filter,
             int parallelism, int minPartition, java.util.function.Supplier<S> sinks) throws IOException {
         if (minPartition < 1) {
             throw new IllegalArgumentException("expected a partition of at least 1 document, got " + minPartition);
@@ -674,21 +851,25 @@ public final class Catalog implements AutoCloseable {
 
     /** The import history, oldest first. */
     public List<ImportRecord> history() throws IOException {
-        if (searcher == null) {
-            return List.of();
+        try {
+            if (searcher == null) {
+                return List.of();
+            }
+            List<ImportRecord> out = new ArrayList<>();
+            TopDocs td = searcher.search(new TermQuery(new Term(Fields.KIND, Fields.IMPORT)), Math.max(1, reader.maxDoc()));
+            StoredFields sf = searcher.storedFields();
+            for (ScoreDoc sd : td.scoreDocs) {
+                Document d = sf.document(sd.doc);
+                out.add(new ImportRecord(d.get(Fields.SOURCE_FILE), d.get(Fields.IMPORT_SHA), d.get(Fields.IMPORT_KIND),
+                        d.getField(Fields.IMPORT_ROWS).numericValue().longValue(),
+                        Instant.ofEpochMilli(d.getField(Fields.IMPORT_TIME).numericValue().longValue()),
+                        d.get(Fields.IMPORT_MODE)));
+            }
+            out.sort(Comparator.comparing(ImportRecord::time));
+            return out;
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
         }
-        List<ImportRecord> out = new ArrayList<>();
-        TopDocs td = searcher.search(new TermQuery(new Term(Fields.KIND, Fields.IMPORT)), Math.max(1, reader.maxDoc()));
-        StoredFields sf = searcher.storedFields();
-        for (ScoreDoc sd : td.scoreDocs) {
-            Document d = sf.document(sd.doc);
-            out.add(new ImportRecord(d.get(Fields.SOURCE_FILE), d.get(Fields.IMPORT_SHA), d.get(Fields.IMPORT_KIND),
-                    d.getField(Fields.IMPORT_ROWS).numericValue().longValue(),
-                    Instant.ofEpochMilli(d.getField(Fields.IMPORT_TIME).numericValue().longValue()),
-                    d.get(Fields.IMPORT_MODE)));
-        }
-        out.sort(Comparator.comparing(ImportRecord::time));
-        return out;
     }
 
     @Override

@@ -2,7 +2,11 @@ package org.gatefit.index;
 
 import java.io.IOException;
 
-/** The catalog directory holds an index in a layout this version does not read (exit 4, like other I/O). */
+/**
+ * The catalog path holds no catalog this version reads: an index in another layout, no catalog yet,
+ * a file, or a folder of other files (exit 4, like other I/O). The message names the path and what
+ * to do; nothing was changed.
+ */
 public final class CatalogFormatException extends IOException {
     private static final long serialVersionUID = 1L;
 

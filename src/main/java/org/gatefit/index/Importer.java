@@ -8,14 +8,17 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Clock;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
+import java.util.function.UnaryOperator;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.lucene.analysis.standard.StandardAnalyzer;
+import org.apache.lucene.codecs.CodecUtil;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.document.Field;
 import org.apache.lucene.document.StoredField;
@@ -26,8 +29,15 @@ import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.SegmentInfos;
 import org.apache.lucene.index.Term;
+import org.apache.lucene.search.IndexSearcher;
+import org.apache.lucene.search.TermQuery;
+import org.apache.lucene.store.AlreadyClosedException;
+import org.apache.lucene.store.ChecksumIndexInput;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
+import org.apache.lucene.store.IOContext;
+import org.apache.lucene.store.IndexInput;
+import org.apache.lucene.store.Lock;
 import org.apache.lucene.store.LockObtainFailedException;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Kind;
@@ -64,10 +74,14 @@ public final class Importer {
      * @param files    what each file held
      * @param written  rows written in all
      * @param rejected rows rejected (written to the rejects file)
+     * @param removed  parts of each kind --replace removed (the kinds it cleared only)
      */
-    public record Result(List<SheetReader.Summary> files, long written, long rejected) {
+    public record Result(List<SheetReader.Summary> files, long written, long rejected, Map<Kind, Integer> removed) {
         public Result {
             files = List.copyOf(files);
+            Map<Kind, Integer> m = new EnumMap<>(Kind.class);
+            m.putAll(removed);
+            removed = java.util.Collections.unmodifiableMap(m);
         }
     }
 
@@ -75,6 +89,8 @@ public final class Importer {
     private final Clock clock;
     private final int threads;
     private final int chunkRows;
+    /** Wraps the folder's directory (tests: to stop or fail at a chosen file operation). */
+    private UnaryOperator<Directory> directoryHook = d -> d;
 
     public Importer(Path dir, Clock clock) {
         this(dir, clock, THREADS, IndexPipeline.chunkRows(THREADS));
@@ -92,6 +108,12 @@ public final class Importer {
         this.chunkRows = chunkRows;
     }
 
+    /** Lets tests see (and stop at) every file operation of the import. */
+    Importer withDirectory(UnaryOperator<Directory> hook) {
+        this.directoryHook = Objects.requireNonNull(hook, "hook");
+        return this;
+    }
+
     /**
      * Imports {@code files} (shown in messages by {@code names}) in one commit.
      *
@@ -104,52 +126,185 @@ public final class Importer {
         if (files.size() != names.size()) {
             throw new IllegalArgumentException("expected one name per file, got " + names.size() + " for " + files.size());
         }
-        Files.createDirectories(dir);
-        try (Directory directory = FSDirectory.open(dir)) {
-            boolean existed = DirectoryReader.indexExists(directory);
-            IndexWriter writer;
-            ConcurrentMergeScheduler merges = new ConcurrentMergeScheduler();
-            // Each chunk's segment is written as a merge (addIndexes): let every indexing thread write
-            // one at once, at full speed (the import is what the user waits for).
-            merges.setMaxMergesAndThreads(threads + 4, threads);
-            merges.disableAutoIOThrottle();
-            IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
-                    .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
-                    .setCommitOnClose(false)
-                    .setCodec(new ColumnCodec())
-                    .setMergeScheduler(merges);
+        // Nothing is touched before the folder is known to be a catalog (or new, or empty).
+        if (CatalogFolder.inspect(dir) == CatalogFolder.State.NONE) {
             try {
-                writer = new IndexWriter(directory, cfg);
-            } catch (LockObtainFailedException e) {
-                throw new CatalogBusyException("the catalog in " + dir + " is locked by another import;"
-                        + " wait for it to finish and try again", e);
+                Files.createDirectories(dir);
+            } catch (IOException e) {
+                throw CatalogStorageException.writeFailed(dir, e);
             }
-            boolean committed = false;
-            Path tmpRejects = null;
-            try (RejectsFile rejects = options.rejects() == null ? null
-                    : new RejectsFile(tmpRejects = Files.createTempFile(absoluteParent(options.rejects()), ".rejects", ".csv"))) {
-                if (existed) { // the last commit, read under the write lock
-                    Catalog.checkFormat(dir, SegmentInfos.readLatestCommit(directory).getUserData());
+        }
+        try (Directory fs = directoryHook.apply(FSDirectory.open(dir)); Lock lock = lock(fs)) {
+            // Under the lock, again: another import may have made the catalog meanwhile.
+            if (CatalogFolder.inspect(dir) != CatalogFolder.State.CATALOG) {
+                try {
+                    CatalogFolder.mark(dir);
+                } catch (IOException e) {
+                    throw CatalogStorageException.writeFailed(dir, e);
                 }
-                Result r = write(writer, files, names, options, listener, rejects);
-                writer.setLiveCommitData(Map.of(Fields.FORMAT_KEY, Fields.FORMAT).entrySet());
-                writer.commit();
-                committed = true;
-                writer.close();
-                if (rejects != null) {
-                    rejects.close();
-                    Files.move(tmpRejects, options.rejects(), StandardCopyOption.REPLACE_EXISTING);
-                    tmpRejects = null;
-                }
-                return r;
+            }
+            CatalogFolder.Own directory = new CatalogFolder.Own(fs, dir);
+            try {
+                return run(directory, files, names, options, listener);
             } finally {
-                if (!committed) {
-                    writer.rollback();
-                }
-                if (tmpRejects != null) {
-                    Files.deleteIfExists(tmpRejects);
+                try {
+                    directory.cleanUp();
+                } catch (IOException e) {
+                    // the journal stays; the next import deletes what is left
                 }
             }
+        }
+    }
+
+    /** The import's own lock, held from before it looks at the folder until its clean-up is done. */
+    private Lock lock(Directory fs) throws IOException, CatalogBusyException {
+        try {
+            return fs.obtainLock(CatalogFolder.LOCK);
+        } catch (LockObtainFailedException e) {
+            throw new CatalogBusyException("the catalog in " + dir + " is locked by another import;"
+                    + " wait for it to finish and try again", e);
+        } catch (IOException e) {
+            throw CatalogStorageException.writeFailed(dir, e);
+        }
+    }
+
+    private Result run(CatalogFolder.Own directory, List<Path> files, List<String> names, Options options,
+                       Listener listener) throws IOException, CatalogDataException, CatalogBusyException {
+        SegmentInfos start;
+        try {
+            start = DirectoryReader.indexExists(directory) ? SegmentInfos.readLatestCommit(directory) : null;
+        } catch (IOException e) {
+            throw refused(e);
+        }
+        if (start != null) { // the last commit, read under the lock
+            Catalog.checkFormat(dir, start.getUserData());
+        }
+        IndexWriter writer;
+        ReportingMerges merges = new ReportingMerges();
+        // Each chunk's segment is written as a merge (addIndexes): let every indexing thread write
+        // one at once, at full speed (the import is what the user waits for).
+        merges.setMaxMergesAndThreads(threads + 4, threads);
+        merges.disableAutoIOThrottle();
+        IndexWriterConfig cfg = new IndexWriterConfig(new StandardAnalyzer())
+                .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
+                .setCommitOnClose(false)
+                .setCodec(new ColumnCodec())
+                .setMergeScheduler(merges);
+        try {
+            writer = new IndexWriter(directory, cfg);
+        } catch (LockObtainFailedException e) {
+            throw new CatalogBusyException("the catalog in " + dir + " is locked by another import;"
+                    + " wait for it to finish and try again", e);
+        } catch (IOException e) {
+            throw refused(e);
+        }
+        boolean committed = false;
+        Path tmpRejects = null;
+        try (RejectsFile rejects = options.rejects() == null ? null
+                : new RejectsFile(tmpRejects = Files.createTempFile(absoluteParent(options.rejects()), ".rejects", ".csv"))) {
+            Result r = write(writer, files, names, options, listener, rejects);
+            try {
+                writer.setLiveCommitData(Map.of(Fields.FORMAT_KEY, Fields.FORMAT).entrySet());
+                writer.prepareCommit();
+                if (start != null) {
+                    verifyKept(directory, start);
+                }
+                writer.commit();
+            } catch (CatalogStorageException e) {
+                throw e;
+            } catch (IOException e) {
+                throw refused(e);
+            }
+            committed = true;
+            writer.close();
+            if (rejects != null) {
+                rejects.close();
+                Files.move(tmpRejects, options.rejects(), StandardCopyOption.REPLACE_EXISTING);
+                tmpRejects = null;
+            }
+            return r;
+        } catch (WriteFailed e) {
+            throw refused(e.getCause());
+        } catch (AlreadyClosedException e) {
+            // the writer stopped on a failure it counts as fatal (a full disk in a merge, say)
+            if (writer.getTragicException() instanceof IOException io) {
+                throw refused(io);
+            }
+            throw e;
+        } finally {
+            if (!committed) {
+                try {
+                    writer.rollback();
+                } catch (IOException | RuntimeException e) {
+                    // the previous commit is untouched; the clean-up deletes what this import left
+                }
+            }
+            if (tmpRejects != null) {
+                Files.deleteIfExists(tmpRejects);
+            }
+        }
+    }
+
+    /**
+     * Checks every checksum of the files the last commit and the one about to be made share (the
+     * segments this import builds on; the new files were just written and checked as written).
+     * Prepared, not yet committed: a damaged catalog is refused and the commit rolled back.
+     */
+    private void verifyKept(CatalogFolder.Own directory, SegmentInfos start) throws IOException {
+        String pending = directory.pendingCommit();
+        if (pending == null) {
+            throw new IllegalStateException("prepareCommit wrote no pending commit file");
+        }
+        long gen = Long.parseLong(pending.substring(pending.lastIndexOf('_') + 1), Character.MAX_RADIX);
+        SegmentInfos next;
+        try (ChecksumIndexInput in = directory.openChecksumInput(pending, IOContext.READONCE)) {
+            next = SegmentInfos.readCommit(directory, in, gen);
+        }
+        java.util.TreeSet<String> kept = new java.util.TreeSet<>(next.files(false));
+        kept.retainAll(start.files(false));
+        for (String f : kept) {
+            try (IndexInput in = directory.openInput(f, IOContext.READONCE)) {
+                CodecUtil.checksumEntireFile(in);
+            }
+        }
+    }
+
+    /** An exception of the index side worded for the user: damage with its advice, else a failed write. */
+    private CatalogStorageException refused(IOException e) {
+        if (e instanceof CatalogStorageException s) {
+            return s;
+        }
+        String damage = CatalogStorageException.damage(e);
+        if (damage != null) {
+            return new CatalogStorageException("the catalog in " + dir + " is damaged (" + damage + "); nothing was"
+                    + " imported. " + CatalogStorageException.DAMAGE_ADVICE, e);
+        }
+        return CatalogStorageException.writeFailed(dir, e);
+    }
+
+    /** An index-side failure carried through the sheet reader (which passes a sink's exceptions on). */
+    private static final class WriteFailed extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        WriteFailed(IOException cause) {
+            super(cause);
+        }
+
+        @Override
+        public synchronized IOException getCause() {
+            return (IOException) super.getCause();
+        }
+    }
+
+    /**
+     * Runs merges on threads like Lucene's scheduler, but a failed merge is not printed by the
+     * thread (Lucene's default prints its stack trace on standard error): the writer reports it to
+     * the indexing thread that waits for the segment, which fails the import with one message.
+     */
+    static final class ReportingMerges extends ConcurrentMergeScheduler {
+        @Override
+        protected void handleMergeException(Throwable exc) {
+            // IndexWriter.merge has recorded it; addIndexes and commit rethrow it.
         }
     }
 
@@ -165,14 +320,35 @@ public final class Importer {
                          RejectsFile rejects) throws IOException, CatalogDataException {
         boolean skip = rejects != null;
         Set<Kind> cleared = EnumSet.noneOf(Kind.class);
+        Map<Kind, Integer> removed = new EnumMap<>(Kind.class);
         List<SheetReader.Summary> summaries = new ArrayList<>();
         List<Problem> problems = new ArrayList<>();
         long[] problemTotal = {0};
         long rejected = 0;
         long written;
-        DirectoryReader committed = DirectoryReader.indexExists(writer.getDirectory())
-                ? DirectoryReader.open(writer.getDirectory()) : null;
-        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, listener, threads, chunkRows)) {
+        DirectoryReader committed;
+        try {
+            committed = DirectoryReader.indexExists(writer.getDirectory())
+                    ? DirectoryReader.open(writer.getDirectory()) : null;
+        } catch (IOException e) {
+            throw new WriteFailed(e);
+        }
+        IndexSearcher before = committed == null ? null : new IndexSearcher(committed);
+        Listener heard = n -> {
+            try {
+                listener.rowWritten(n);
+            } catch (IOException e) {
+                throw new ListenerFailed(e);
+            }
+        };
+        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, heard, threads, chunkRows)) {
+        IndexOp clear = kind -> {
+            if (options.replace() && cleared.add(kind)) {
+                removed.put(kind, before == null ? 0 : before.count(new TermQuery(new Term(Fields.KIND, kind.id()))));
+                writer.deleteDocuments(new Term(Fields.KIND, kind.id()));
+                pipeline.cleared(kind.id());
+            }
+        };
         for (int i = 0; i < files.size(); i++) {
             String name = names.get(i);
             boolean[] stop = {false};
@@ -182,11 +358,16 @@ public final class Importer {
                     if (row.kind() == Kind.STAGE || stop[0]) {
                         return;
                     }
-                    if (options.replace() && cleared.add(row.kind())) {
-                        writer.deleteDocuments(new Term(Fields.KIND, row.kind().id()));
-                        pipeline.cleared(row.kind().id());
+                    try {
+                        clear.on(row.kind());
+                        pipeline.submit(row);
+                    } catch (ListenerFailed e) {
+                        throw e.getCause(); // the caller's own failure, as it was
+                    } catch (WriteFailed e) {
+                        throw e;
+                    } catch (IOException e) {
+                        throw new WriteFailed(e);
                     }
-                    pipeline.submit(row);
                 }
 
                 @Override
@@ -212,13 +393,24 @@ public final class Importer {
             }
             rejected += s.rejected();
             if (s.kind() != null && (s.rows() > 0 || options.replace())) {
-                if (options.replace() && cleared.add(s.kind())) {
-                    writer.deleteDocuments(new Term(Fields.KIND, s.kind().id()));
-                    pipeline.cleared(s.kind().id());
+                try {
+                    clear.on(s.kind());
+                } catch (IOException e) {
+                    throw new WriteFailed(e);
                 }
             }
         }
-        pipeline.finish(problemTotal[0] == 0); // segments are written only for an import that will commit
+        if (skip && problemTotal[0] == 0) {
+            for (Problem p : everyRowRejected(summaries, options.replace(), before)) {
+                problems.add(p);
+                problemTotal[0]++;
+            }
+        }
+        try {
+            pipeline.finish(problemTotal[0] == 0); // segments are written only for an import that will commit
+        } catch (IOException e) {
+            throw new WriteFailed(e);
+        }
         written = pipeline.written();
         }
         if (problemTotal[0] > 0) {
@@ -234,9 +426,69 @@ public final class Importer {
             d.add(new StoredField(Fields.IMPORT_ROWS, s.rows()));
             d.add(new StoredField(Fields.IMPORT_TIME, now));
             d.add(new StoredField(Fields.IMPORT_MODE, options.replace() ? "replace" : skip ? "skip-invalid" : "upsert"));
-            writer.addDocument(d);
+            try {
+                writer.addDocument(d);
+            } catch (IOException e) {
+                throw new WriteFailed(e);
+            }
         }
-        return new Result(summaries, written, rejected);
+        return new Result(summaries, written, rejected, removed);
+    }
+
+    /** The listener's own exception, told apart from the index's on its way through the pipeline. */
+    private static final class ListenerFailed extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        ListenerFailed(IOException cause) {
+            super(cause);
+        }
+
+        @Override
+        public synchronized IOException getCause() {
+            return (IOException) super.getCause();
+        }
+    }
+
+    /** A step on the index for one kind. */
+    private interface IndexOp {
+        void on(Kind kind) throws IOException;
+    }
+
+    /**
+     * With rows skipped: a problem for each kind of which every row was rejected and that the
+     * import would leave with no parts (replaced, or none before), listing the rows' problems too.
+     */
+    private static List<Problem> everyRowRejected(List<SheetReader.Summary> summaries, boolean replace,
+                                                  IndexSearcher before) throws IOException {
+        List<Problem> out = new ArrayList<>();
+        for (Kind k : Kind.values()) {
+            long rows = 0;
+            long rejectedRows = 0;
+            List<String> files = new ArrayList<>();
+            List<Problem> why = new ArrayList<>();
+            for (SheetReader.Summary s : summaries) {
+                if (s.kind() == k) {
+                    rows += s.rows();
+                    rejectedRows += s.rejected();
+                    files.add(s.file());
+                    why.addAll(s.problems());
+                }
+            }
+            if (rows > 0 || rejectedRows == 0) {
+                continue;
+            }
+            int had = before == null ? 0 : before.count(new TermQuery(new Term(Fields.KIND, k.id())));
+            if (!replace && had > 0) {
+                continue; // the catalog keeps its parts of this kind
+            }
+            out.add(Problem.ofLine(files.get(0), 0, "every " + k.id() + " row was rejected (" + rejectedRows
+                    + (rejectedRows == 1 ? " row" : " rows") + (files.size() > 1 ? " in " + String.join(", ", files) : "")
+                    + "), which would leave the catalog with no " + k.id() + " parts"
+                    + (replace && had > 0 ? " (--replace would remove the " + had + " there now)" : "")
+                    + "; nothing was written. Fix the rows below and import again"));
+            out.addAll(why);
+        }
+        return out;
     }
 
     /**
