@@ -17,6 +17,14 @@ class BootstrapTest {
     }
 
     @Test
+    void leakageDrawsChargeForTheWholeOnTime() {
+        // REFERENCES §4: Q = Q_g + I_qbs·t_on,max + Q_ls + I_leak·t_on,max; computed by hand:
+        // 44 nC + 100 µA·9.5 µs + 2.5 nC + 50 µA·9.5 µs = 44 + 0.95 + 2.5 + 0.475 = 47.925 nC
+        assertEquals(47.925, Bootstrap.chargePerCycle(44e-9, 100e-6, 9.5e-6, 2.5e-9, 50e-6) * 1e9,
+                1e-9);
+    }
+
+    @Test
     void recommendedIsSeveralTimesTheMinimumRoundedUp() {
         // common practice, no source: 3 × 94.9 nF = 284.7 nF, rounded up on IEC 60063 E12 → 330 nF
         assertEquals(330e-9, Bootstrap.recommended(94.9e-9), 1e-18);

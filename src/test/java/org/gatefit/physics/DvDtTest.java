@@ -74,6 +74,38 @@ class DvDtTest {
     }
 
     @Test
+    void allowedRcLimitedDvDtWithANegativeOffLevelAgreesWithTheNumericalGateNode() {
+        // REFERENCES §7: risk when V_pk + V_off ≥ V_th,min, so a −3 V off level lets the node rise
+        // to 1.8 + 3 = 4.8 V. Outside check: commons-math3 BrentSolver on the peak of the gate
+        // node integrated by DormandPrince853 (C_iss·dv/dt = C_gd·s − v/R over t = ΔV/s), to 1e-6.
+        // Inputs: C_gd 30 pF, R 6 Ω, C_iss 1 nF, ΔV 400 V (divider 12 V, above the 4.8 V limit).
+        double s = DvDt.allowedRcLimited(30 * PF, 6, 1e-9, 400, 1.8, -3);
+        double brent = new BrentSolver(1e-9, 1e-12).solve(200, x -> Ode.solve(
+                Ode.millerNode(30e-3, x, 6, 1), new double[] {0}, 400 / x)[0] - 4.8, 1, 1000);
+        assertEquals(brent, s / V_PER_NS, 1e-6 * brent);
+    }
+
+    @Test
+    void aDividerExactlyAtTheLimitNeverReachesThreshold() {
+        // plain circuit theory: V_pk = C_gd·s·R·(1 − e^(−ΔV/(s·R·C_iss))) < ΔV·C_gd/C_iss for every
+        // finite s, so a divider equal to V_th,min − V_off is reached only by an infinitely fast
+        // step. Binary-exact inputs (C_gd 2^−30 F ≈ 0.93 nF, C_iss 2^−28 F ≈ 3.7 nF, ΔV 16 V) make
+        // the divider exactly 4 V = 3 V − (−1 V).
+        double cgd = Math.scalb(1.0, -30);
+        double ciss = Math.scalb(1.0, -28);
+        assertEquals(4.0, 16 * cgd / ciss, 0);
+        assertEquals(Double.POSITIVE_INFINITY, DvDt.allowedRcLimited(cgd, 2, ciss, 16, 3, -1));
+    }
+
+    @Test
+    void reachingTheThresholdExactlyIsARisk() {
+        // REFERENCES §7: risk if V_pk + V_off ≥ V_th,min (V_GS(th) is where the channel starts to
+        // conduct, IEC 60747-8), so 3.0 V induced on a −1.0 V off level at V_th 2.0 V is a risk
+        assertTrue(DvDt.turnOnRisk(3.0, -1.0, 2.0));
+        assertFalse(DvDt.turnOnRisk(2.5, -1.0, 2.0));
+    }
+
+    @Test
     void rejectsInvalidInput() {
         assertEquals("expected slew rate dv/dt > 0 V/s, got 0.0",
                 assertThrows(IllegalArgumentException.class,

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -61,6 +62,41 @@ class ESeriesTest {
                 }
             }
         }
+    }
+
+    @Test
+    void aTieOnTheLogScaleGoesUp() {
+        // IEC 60063 E12 neighbours 10 and 12 (and E6 neighbours 33 and 47): their geometric mean is
+        // the midpoint on the log scale, where the documented rule sends the value up. Checked where
+        // this JVM's Math.log makes the two distances equal (it does on the reference JDK 17).
+        double[][] neighbours = {{10, 12}, {33, 47}};
+        ESeries[] series = {ESeries.E12, ESeries.E6};
+        for (int k = 0; k < neighbours.length; k++) {
+            double down = neighbours[k][0];
+            double up = neighbours[k][1];
+            double mid = Math.sqrt(down * up);
+            assumeTrue(Math.log(up / mid) == Math.log(mid / down), "no exact tie at " + mid);
+            assertEquals(up, series[k].roundNearest(mid), 0, series[k] + " " + mid);
+            assertEquals(down, series[k].roundNearest(Math.nextDown(mid)), 0);
+        }
+    }
+
+    @Test
+    void aValueWithinTheToleranceBelowTheLowestTableEntryRoundsDownToIt() {
+        // IEC 60063 value 10·10^−18 (the lowest the search table holds): a value within the 1e-9
+        // "already a series value" tolerance below it rounds down to it, as the decade walk says
+        double lowest = 10 / 1e18;
+        double x = lowest / (1 + 1e-9);
+        for (int k = 0; k < 3; k++) {
+            x = Math.nextDown(x);
+        }
+        for (int k = 0; k < 7; k++, x = Math.nextUp(x)) {
+            for (ESeries s : ESeries.values()) {
+                assertEquals(s.roundDownByDecades(x), s.roundDown(x), 0.0, s + " down " + x);
+                assertEquals(s.roundUpByDecades(x), s.roundUp(x), 0.0, s + " up " + x);
+            }
+        }
+        assertEquals(lowest, ESeries.E24.roundDown(lowest / (1 + 1e-9)), 0);
     }
 
     @Test

@@ -82,6 +82,40 @@ class GateChargeTest {
     }
 
     @Test
+    void chargesThatExactlyFillThePlateauAreAccepted() {
+        // gate-charge curve definition (JESD24-2): Q_g ≥ Q_gs + Q_gd; at equality (24 = 10 + 14 nC,
+        // exact in binary floating point too) nothing is left above the plateau, so the slope is
+        // (24 − 10 − 14) nC / (10 − 4) V = 0 and the specified swing still returns Q_g
+        assertEquals(24e-9 - 10e-9 - 14e-9, 0.0, 0, "inputs not exact in binary");
+        assertEquals(0.0, GateCharge.aboveSlope(24e-9, 10e-9, 14e-9, 10, 4), 0);
+        assertEquals(24e-9, GateCharge.atSwing(24e-9, 10e-9, 14e-9, 10, 4, NAN, 10, 0)
+                .orElseThrow().coulombs(), 0);
+    }
+
+    @Test
+    void rejectsAPlateauAtOrAboveTheSpecificationVoltage() {
+        // JESD24-2: Q_g is specified above the plateau (V_spec > V_pl), else there is no slope
+        // above it to extrapolate along; checked even when the swing needs no extrapolation
+        assertEquals("expected V_spec above V_plateau (V_spec, V_plateau), got 4.0 and 4.0",
+                assertThrows(IllegalArgumentException.class,
+                        () -> GateCharge.aboveSlope(44 * NC, 10 * NC, 14 * NC, 4, 4))
+                        .getMessage());
+        assertEquals("expected V_spec above V_plateau (V_spec, V_plateau), got 4.0 and 4.5",
+                assertThrows(IllegalArgumentException.class,
+                        () -> GateCharge.atSwing(44 * NC, 10 * NC, 14 * NC, 4, 4.5, NAN, 4, 0))
+                        .getMessage());
+    }
+
+    @Test
+    void rejectsInconsistentChargesAtTheSpecifiedSwing() {
+        // Q_gs + Q_gd ≤ Q_g (JESD24-2 curve), checked even when V_on = V_spec needs no slope
+        assertEquals("expected Q_gs + Q_gd <= Q_g, got 3.0E-8 + 2.0E-8 > 4.4E-8 C",
+                assertThrows(IllegalArgumentException.class,
+                        () -> GateCharge.atSwing(44e-9, 30e-9, 20e-9, 10, 4, NAN, 10, 0))
+                        .getMessage());
+    }
+
+    @Test
     void rejectsInconsistentCharges() {
         assertEquals("expected Q_gs + Q_gd <= Q_g, got 3.0E-8 + 2.0E-8 > 4.4E-8 C",
                 assertThrows(IllegalArgumentException.class,

@@ -130,6 +130,29 @@ class GateLoopTest {
     }
 
     @Test
+    void aFixedResistanceThatAlreadyDampsNeedsNoResistor() {
+        // REFERENCES §3 (computed): R_crit 4.53 Ω for 20 nH and 3.9 nF, so a fixed 6.2 Ω already
+        // gives ζ 1.369 > 1: the smallest external resistor is 0 Ω (a link), which pick returns
+        GateLoop.ResistorRange range = GateLoop.resistorRange(20 * NH, 3.9 * NF, 1.0, 6.2,
+                6.9e-9, 9, 20 * NS);
+        assertEquals(0.0, range.min(), 0);
+        assertEquals(0.0, range.pick(ESeries.E12).orElseThrow(), 0);
+    }
+
+    @Test
+    void bothEndsOfTheResistorRangeAreAllowed() {
+        // the range is R_min ≤ R_ext ≤ R_max (REFERENCES §3 damping target, §1 plateau time):
+        // a single value meets both targets, and an E12 value (IEC 60063) landing on R_max counts
+        GateLoop.ResistorRange single = new GateLoop.ResistorRange(10, 10);
+        assertTrue(single.feasible());
+        assertEquals(10, single.pick(ESeries.E12).orElseThrow(), 0);
+        // IEC 60063 E12: 9.0 Ω rounds up to 10 Ω, the top of the range
+        assertEquals(10, new GateLoop.ResistorRange(9.0, 10).pick(ESeries.E12).orElseThrow(), 0);
+        // ... and to nothing when the top is below the next E12 value
+        assertTrue(new GateLoop.ResistorRange(9.0, 9.9).pick(ESeries.E12).isEmpty());
+    }
+
+    @Test
     void rejectsInvalidLoops() {
         assertEquals("expected loop inductance L > 0 H, got 0.0",
                 assertThrows(IllegalArgumentException.class,

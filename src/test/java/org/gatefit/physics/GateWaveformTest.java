@@ -2,6 +2,7 @@ package org.gatefit.physics;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -98,6 +99,81 @@ class GateWaveformTest {
         assertEquals(moved, q, 1e-4 * moved);
         assertEquals(-5, v[0], 1e-12);
         assertEquals(12, v[v.length - 1], 0.01 * 17);
+    }
+
+    @Test
+    void thePlateauEndsAfterTheDelayPlusThePlateauTime() {
+        // REFERENCES §1 (computed): t_d(on) 6.956 ns + plateau 4.753 ns = 11.709 ns
+        GateWaveform.GateCurve curve = GateWaveform.GateCurve.ofInputCapacitance(3.9 * NF, 3,
+                6.9 * NC);
+        assertEquals(11.709, GateWaveform.turnOn(curve, 12, 0, 6.2).plateauEnd() / NS, 0.002);
+    }
+
+    @Test
+    void theDefaultSamplingEndsFiveTimeConstantsAfterThePlateau() {
+        // plain circuit theory (RC charge): 5 τ after leaving the plateau the gate is within
+        // (V_on − V_pl)·e^−5 of V_on. REFERENCES §1 inputs: τ = 6.2 Ω · 3.9 nF = 24.18 ns, plateau
+        // end 11.709 ns, so the last sample is at 11.709 + 120.9 = 132.6 ns
+        GateWaveform.GateCurve curve = GateWaveform.GateCurve.ofInputCapacitance(3.9 * NF, 3,
+                6.9 * NC);
+        GateWaveform.Waveform w = GateWaveform.turnOn(curve, 12, 0, 6.2).sample(11);
+        double[] t = w.time();
+        assertEquals(11, w.size());
+        assertEquals(132.6, t[10] / NS, 0.1);
+        assertEquals(12 - 9 * Math.exp(-5), w.gateVoltage()[10], 1e-9);
+        assertEquals(9 * Math.exp(-5) / 6.2, w.gateCurrent()[10], 1e-9);
+    }
+
+    @Test
+    void twoSamplesAreTheStartAndTheEnd() {
+        // plain circuit theory: at t = 0 the gate is at V_off and draws (V_on − V_off)/R
+        // (Ohm's law); long after the edge it sits at V_on and draws nothing
+        GateWaveform.GateCurve curve = GateWaveform.GateCurve.ofInputCapacitance(3.9 * NF, 3,
+                6.9 * NC);
+        GateWaveform.Waveform w = GateWaveform.turnOn(curve, 12, -3, 6.2).sample(2e-6, 2);
+        assertArrayEquals(new double[] {0, 2e-6}, w.time(), 0);
+        assertEquals(-3, w.gateVoltage()[0], 1e-12);
+        assertEquals(15 / 6.2, w.gateCurrent()[0], 1e-12);
+        assertEquals(12, w.gateVoltage()[1], 1e-9);
+        assertEquals(0, w.gateCurrent()[1], 1e-9);
+    }
+
+    @Test
+    void theChargeAtThePlateauVoltageIsQgs() {
+        // JEDEC JESD24-2 gate-charge curve: Q_gs is the charge from 0 V to the start of the
+        // plateau, so the curve through Q_g 44, Q_gs 10, Q_gd 14 nC gives 10 nC at V_pl = 4 V
+        GateWaveform.GateCurve curve = GateWaveform.GateCurve.fromGateCharge(44 * NC, 10 * NC,
+                14 * NC, 10, 4);
+        assertEquals(10, curve.chargeAt(4) / NC, 1e-9);
+        assertEquals(10, curve.plateauStartCharge() / NC, 1e-9);
+        // and Q_g at V_spec = 10 V (the same definition)
+        assertEquals(44, curve.chargeAt(10) / NC, 1e-9);
+    }
+
+    @Test
+    void waveformsAreEqualByTheirSamples() {
+        // value semantics (common practice, no source): equal samples, equal waveforms and
+        // hashes; a difference in any one of the three series makes them differ
+        double[] t = {0, 1e-9, 2e-9};
+        double[] v = {0, 5, 10};
+        double[] i = {2, 1, 0};
+        GateWaveform.Waveform w = new GateWaveform.Waveform(t, v, i);
+        GateWaveform.Waveform same = new GateWaveform.Waveform(t.clone(), v.clone(), i.clone());
+        assertEquals(w, same);
+        assertEquals(w.hashCode(), same.hashCode());
+        assertEquals("Waveform[3 samples]", w.toString());
+        GateWaveform.Waveform[] others = {
+            new GateWaveform.Waveform(new double[] {0, 1e-9, 3e-9}, v, i),
+            new GateWaveform.Waveform(t, new double[] {0, 5, 11}, i),
+            new GateWaveform.Waveform(t, v, new double[] {2, 1, 0.5}),
+        };
+        java.util.Set<Integer> hashes = new java.util.HashSet<>(java.util.List.of(w.hashCode()));
+        for (GateWaveform.Waveform o : others) {
+            assertNotEquals(w, o);
+            assertNotEquals(o, w);
+            assertTrue(hashes.add(o.hashCode()), "hash of " + o + " repeats another");
+        }
+        assertNotEquals(w, (Object) "Waveform[3 samples]");
     }
 
     @Test

@@ -69,6 +69,66 @@ class LogicFamilyTest {
     }
 
     @Test
+    void aZeroMarginIsStillCompatible() {
+        // NM = output level − threshold (REFERENCES §6): a guaranteed V_OH equal to the V_IH a
+        // receiver needs is still guaranteed to read high. From memory (REFERENCES §6): a JESD8-5
+        // 2.5 V output (V_OH 2.0 V) into an LVTTL input (V_IH 2.0 V) → NM_H 0, NM_L 0.8 − 0.4 V
+        NoiseMargins m = NoiseMargins.of(LogicFamily.LVCMOS_2V5.levels(),
+                LogicFamily.LVTTL_3V3.levels().vIh(), LogicFamily.LVTTL_3V3.levels().vIl());
+        assertEquals(0.0, m.high(), TOL);
+        assertEquals(0.4, m.low(), TOL);
+        assertTrue(m.compatible());
+        assertTrue(new NoiseMargins(0.4, 0.0).compatible());
+        assertFalse(new NoiseMargins(0.4, -0.05).compatible());
+    }
+
+    @Test
+    void theWorstMarginIsTheSmallerOne() {
+        // REFERENCES §6: a 2.4 V output into a 3.5 V threshold → NM_H −1.1 V, NM_L 1.1 V
+        NoiseMargins m = NoiseMargins.of(2.4, 0.4, 3.5, 1.5);
+        assertEquals(-1.1, m.worst(), TOL);
+        // REFERENCES §6 (from memory): 1.8 V at V_DD 1.8 → both 0.18 V
+        assertEquals(0.18, LogicFamily.LVCMOS_1V8.levels().selfMargins().worst(), TOL);
+        // NM_L = V_IL − V_OL, LVTTL (JESD8C.01, from memory): 0.8 − 0.4 V
+        assertEquals(0.4, NoiseMargins.low(0.8, 0.4).orElseThrow(), TOL);
+        assertTrue(NoiseMargins.low(0.8, Double.NaN).isEmpty());
+    }
+
+    @Test
+    void theSupplyRangeIsWhatTheLevelsAccept() {
+        // each family's nominal supply is the one its id names (3v3 → 3.3 V) and lies in the range
+        // levels() accepts; the range holds the standard's (from memory, REFERENCES §6 and §9):
+        // JESD8C.01 3.0–3.6 V, JESD8-5 2.3–2.7 V, JESD8-7 1.65–1.95 V, 5 V parts 4.5–5.5 V
+        double[][] standard = {{4.5, 5.5}, {4.5, 5.5}, {3.0, 3.6}, {3.0, 3.6}, {2.3, 2.7},
+            {1.65, 1.95}};
+        LogicFamily[] families = LogicFamily.values();
+        for (int k = 0; k < families.length; k++) {
+            LogicFamily f = families[k];
+            String named = f.id().substring(f.id().indexOf('-') + 1).replace("v", ".");
+            assertEquals(Double.parseDouble(named.endsWith(".") ? named + "0" : named),
+                    f.nominalSupply(), TOL, f.id());
+            assertTrue(f.minSupply() <= standard[k][0] && f.maxSupply() >= standard[k][1], f.id());
+            assertTrue(f.minSupply() < f.nominalSupply() && f.nominalSupply() < f.maxSupply());
+            f.levels(f.minSupply());
+            f.levels(f.maxSupply());
+            assertThrows(IllegalArgumentException.class,
+                    () -> f.levels(Math.nextDown(f.minSupply())), f.id());
+            assertThrows(IllegalArgumentException.class,
+                    () -> f.levels(Math.nextUp(f.maxSupply())), f.id());
+        }
+    }
+
+    @Test
+    void levelsMustPutHighAboveLow() {
+        assertEquals("expected V_OH above V_OL (V_OH, V_OL), got 0.4 and 2.4",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new LogicFamily.Levels(0.4, 2.4, 2.0, 0.8)).getMessage());
+        assertEquals("expected V_IH above V_IL (V_IH, V_IL), got 0.8 and 0.8",
+                assertThrows(IllegalArgumentException.class,
+                        () -> new LogicFamily.Levels(2.4, 0.4, 0.8, 0.8)).getMessage());
+    }
+
+    @Test
     void marginsAreUnknownWhenAThresholdIsNotGiven() {
         assertTrue(NoiseMargins.high(3.1, Double.NaN).isEmpty());
         assertTrue(NoiseMargins.low(Double.NaN, 0.2).isEmpty());

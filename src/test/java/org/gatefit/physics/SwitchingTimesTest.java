@@ -116,6 +116,36 @@ class SwitchingTimesTest {
     }
 
     @Test
+    void currentFallToANegativeOffLevelMatchesTheNumericalGateDischarge() {
+        // commons-math3 DormandPrince853 on dQ/dt = (V_off − V_GS(Q))/R from the start of the
+        // plateau (C_iss 3.9 nF, V_pl 3 V; REFERENCES §1 inputs) toward V_off = −5 V through
+        // 5.2 Ω: the time the gate takes to fall to V_th 2 V, to a relative 1e-6
+        GateWaveform.GateCurve curve =
+                GateWaveform.GateCurve.ofInputCapacitance(3.9 * NF, 3, 6.9 * NC);
+        double closed = SwitchingTimes.currentFall(5.2, 3.9 * NF, 2.0, 3, -5);
+        double qTh = curve.chargeAt(2.0) / NC;
+        List<Double> t = Ode.crossings(Ode.gateCharge(curve, -5, 5.2),
+                new double[] {curve.plateauStartCharge() / NC}, 100, (x, y) -> y[0] - qTh, -1);
+        assertEquals(t.get(0), closed / NS, ODE_REL_TOL * t.get(0));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({"delayOn", "delayOff", "currentRise"})
+    void everyGateChargeTimeRejectsADriveLevelAtThePlateau(String quantity) {
+        // the on level must exceed the plateau or the gate never leaves it (REFERENCES §1)
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> {
+                    switch (quantity) {
+                        case "delayOn" -> SwitchingTimes.delayOn(6.2, 3.9 * NF, 3, 3, 0);
+                        case "delayOff" -> SwitchingTimes.delayOff(5.2, 3.9 * NF, 2.5, 3, 0);
+                        default -> SwitchingTimes.currentRise(6.2, 3.9 * NF, 3, 2, 3);
+                    }
+                });
+        assertTrue(e.getMessage().startsWith("expected on level above the plateau"),
+                e.getMessage());
+    }
+
+    @Test
     void rejectsADriveLevelAtOrBelowThePlateau() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> SwitchingTimes.plateauOn(6.9 * NC, 6.2, 3, 3));
