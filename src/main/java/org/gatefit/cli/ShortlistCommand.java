@@ -55,6 +55,7 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
+            PairSupport.warnImplausible(ctx, spec, sw);
             Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,
                     Runtime.getRuntime().availableProcessors());
             try (Writer w = output.open(ctx)) {
