@@ -16,6 +16,9 @@ import org.gatefit.catalog.SheetReader;
 import org.gatefit.index.Catalog;
 import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
+import org.gatefit.match.OperatingPoint;
+import org.gatefit.match.Plausibility;
+import org.gatefit.match.SwitchPart;
 import org.gatefit.match.StageCheck;
 import org.gatefit.report.CheckReports;
 import picocli.CommandLine.Command;
@@ -30,7 +33,8 @@ import picocli.CommandLine.Parameters;
             + " Prints a summary and, per stage, the failing and warning rules with what would fix them; half-bridges"
             + " (two stages sharing a driver designator, one high and one low) also get a dead-time note.",
             "",
-            "Exit 0 when no stage fails, 1 when one does (so it can gate a CI build), 3 when an input file is bad."})
+            "Exit 0 when no stage fails, 1 when one does (so it can gate a CI build), 3 when an input file is bad,"
+            + " 4 when the catalog is empty or missing."})
 final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STAGES.csv", description = "The stage sheet.")
     Path stages;
@@ -85,11 +89,58 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
         }
         try (Catalog c = Catalog.open(catalogDir())) {
             if (c.isEmpty()) {
-                ctx.err.println("note: the catalog in " + c.directory() + " is empty; every stage will fail the catalog rule");
+                // Not a failed pair (exit 1): the environment is not set up (exit 4), so CI can tell them apart.
+                throw new NoCatalogException("the catalog in " + c.directory() + (java.nio.file.Files.isDirectory(
+                        c.directory()) ? " is empty" : " does not exist") + "; import the parts first ('gatefit"
+                        + " --catalog " + c.directory() + " import FILE...'), or name the catalog with --catalog or"
+                        + " GATEFIT_CATALOG");
             }
+            StageCheck.Report report;
             try (Progress bar = ctx.progress("stages checked", rows.size() >= Progress.LONG_CHECK ? rows.size() : 0)) {
-                return StageCheck.run(stagesFile.toString(), rows, b, new CatalogParts(c), m, bar::update);
+                report = StageCheck.run(stagesFile.toString(), rows, b, new CatalogParts(c), m, bar::update);
             }
+            warnImplausible(stagesFile.toString(), rows, report, c);
+            return report;
+        }
+    }
+
+    /**
+     * Warns of every stage value far outside what its switch's technology uses ({@link Plausibility}),
+     * naming the stage, its line and the column.
+     */
+    private void warnImplausible(String file, List<Row> rows, StageCheck.Report report, Catalog c) throws IOException {
+        java.util.Map<Long, Row> byLine = new java.util.HashMap<>();
+        for (Row r : rows) {
+            byLine.put(r.line(), r);
+        }
+        for (StageCheck.StageResult s : report.results()) {
+            Row row = byLine.get(s.line());
+            if (row == null || s.switchPart() == null || s.point() == null) {
+                continue;
+            }
+            java.util.Optional<Row> sw = c.get(Kind.SWITCH, s.switchPart());
+            if (sw.isEmpty()) {
+                continue;
+            }
+            for (Plausibility.Finding f : Plausibility.check(OperatingPoint.Spec.fromStage(row),
+                    SwitchPart.of(sw.get()).technology())) {
+                ctx.err.println("warning: stage " + s.stage() + " (" + file + " line " + s.line() + "): "
+                        + f.word(f.quantity().column()));
+            }
+        }
+    }
+
+    /** An empty or missing catalog for {@code check}: exit 4 (environment), with the message alone. */
+    static final class NoCatalogException extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        NoCatalogException(String message) {
+            super(message);
+        }
+
+        @Override
+        public String toString() {
+            return getMessage();
         }
     }
 

@@ -103,11 +103,31 @@ public final class Cli {
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
             c.getErr().println("gatefit: " + ex.getMessage());
+            suggest(ex, c);
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help' for the options.");
             c.getErr().flush();
             return ExitCode.USAGE;
         });
         return cl;
+    }
+
+    /**
+     * The nearest commands or options to a misspelt one ({@code shortlst}, {@code --swich}), as
+     * picocli suggests them; also when another error (a required option missing because it was
+     * misspelt) was reported first.
+     */
+    private static void suggest(CommandLine.ParameterException ex, CommandLine c) {
+        CommandLine.UnmatchedArgumentException unmatched = ex instanceof CommandLine.UnmatchedArgumentException u ? u
+                : null;
+        if (unmatched == null && c.getParseResult() != null && !c.getParseResult().unmatched().isEmpty()) {
+            unmatched = new CommandLine.UnmatchedArgumentException(c, c.getParseResult().unmatched());
+        }
+        if (unmatched != null && !unmatched.getSuggestions().isEmpty()) {
+            if (unmatched != ex) {
+                c.getErr().println("gatefit: not understood: " + String.join(" ", unmatched.getUnmatched()));
+            }
+            unmatched.printSuggestions(c.getErr());
+        }
     }
 
     /** Runs with the real streams and environment. */

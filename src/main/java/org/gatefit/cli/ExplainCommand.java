@@ -50,6 +50,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
+            PairSupport.warnImplausible(ctx, spec, sw);
             r = Rules.evaluate(dr, sw, op, margins.margins());
             drive = GateDrive.of(sw, r);
         }

@@ -9,6 +9,7 @@ import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
 import org.gatefit.catalog.Schema;
 import org.gatefit.match.OperatingPoint;
+import org.gatefit.match.Plausibility;
 import picocli.CommandLine.Option;
 
 /**
@@ -74,6 +75,18 @@ final class OperatingPointOptions {
             description = "Switch-node slew rate to check, V/ns (default: estimated as bus / turn-on plateau time).")
     String dvdt;
 
+    /** The option that sets a checked quantity, for warnings. */
+    static String option(Plausibility.Quantity q) {
+        return switch (q) {
+            case BUS -> "--bus";
+            case F_SW -> "--freq";
+            case EDGE -> "--edge";
+            case V_DRIVE -> "--drive";
+            case V_DRIVE_NEG -> "--drive-neg";
+            case LOOP -> "--loop";
+        };
+    }
+
     /** The options as a stage-sheet row, parsed exactly as a stage sheet's cells would be. */
     OperatingPoint.Spec spec() throws BadValueException {
         // Option, stage-sheet column, value as typed: one row each, so errors name the option.
@@ -91,6 +104,12 @@ final class OperatingPointOptions {
                 continue;
             }
             Column c = stage.column(cell[1]).orElseThrow();
+            if (cell[2].matches(".*\\d,\\d.*")) {
+                // Refused rather than read: "1,000" may be a thousands separator as well as a decimal comma.
+                throw new BadValueException(cell[0] + ": '" + cell[2] + "' has a comma; on the command line write a"
+                        + " decimal point (" + cell[2].strip().replace(',', '.') + ") — gatefit does not guess whether"
+                        + " a comma is a decimal mark or a thousands separator");
+            }
             try {
                 Object v = Cells.parse(c, cell[2], false);
                 if (v != null) {

@@ -88,7 +88,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         try (Catalog c = Catalog.open(catalogDir())) {
             List<Row> found = kind == null ? c.lookup(part) : c.get(kind, part).map(List::of).orElse(List.of());
             if (found.isEmpty()) {
-                throw new UsageException("no part '" + part + "' in the catalog " + c.directory());
+                throw PairSupport.notFound(c, kind, part);
             }
             if (found.size() > 1) {
                 throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");

@@ -1,12 +1,19 @@
 package org.gatefit.cli;
 
 import java.io.Writer;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Op;
 import org.gatefit.index.Catalog;
 import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
+import org.gatefit.match.Prefilter;
+import org.gatefit.match.Topology;
 import org.gatefit.match.Shortlist;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.report.MatchReports;
@@ -20,7 +27,9 @@ import picocli.CommandLine.Option;
             + " voltage, negative bias, UVLO, logic levels, polarity, high side, bootstrap, driver power, dv/dt,"
             + " lifecycle) and lists the best, best first: passing before warning, then by score, then by price."
             + " Drivers are skipped up front only when their topology or supply range makes them certain to fail."
-            + " Defaults that were assumed are printed with the result."},
+            + " Defaults that were assumed are printed with the result. --topology, --in-stock, --max-price and"
+            + " --maker narrow the drivers considered and are printed as what was asked; the switch's own lifecycle"
+            + " and stock are said once above the table."},
         footer = {"", "Example:", "  gatefit shortlist --switch NVS-4810N --freq 100 --bus 48 --side high --duty-max 0.9 --rg 4R7"})
 public final class ShortlistCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--switch", required = true, paramLabel = "PART", description = "The switch to find drivers for.")
@@ -31,6 +40,20 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
 
     @Option(names = "--all", description = "Also list failing drivers, with the reasons they fail.")
     boolean all;
+
+    @Option(names = "--topology", paramLabel = "TOPOLOGY",
+            description = "Only drivers of this topology: low-side, high-side, half-bridge or isolated.")
+    String topology;
+
+    @Option(names = "--in-stock", description = "Only drivers with stock above 0 (unknown stock is left out).")
+    boolean inStock;
+
+    @Option(names = "--max-price", paramLabel = "PRICE",
+            description = "Only drivers at or below this unit price (unknown price is left out).")
+    String maxPrice;
+
+    @Option(names = "--maker", paramLabel = "MAKER", description = "Only drivers of this maker (case does not matter).")
+    String maker;
 
     @Mixin
     OperatingPointOptions point;
@@ -52,11 +75,13 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         }
         OperatingPoint.Spec spec = point.spec();
         Margins m = margins.margins();
+        List<Prefilter.Condition> asked = filters();
         try (Catalog c = Catalog.open(catalogDir())) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
+            PairSupport.warnImplausible(ctx, spec, sw);
             Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,
-                    Runtime.getRuntime().availableProcessors());
+                    Runtime.getRuntime().availableProcessors(), asked);
             try (Writer w = output.open(ctx)) {
                 MatchReports.shortlist(r, output.format, output.colour(ctx), w);
             }
@@ -64,4 +89,39 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         return ExitCode.OK;
     }
 
+    /** The filters asked for, as catalog conditions. */
+    private List<Prefilter.Condition> filters() throws UsageException {
+        List<Prefilter.Condition> out = new ArrayList<>();
+        if (topology != null) {
+            String t = topology.strip().toLowerCase(Locale.ROOT);
+            if (Arrays.stream(Topology.values()).noneMatch(x -> x.id().equals(t))) {
+                throw new UsageException("--topology: expected one of " + String.join(", ",
+                        Arrays.stream(Topology.values()).map(Topology::id).toList()) + ", got '" + topology + "'");
+            }
+            out.add(Prefilter.Condition.is("topology", Op.EQ, t));
+        }
+        if (inStock) {
+            out.add(Prefilter.Condition.of("stock", Op.GT, 0));
+        }
+        if (maxPrice != null) {
+            double p;
+            try {
+                p = Double.parseDouble(maxPrice.strip());
+            } catch (NumberFormatException e) {
+                p = Double.NaN;
+            }
+            if (!(p >= 0) || Double.isInfinite(p)) {
+                throw new UsageException("--max-price: expected a price of 0 or more in the catalog's currency"
+                        + " (a plain number with a decimal point, e.g. 2.5), got '" + maxPrice + "'");
+            }
+            out.add(Prefilter.Condition.of("unit_price", Op.LE, p));
+        }
+        if (maker != null) {
+            if (maker.isBlank()) {
+                throw new UsageException("--maker: expected a maker's name, got an empty one");
+            }
+            out.add(Prefilter.Condition.is("maker", Op.EQ, maker.strip()));
+        }
+        return out;
+    }
 }

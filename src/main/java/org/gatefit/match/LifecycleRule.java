@@ -19,16 +19,19 @@ final class LifecycleRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        judge(f.d, f.s, out);
+        judge(f.d, f.q.lifecycleSwitch(), out);
     }
 
-    /** The judgement on the parts alone (a p-channel pair has no figures, but a lifecycle). */
+    /**
+     * The judgement on the parts alone (a p-channel pair has no figures, but a lifecycle); {@code s}
+     * null: the driver alone (a shortlist says the switch's status once, {@link Question#ofShortlist}).
+     */
     static void judge(DriverPart d, SwitchPart s, Outcome out) {
-        if (!noted(d.lifecycle(), d.stock()) && !noted(s.lifecycle(), s.stock())) {
+        if (!noted(d.lifecycle(), d.stock()) && (s == null || !noted(s.lifecycle(), s.stock()))) {
             out.pass(Why.CLEAR, 1);
             return;
         }
-        switch (d.lifecycle().verdict(d.stock()).and(s.lifecycle().verdict(s.stock()))) {
+        switch (d.lifecycle().verdict(d.stock()).and(s == null ? Verdict.PASS : s.lifecycle().verdict(s.stock()))) {
             case FAIL -> out.fail(Why.NOTED);
             case WARN -> out.warn(Why.NOTED, 0.5);
             case UNKNOWN -> out.unknown(Why.NOTED);
@@ -38,21 +41,45 @@ final class LifecycleRule implements PairRule {
 
     @Override
     public Worded word(PairFigures f, Reason why) {
-        return word(f.d, f.s, (Why) why);
+        return word(f.d, f.q.lifecycleSwitch(), (Why) why);
     }
 
+    /** As {@link #judge(DriverPart, SwitchPart, Outcome)}: {@code s} null words the driver alone. */
     static Worded word(DriverPart d, SwitchPart s, Why why) {
         return switch (why) {
-            case CLEAR -> new Worded("both parts are active" + (d.stock() > 0 && s.stock() > 0 ? " and in stock" : ""));
+            case CLEAR -> s == null ? new Worded("the driver is active" + (d.stock() > 0 ? " and in stock" : ""))
+                    : new Worded("both parts are active" + (d.stock() > 0 && s.stock() > 0 ? " and in stock" : ""));
             case NOTED -> {
                 List<String> notes = new ArrayList<>();
                 note(notes, d.partNumber(), d.lifecycle(), d.stock());
-                note(notes, s.partNumber(), s.lifecycle(), s.stock());
-                boolean fails = d.lifecycle().verdict(d.stock()).and(s.lifecycle().verdict(s.stock())) == Verdict.FAIL;
+                if (s != null) {
+                    note(notes, s.partNumber(), s.lifecycle(), s.stock());
+                }
+                boolean fails = d.lifecycle().verdict(d.stock()).and(s == null ? Verdict.PASS
+                        : s.lifecycle().verdict(s.stock())) == Verdict.FAIL;
                 yield new Worded(String.join("; ", notes) + (fails ? " — find a replacement ('gatefit replace')"
                         : " — check availability or plan a second source"));
             }
         };
+    }
+
+    /**
+     * The switch's own lifecycle and stock, said once above a shortlist, or null when there is
+     * nothing to note (active and not out of stock).
+     */
+    static String switchStatus(SwitchPart s) {
+        if (!noted(s.lifecycle(), s.stock())) {
+            return null;
+        }
+        List<String> notes = new ArrayList<>();
+        note(notes, s.partNumber(), s.lifecycle(), s.stock());
+        if (notes.isEmpty()) {
+            notes.add(s.partNumber() + " has an unknown lifecycle status");
+        }
+        return String.join("; ", notes) + (s.lifecycle().verdict(s.stock()) == Verdict.FAIL
+                ? " — find a replacement ('gatefit replace " + s.partNumber() + "')"
+                : " — check availability or plan a second source") + " (said once; each driver's lifecycle check is"
+                + " about the driver alone)";
     }
 
     private static void note(List<String> notes, String pn, Lifecycle l, long stock) {

@@ -14,7 +14,8 @@ import org.gatefit.catalog.Op;
  * certain to fail on values they have (never on a value they lack). Built from the rules'
  * declarations ({@link PairRule#certainFailures}); the catalog adapter turns it into its own query.
  *
- * @param require conditions every driver left must meet (only on required columns, always known)
+ * @param require conditions every driver left must meet: the rules' only on required columns (always
+ *                known); a user's filter ({@code stock > 0}) also leaves out drivers lacking the value
  * @param exclude groups of conditions: a driver meeting every condition of a group is skipped
  */
 public record Prefilter(List<Condition> require, List<Exclusion> exclude) {

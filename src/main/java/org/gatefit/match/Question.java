@@ -28,8 +28,15 @@ public final class Question {
     final double iReq;
     /** Whether the switch has a Miller plateau between the off and on levels (turn-on and turn-off times). */
     final boolean plateau;
+    /**
+     * Whether the switch's own lifecycle and stock are said once apart from the pairs (a shortlist):
+     * the {@code lifecycle} rule then judges the driver alone, so a switch that is out of stock does
+     * not turn every driver's pass into a warning.
+     */
+    final boolean switchStatusApart;
 
-    private Question(SwitchPart s, OperatingPoint op, Margins m) {
+    private Question(SwitchPart s, OperatingPoint op, Margins m, boolean switchStatusApart) {
+        this.switchStatusApart = switchStatusApart;
         this.s = Objects.requireNonNull(s, "switch");
         this.op = Objects.requireNonNull(op, "operating point");
         this.m = Objects.requireNonNull(m, "margins");
@@ -74,7 +81,21 @@ public final class Question {
 
     /** The question for a switch at an operating point (after defaults) with these margins. */
     public static Question of(SwitchPart s, OperatingPoint op, Margins m) {
-        return new Question(s, op, m);
+        return new Question(s, op, m, false);
+    }
+
+    /**
+     * The question of a shortlist: as {@link #of}, but the switch's own lifecycle and stock are left
+     * to be said once with the result ({@link Shortlist.Result#switchStatus}), and the
+     * {@code lifecycle} rule judges each driver's alone.
+     */
+    public static Question ofShortlist(SwitchPart s, OperatingPoint op, Margins m) {
+        return new Question(s, op, m, true);
+    }
+
+    /** The switch whose lifecycle the pair's {@code lifecycle} rule judges, or null when it is said apart. */
+    SwitchPart lifecycleSwitch() {
+        return switchStatusApart ? null : s;
     }
 
     /** The switch asked about. */

@@ -29,6 +29,26 @@ public enum Rule {
         return id;
     }
 
+    /**
+     * The rules from the most to the least fundamental failure, in one place: when several fail, the
+     * first of these is the one that decides (a part missing; a driver that cannot float on a high
+     * side or has the wrong input sense or supply range is wrong in kind, before a UVLO or a drive
+     * current that is merely too small). Common practice, no source.
+     */
+    private static final java.util.List<Rule> FUNDAMENTAL = java.util.List.of(CATALOG, HIGH_SIDE, POLARITY,
+            GATE_VOLTAGE, NEGATIVE_BIAS, LOGIC_LEVEL, UVLO, DRIVE_CURRENT, BOOTSTRAP, DRIVER_POWER, DV_DT, LIFECYCLE);
+
+    static {
+        if (FUNDAMENTAL.size() != values().length || !FUNDAMENTAL.containsAll(java.util.List.of(values()))) {
+            throw new ExceptionInInitializerError("Rule.FUNDAMENTAL must list every rule once");
+        }
+    }
+
+    /** Position in the order of fundamental failures (0 the most fundamental). */
+    public int fundamental() {
+        return FUNDAMENTAL.indexOf(this);
+    }
+
     /** Weight in the electrical part of the score (0: counted through availability instead). */
     public int weight() {
         return weight;

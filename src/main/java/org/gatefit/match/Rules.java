@@ -49,7 +49,7 @@ public final class Rules {
         for (Entry e : PAIR_RULES) {
             String refused = judge(e, f, d, q, out);
             PairRule.Worded said = refused == null ? e.rule().word(f, out.why())
-                    : e.rule() instanceof LifecycleRule ? LifecycleRule.word(d, q.s, (LifecycleRule.Why) out.why())
+                    : e.rule() instanceof LifecycleRule ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
                     : new PairRule.Worded(f == null ? without : "cannot estimate: " + refused);
             checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
             v = v.and(out.verdict());
@@ -93,7 +93,7 @@ public final class Rules {
     private static String judge(Entry e, PairFigures f, DriverPart d, Question q, Outcome out) {
         if (f == null) {
             if (e.rule() instanceof LifecycleRule) {
-                LifecycleRule.judge(d, q.s, out);
+                LifecycleRule.judge(d, q.lifecycleSwitch(), out);
                 return "";
             }
             out.unknown(Reason.Common.CANNOT_ESTIMATE);

@@ -33,12 +33,32 @@ public final class Shortlist {
      * @param failing      how many fail
      * @param skipped      drivers the prefilter skipped without evaluating (each certain to fail)
      * @param prefilter    the catalog conditions used to skip drivers that must fail
+     * @param asked        the filters the user asked for ({@code topology = isolated}, {@code stock > 0}, …)
+     * @param filteredOut  drivers the asked filters left out (a driver lacking the value included)
+     * @param switchStatus the switch's own lifecycle and stock, said once; null when there is nothing to note
      */
     public record Result(SwitchPart switchPart, OperatingPoint point, Margins margins, List<PairResult> candidates,
-                         int evaluated, int passing, int warning, int failing, int skipped, List<String> prefilter) {
+                         int evaluated, int passing, int warning, int failing, int skipped, List<String> prefilter,
+                         List<String> asked, int filteredOut, String switchStatus) {
         public Result {
             candidates = List.copyOf(candidates);
             prefilter = List.copyOf(prefilter);
+            asked = List.copyOf(asked);
+        }
+
+        Result asked(List<String> conditions, int left) {
+            return new Result(switchPart, point, margins, candidates, evaluated, passing, warning, failing, skipped,
+                    prefilter, conditions, left, switchStatus);
+        }
+    }
+
+    /** Counts the parts a scan hands it. */
+    private static final class Count implements java.util.function.Consumer<RowCursor> {
+        int n;
+
+        @Override
+        public void accept(RowCursor r) {
+            n++;
         }
     }
 
@@ -52,17 +72,47 @@ public final class Shortlist {
      */
     public static Result run(PartSource parts, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
                              int threads) throws java.io.IOException {
-        Question q = Question.of(sw, op, m);
+        return run(parts, sw, op, m, top, all, threads, List.of());
+    }
+
+    /**
+     * As above, over only the drivers meeting every condition of {@code asked} (the user's filters:
+     * topology, in stock, price, maker), applied by the catalog always — with or without the rules'
+     * prefilter — and returned with the result as what was asked. A driver lacking a filtered value
+     * is left out (an unknown stock is not "in stock").
+     */
+    public static Result run(PartSource parts, SwitchPart sw, OperatingPoint op, Margins m, int top, boolean all,
+                             int threads, List<Prefilter.Condition> asked) throws java.io.IOException {
+        Question q = Question.ofShortlist(sw, op, m);
         int drivers = parts.count(Kind.DRIVER);
-        Prefilter pre = all || drivers < PREFILTER_FROM ? Prefilter.NONE : prefilter(q);
-        Ranker template = new Ranker(q, top, all, pre.describe(), 0);
+        Prefilter rules = all || drivers < PREFILTER_FROM ? Prefilter.NONE : prefilter(q);
+        List<Prefilter.Condition> require = new ArrayList<>(asked);
+        require.addAll(rules.require());
+        Prefilter pre = new Prefilter(require, rules.exclude());
+        Ranker template = new Ranker(q, top, all, rules.describe(), 0);
         List<Ranker> ranked = parts.scanColumns(Kind.DRIVER, pre, threads, template::sibling);
         int scanned = 0;
         for (Ranker r : ranked) {
             scanned += r.evaluated();
         }
-        // Without a prefilter every live driver is scanned, so this is 0.
-        return Ranker.merge(ranked.isEmpty() ? List.of(template) : ranked, drivers - scanned).result();
+        // The drivers the asked filters keep: all of them scanned when the rules skip none.
+        int kept = drivers;
+        if (!asked.isEmpty()) {
+            kept = scanned;
+            if (!rules.isEmpty()) {
+                kept = 0;
+                for (Count c : parts.scanColumns(Kind.DRIVER, new Prefilter(asked, List.of()), threads, Count::new)) {
+                    kept += c.n;
+                }
+            }
+        }
+        List<String> said = new ArrayList<>();
+        for (Prefilter.Condition c : asked) {
+            said.add(c.toString());
+        }
+        // Without a prefilter every driver the filters keep is scanned, so skipped is 0.
+        return Ranker.merge(ranked.isEmpty() ? List.of(template) : ranked, kept - scanned).result()
+                .asked(said, drivers - kept);
     }
 
     /**
@@ -244,7 +294,8 @@ public final class Shortlist {
             }
             out.sort(RANKING);
             return new Result(prepared.switchPart(), prepared.point(), prepared.margins(), out, evaluated(), passing(),
-                    warning(), failing(), skipped, prefilterUsed);
+                    warning(), failing(), skipped, prefilterUsed, List.of(), 0,
+                    prepared.switchStatusApart ? LifecycleRule.switchStatus(prepared.switchPart()) : null);
         }
     }
 }

@@ -51,7 +51,9 @@ final class MatchHtml {
                 + r.passing() + ", " + Html.verdict(Verdict.WARN) + " " + r.warning() + ", " + Html.verdict(Verdict.FAIL)
                 + " " + r.failing() + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain"
                 + " to fail)" : "") + "</p>\n");
-        out.write(Html.context(context(r.point(), r.margins(), r.prefilter())));
+        List<String[]> said = new java.util.ArrayList<>(MatchReports.shortlistContext(r));
+        said.addAll(context(r.point(), r.margins(), r.prefilter()));
+        out.write(Html.context(said));
         out.write("<h2>Ranking</h2>\n");
         if (r.candidates().isEmpty()) {
             out.write("<p>No driver in the catalog works with this switch at this operating point"

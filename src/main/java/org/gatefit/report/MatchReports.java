@@ -49,6 +49,9 @@ public final class MatchReports {
                 + " pass, " + r.warning() + " warn, " + r.failing() + " fail"
                 + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain to fail)" : "");
         out.write(md ? "## " + Markdown.escape(head) + "\n\n" : Wrap.wrap(head, WIDTH, 2) + "\n");
+        for (String[] l : shortlistContext(r)) {
+            out.write(md ? "- **" + l[0] + ":** " + Markdown.escape(l[1]) + "\n" : Wrap.wrap(l[0] + ": " + l[1], WIDTH, 4) + "\n");
+        }
         context(out, md, r.point(), r.margins(), r.prefilter());
         out.write("\n");
         if (r.candidates().isEmpty()) {
@@ -109,6 +112,19 @@ public final class MatchReports {
         out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
     }
 
+    /** What a shortlist says once above its table: the switch's own status and the filters asked. */
+    static List<String[]> shortlistContext(Shortlist.Result r) {
+        List<String[]> lines = new ArrayList<>();
+        if (r.switchStatus() != null) {
+            lines.add(new String[] {"Switch status", r.switchStatus()});
+        }
+        if (!r.asked().isEmpty()) {
+            lines.add(new String[] {"Asked", String.join(", ", r.asked()) + " (" + r.filteredOut()
+                    + " drivers left out, any lacking the value among them)"});
+        }
+        return lines;
+    }
+
     private static void context(Writer out, boolean md, org.gatefit.match.OperatingPoint p,
                                 org.gatefit.match.Margins m, List<String> prefilter) throws IOException {
         List<String[]> lines = MatchHtml.context(p, m, prefilter);
@@ -140,12 +156,18 @@ public final class MatchReports {
         return p.figure(name).map(f -> Eng.of(f.value(), unit)).orElse("");
     }
 
-    /** The rule that decides the verdict: the worst check, heaviest rule first on ties. */
+    /**
+     * The rule that decides the verdict: the worst check; among failures the most fundamental
+     * ({@link org.gatefit.match.Rule#fundamental}: a high side the driver cannot float on before a
+     * drive current too small), among warnings the lowest sub-score.
+     */
     static Check decidingCheck(PairResult p) {
         Check worst = null;
         for (Check c : p.checks()) {
             if (worst == null || c.verdict().ordinal() > worst.verdict().ordinal()
-                    || (c.verdict() == worst.verdict() && c.score() < worst.score())) {
+                    || (c.verdict() == worst.verdict() && c.verdict() == Verdict.FAIL
+                        && c.rule().fundamental() < worst.rule().fundamental())
+                    || (c.verdict() == worst.verdict() && c.verdict() != Verdict.FAIL && c.score() < worst.score())) {
                 worst = c;
             }
         }
@@ -166,6 +188,15 @@ public final class MatchReports {
             g.writeNumberField("warning", r.warning());
             g.writeNumberField("failing", r.failing());
             g.writeNumberField("skipped", r.skipped());
+            g.writeArrayFieldStart("asked");
+            for (String a : r.asked()) {
+                g.writeString(a);
+            }
+            g.writeEndArray();
+            g.writeNumberField("filtered_out", r.filteredOut());
+            if (r.switchStatus() != null) {
+                g.writeStringField("switch_status", r.switchStatus());
+            }
             MatchJson.point(g, r.point());
             MatchJson.margins(g, r.margins());
             g.writeArrayFieldStart("prefilter");

@@ -98,7 +98,9 @@ class ShortlistPrefilterTest {
                     int warn = 0;
                     int fail = 0;
                     for (DriverPart d : every) {
-                        PairResult r = Rules.evaluate(d, sw, op, Margins.DEFAULT).withPrice(d.price());
+                        // The shortlist's question: the switch's own lifecycle is said once, apart from the pairs.
+                        PairResult r = Rules.evaluate(d, org.gatefit.match.Question.ofShortlist(sw, op, Margins.DEFAULT))
+                                .withPrice(d.price());
                         switch (r.verdict()) {
                             case PASS -> pass++;
                             case WARN, UNKNOWN -> warn++;
