@@ -135,7 +135,7 @@ public final class SheetReader {
                     "the file is empty (expected a header line naming the columns, then one row per part)"));
         }
         pin.unread(bom, 0, keep);
-        CsvLexer lexer = new CsvLexer(new StrictUtf8Reader(pin));
+        CsvRecords lexer = new CsvLexer(new StrictUtf8Reader(pin));
         char delimiter;
         try {
             delimiter = lexer.sniffDelimiter();
@@ -146,7 +146,7 @@ public final class SheetReader {
         return readRecords(lexer, delimiter, sink);
     }
 
-    private Summary readRecords(CsvLexer lexer, char delimiter, Sink sink) throws IOException {
+    private Summary readRecords(CsvRecords lexer, char delimiter, Sink sink) throws IOException {
         // Header: the first non-blank record.
         List<String> header = null;
         long headerLine = 0;
@@ -159,7 +159,7 @@ public final class SheetReader {
                 }
             }
         } catch (IOException e) {
-            return fatal(null, List.of(), delimiter, readFailure(e, lexer.startLine()));
+            return fatal(null, List.of(), delimiter, readFailure(e, lexer.startLine(), null));
         }
         if (header == null) {
             return fatal(null, List.of(), delimiter, Problem.ofLine(file, 0,
@@ -183,7 +183,7 @@ public final class SheetReader {
                     break;
                 }
             } catch (IOException e) {
-                add(readFailure(e, lexer.startLine()));
+                add(readFailure(e, lexer.startLine(), header));
                 fatal = true;
                 break;
             }
@@ -320,7 +320,7 @@ public final class SheetReader {
         return l;
     }
 
-    private Row parseRow(Schema schema, Layout l, CsvLexer rec, long line, boolean decimalComma, String keyColumn,
+    private Row parseRow(Schema schema, Layout l, CsvRecords rec, long line, boolean decimalComma, String keyColumn,
                          List<Problem> out) {
         if (rec.size() != l.width) {
             out.add(Problem.ofLine(file, line, "the row has " + rec.size() + " cells but the header has " + l.width
@@ -417,7 +417,12 @@ public final class SheetReader {
         return null;
     }
 
-    private Problem readFailure(IOException e, long line) {
+    /**
+     * What reading the records stopped at: text that is not UTF-8, malformed CSV (typed by the record
+     * reader, worded here with the column's header name when the header is known), or the reader's
+     * own I/O failure.
+     */
+    private Problem readFailure(IOException e, long line, List<String> header) {
         Throwable c = e;
         while (c != null) {
             if (c instanceof CharacterCodingException) {
@@ -425,16 +430,20 @@ public final class SheetReader {
             }
             c = c.getCause();
         }
-        String msg = String.valueOf(e.getMessage());
-        if (msg.contains("EOF reached before encapsulated token finished")) {
-            return Problem.ofLine(file, line, "a double quote opened in the row starting here is never closed"
-                    + " (expected a closing \" before the end of the file)");
+        if (e instanceof CsvSyntaxException s) {
+            String message = switch (s.syntax()) {
+                case UNCLOSED_QUOTE -> "a double quote opened in the row starting here is never closed"
+                        + " (expected a closing \" before the end of the file)";
+                case TEXT_AFTER_QUOTE -> "text follows a closing double quote in the row starting here"
+                        + " (expected a separator after a quoted value; write a quote inside a value as \"\")";
+            };
+            int at = s.column();
+            String name = header != null && at > 0 && at <= header.size() && !header.get(at - 1).isBlank()
+                    ? header.get(at - 1).strip().toLowerCase(Locale.ROOT) : null;
+            return new Problem(file, s.line(), name, at, null, name == null && at > 0
+                    ? message + " (column " + at + ")" : message);
         }
-        if (msg.contains("Invalid character between encapsulated token and delimiter")) {
-            return Problem.ofLine(file, line, "text follows a closing double quote in the row starting here"
-                    + " (expected a separator after a quoted value; write a quote inside a value as \"\")");
-        }
-        return Problem.ofLine(file, line, "cannot read the CSV: " + msg);
+        return Problem.ofLine(file, line, "cannot read the CSV: " + e.getMessage());
     }
 
     private Problem notUtf8(long line) {
