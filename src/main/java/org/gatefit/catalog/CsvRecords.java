@@ -7,7 +7,8 @@ import java.util.List;
  * CSV text as records, one at a time, with {@code CSVFormat.DEFAULT}'s rules and the settings
  * {@link SheetReader} reads with (one-character delimiter, double quote, no escape, no comments,
  * empty lines kept, surrounding spaces kept). Two readers stand behind it: the hand-written
- * {@link CsvLexer} (the fast path) and Commons CSV ({@link CommonsCsvRecords}, the reference).
+ * {@link CsvLexer} (the fast path) and Commons CSV ({@link CommonsCsvRecords}, the reference);
+ * {@link FastPath#CSV} picks one.
  */
 interface CsvRecords {
     /** Characters the delimiter detection looks at, at most. */

@@ -82,12 +82,15 @@ public final class SheetReader {
 
     private final String file;
     private final Kind forced;
+    /** Whether records come from Commons CSV (the reference) rather than {@link CsvLexer} ({@link FastPath#CSV}). */
+    private final boolean reference;
     private final List<Problem> problems = new ArrayList<>();
     private long problemCount;
 
-    private SheetReader(String file, Kind forced) {
+    private SheetReader(String file, Kind forced, boolean reference) {
         this.file = file;
         this.forced = forced;
+        this.reference = reference;
     }
 
     /**
@@ -105,7 +108,7 @@ public final class SheetReader {
         }
         try (InputStream raw = Files.newInputStream(path);
              DigestInputStream in = new DigestInputStream(raw, sha)) {
-            SheetReader r = new SheetReader(displayName, forced);
+            SheetReader r = new SheetReader(displayName, forced, FastPath.CSV.reference());
             Summary s = r.read(in, sink);
             in.transferTo(OutputStreamSink.INSTANCE);
             return new Summary(s.file(), s.kind(), HexFormat.of().formatHex(sha.digest()), s.rows(), s.rejected(),
@@ -115,7 +118,12 @@ public final class SheetReader {
 
     /** Reads from a stream (SHA-256 left empty). */
     public static Summary read(InputStream in, String displayName, Kind forced, Sink sink) throws IOException {
-        return new SheetReader(displayName, forced).read(in, sink);
+        return read(in, displayName, forced, sink, FastPath.CSV.reference());
+    }
+
+    /** Reads from a stream with the CSV reader chosen: Commons CSV ({@code reference}) or {@link CsvLexer}. */
+    static Summary read(InputStream in, String displayName, Kind forced, Sink sink, boolean reference) throws IOException {
+        return new SheetReader(displayName, forced, reference).read(in, sink);
     }
 
     private Summary read(InputStream in, Sink sink) throws IOException {
@@ -135,7 +143,8 @@ public final class SheetReader {
                     "the file is empty (expected a header line naming the columns, then one row per part)"));
         }
         pin.unread(bom, 0, keep);
-        CsvRecords lexer = new CsvLexer(new StrictUtf8Reader(pin));
+        Reader text = new StrictUtf8Reader(pin);
+        CsvRecords lexer = reference ? new CommonsCsvRecords(text) : new CsvLexer(text);
         char delimiter;
         try {
             delimiter = lexer.sniffDelimiter();

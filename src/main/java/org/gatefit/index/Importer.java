@@ -172,7 +172,7 @@ public final class Importer {
         long written;
         DirectoryReader committed = DirectoryReader.indexExists(writer.getDirectory())
                 ? DirectoryReader.open(writer.getDirectory()) : null;
-        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, listener, threads, chunkRows)) {
+        try (committed; RowWriter pipeline = RowWriter.open(writer, committed, listener, threads, chunkRows)) {
         for (int i = 0; i < files.size(); i++) {
             String name = names.get(i);
             boolean[] stop = {false};
