@@ -147,7 +147,7 @@ public final class Bom {
             char delim = firstLine == null ? ',' : count(firstLine, ';') > count(firstLine, ',') ? ';'
                     : count(firstLine, '\t') > count(firstLine, ',') ? '\t' : ',';
             CSVFormat f = CSVFormat.DEFAULT.builder().setDelimiter(delim).setIgnoreEmptyLines(false).get();
-            try (CSVParser p = CSVParser.builder().setReader(br).setFormat(f).get()) {
+            try (CSVParser p = f.parse(br)) {
                 return parse(p, name);
             } catch (UncheckedIOException e) {
                 throw new CatalogDataException(Problem.ofLine(name, 0, "cannot read the BOM as CSV: "

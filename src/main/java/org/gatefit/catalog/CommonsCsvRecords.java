@@ -55,7 +55,7 @@ final class CommonsCsvRecords implements CsvRecords {
         if (parser == null) {
             CSVFormat format = CSVFormat.DEFAULT.builder().setDelimiter(delimiter).setQuote('"')
                     .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(false).get();
-            parser = CSVParser.builder().setReader(in).setFormat(format).get();
+            parser = format.parse(in);
             records = parser.iterator();
         }
         record = null;

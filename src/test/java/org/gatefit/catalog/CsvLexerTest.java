@@ -43,7 +43,7 @@ class CsvLexerTest {
                 .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(false).get();
         List<List<String>> records = new ArrayList<>();
         List<Long> starts = new ArrayList<>();
-        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(format).get()) {
+        try (CSVParser parser = format.parse(in)) {
             Iterator<CSVRecord> it = parser.iterator();
             long prevEnd = 0;
             while (true) {
