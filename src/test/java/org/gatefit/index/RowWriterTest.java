@@ -22,9 +22,9 @@ class RowWriterTest {
     @Test
     void theSegmentPathRunsOnlyOnLuceneNineTwelve() {
         assertTrue(RowWriter.segmentsFit(Version.LATEST), "the Lucene this build runs on: " + Version.LATEST);
-        assertTrue(RowWriter.segmentsFit(Version.LUCENE_9_12_0));
+        assertTrue(RowWriter.segmentsFit(Version.fromBits(9, 12, 0)));
         assertTrue(RowWriter.segmentsFit(Version.fromBits(9, 12, 7)), "a later bug-fix release");
-        assertFalse(RowWriter.segmentsFit(Version.LUCENE_9_11_1), "an earlier minor version");
+        assertFalse(RowWriter.segmentsFit(Version.fromBits(9, 11, 1)), "an earlier minor version");
         assertFalse(RowWriter.segmentsFit(Version.fromBits(9, 13, 0)), "a later minor version");
         assertFalse(RowWriter.segmentsFit(Version.fromBits(10, 0, 0)), "the next major version");
     }
