@@ -1,12 +1,13 @@
 package org.gatefit.catalog;
 
 import java.util.List;
+import org.gatefit.failure.BadInput;
 
 /**
  * Input data that cannot be used: carries every problem found (up to a cap) with file, line and
- * column, so a user can fix a whole file in one pass.
+ * column, so a user can fix a whole file in one pass. Exits 3 ({@link BadInput}).
  */
-public final class CatalogDataException extends Exception {
+public final class CatalogDataException extends BadInput {
     private static final long serialVersionUID = 1L;
     /** How many problems are listed in the message. */
     public static final int SHOWN = 20;

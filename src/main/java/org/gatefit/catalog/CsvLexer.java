@@ -11,7 +11,7 @@ import java.util.List;
  * {@code CSVFormat.DEFAULT} and the settings {@link SheetReader} used with it (one-character
  * delimiter, double quote, no escape, no comments, empty lines kept, surrounding spaces kept), but
  * on one buffer, without per-character calls: it was most of the parse time of an import.
- * {@code CsvLexerTest} holds it equal to Commons CSV (cells, start lines, error messages).
+ * {@code CsvLexerTest} holds it equal to Commons CSV (cells, start lines, the kind of syntax problem).
  *
  * <ul>
  *   <li>A record ends at LF, CR or CRLF, or at the end of the input; the end of the input right after
@@ -19,7 +19,8 @@ import java.util.List;
  *   <li>A double quote opens a quoted cell only as a cell's first character; inside, {@code ""} is one
  *       quote and line ends are kept as written. After the closing quote, whitespace
  *       ({@link Character#isWhitespace}) is skipped up to the delimiter or line end; anything else
- *       is an error, as is the end of the input inside quotes (with Commons CSV's messages).</li>
+ *       is an error, as is the end of the input inside quotes: a {@link CsvSyntaxException} with the
+ *       record's start line and the cell's position.</li>
  *   <li>Lines are counted as Commons CSV counts them: each CR, and each LF not right after a CR, so a
  *       record's start line is the physical line an editor shows.</li>
  *   <li>Characters are taken from the reader only when needed (a CR looks at the next one, as does a
@@ -27,19 +28,14 @@ import java.util.List;
  *       record as it did under Commons CSV.</li>
  * </ul>
  */
-final class CsvLexer {
-    /** Characters the delimiter detection looks at, at most. */
-    static final int SNIFF_LIMIT = 1 << 16;
-
+final class CsvLexer implements CsvRecords {
     private final Reader in;
     private char delimiter = ',';
-    private char[] buf = new char[1 << 17]; // larger than SNIFF_LIMIT: detection never compacts
+    private char[] buf = new char[1 << 17]; // larger than CsvRecords.SNIFF_LIMIT: detection never compacts
     private int pos;
     private int end;
     /** Start of the characters that must survive a refill: the current record. */
     private int mark;
-    /** Characters dropped from the front of {@link #buf} so far (for Commons CSV's error positions). */
-    private long dropped;
     /** How far the last {@link #fill} moved the characters to the front. */
     private int moved;
     private boolean eof;
@@ -58,60 +54,26 @@ final class CsvLexer {
         this.in = in;
     }
 
-    /**
-     * Picks the separator that splits the header line into the most cells (quotes respected),
-     * looking at the first {@link #SNIFF_LIMIT} characters at most; reads nothing away.
-     */
-    char sniffDelimiter() throws IOException {
-        int comma = 0;
-        int semi = 0;
-        int tab = 0;
-        boolean quoted = false;
-        boolean content = false;
-        for (int i = 0; i < SNIFF_LIMIT; i++) {
-            if (i >= end && !fill()) { // mark and pos are 0: the buffer only grows here
-                break;
-            }
-            char ch = buf[i];
-            if (ch == '"') {
-                quoted = !quoted;
-            } else if (!quoted) {
-                if (ch == '\n' || ch == '\r') {
-                    if (content) {
-                        break;
-                    }
-                    continue;
-                }
-                content = true;
-                switch (ch) {
-                    case ',' -> comma++;
-                    case ';' -> semi++;
-                    case '\t' -> tab++;
-                    default -> {
-                    }
-                }
-            }
-        }
-        if (semi > comma && semi >= tab) {
-            return ';';
-        }
-        if (tab > comma && tab > semi) {
-            return '\t';
-        }
-        return ',';
+    /** {@link CsvRecords#sniff} over the buffer (which only grows here: mark and pos are 0). */
+    @Override
+    public char sniffDelimiter() throws IOException {
+        return CsvRecords.sniff(i -> i < end || fill() ? buf[i] : -1);
     }
 
-    void delimiter(char d) {
+    @Override
+    public void delimiter(char d) {
         this.delimiter = d;
     }
 
     /** Number of cells of the current record. */
-    int size() {
+    @Override
+    public int size() {
         return size;
     }
 
     /** Cell {@code i} of the current record. */
-    String get(int i) {
+    @Override
+    public String get(int i) {
         if (i >= size) {
             throw new IndexOutOfBoundsException("cell " + i + " of " + size);
         }
@@ -128,20 +90,24 @@ final class CsvLexer {
      * {@code chars()[from(i)..to(i))} unless {@link #from} is negative (a quoted cell with {@code ""}
      * in it: read it by {@link #get}).
      */
-    char[] chars() {
+    @Override
+    public char[] chars() {
         return buf;
     }
 
-    int from(int i) {
+    @Override
+    public int from(int i) {
         return from[i];
     }
 
-    int to(int i) {
+    @Override
+    public int to(int i) {
         return to[i];
     }
 
     /** The cells of the current record, as a new list the caller may keep. */
-    List<String> toList() {
+    @Override
+    public List<String> toList() {
         List<String> l = new ArrayList<>(size);
         for (int i = 0; i < size; i++) {
             l.add(get(i));
@@ -150,12 +116,14 @@ final class CsvLexer {
     }
 
     /** Physical line the current record starts on. */
-    long startLine() {
+    @Override
+    public long startLine() {
         return start;
     }
 
     /** Whether every cell of the current record is blank ({@link String#isBlank}). */
-    boolean blank() {
+    @Override
+    public boolean blank() {
         for (int i = 0; i < size; i++) {
             if (!blank(i)) {
                 return false;
@@ -184,9 +152,10 @@ final class CsvLexer {
      * Reads the next record.
      *
      * @return false at the end of the input
-     * @throws IOException from the reader, or for bad quoting (messages as Commons CSV words them)
+     * @throws IOException from the reader, or a {@link CsvSyntaxException} for bad quoting
      */
-    boolean next() throws IOException {
+    @Override
+    public boolean next() throws IOException {
         if (done) {
             return false;
         }
@@ -252,7 +221,6 @@ final class CsvLexer {
 
     /** A quoted cell from the opening quote at {@link #pos}; returns whether the record ended with it. */
     private boolean quoted() throws IOException {
-        long quoteLine = lines + 1;
         pos++;
         int seg = pos; // start of the text not yet copied to quotedText
         boolean escaped = false;
@@ -264,8 +232,7 @@ final class CsvLexer {
                 boolean more = fill();
                 seg -= moved;
                 if (!more) {
-                    throw new IOException(String.format("(startline %,d) EOF reached before encapsulated token finished",
-                            quoteLine));
+                    throw new CsvSyntaxException(CsvSyntaxException.Syntax.UNCLOSED_QUOTE, start, size + 1, null);
                 }
                 p = pos;
                 continue;
@@ -331,9 +298,7 @@ final class CsvLexer {
                 return true;
             }
             if (!Character.isWhitespace(ch)) {
-                throw new IOException(String.format(
-                        "Invalid character between encapsulated token and delimiter at line: %,d, position: %,d",
-                        lines + 1, dropped + pos));
+                throw new CsvSyntaxException(CsvSyntaxException.Syntax.TEXT_AFTER_QUOTE, start, size, null);
             }
         }
     }
@@ -396,7 +361,6 @@ final class CsvLexer {
             System.arraycopy(buf, shift, buf, 0, end - shift);
             end -= shift;
             pos -= shift;
-            dropped += shift;
             mark = 0;
             for (int i = 0; i < size; i++) {
                 if (from[i] >= 0) {

@@ -69,7 +69,8 @@ public final class Schema {
             if (in == null) {
                 throw new IllegalStateException("schema resource missing from the build: " + res);
             }
-            s = parse(k, MiniJson.parse(new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)));
+            String text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+            s = parse(k, FastPath.JSON.reference() ? JacksonJson.parse(text) : MiniJson.parse(text));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + res, e);
         }

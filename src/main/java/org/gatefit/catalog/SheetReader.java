@@ -82,12 +82,15 @@ public final class SheetReader {
 
     private final String file;
     private final Kind forced;
+    /** Whether records come from Commons CSV (the reference) rather than {@link CsvLexer} ({@link FastPath#CSV}). */
+    private final boolean reference;
     private final List<Problem> problems = new ArrayList<>();
     private long problemCount;
 
-    private SheetReader(String file, Kind forced) {
+    private SheetReader(String file, Kind forced, boolean reference) {
         this.file = file;
         this.forced = forced;
+        this.reference = reference;
     }
 
     /**
@@ -105,7 +108,7 @@ public final class SheetReader {
         }
         try (InputStream raw = Files.newInputStream(path);
              DigestInputStream in = new DigestInputStream(raw, sha)) {
-            SheetReader r = new SheetReader(displayName, forced);
+            SheetReader r = new SheetReader(displayName, forced, FastPath.CSV.reference());
             Summary s = r.read(in, sink);
             in.transferTo(OutputStreamSink.INSTANCE);
             return new Summary(s.file(), s.kind(), HexFormat.of().formatHex(sha.digest()), s.rows(), s.rejected(),
@@ -115,11 +118,16 @@ public final class SheetReader {
 
     /** Reads from a stream (SHA-256 left empty). */
     public static Summary read(InputStream in, String displayName, Kind forced, Sink sink) throws IOException {
-        return new SheetReader(displayName, forced).read(in, sink);
+        return read(in, displayName, forced, sink, FastPath.CSV.reference());
+    }
+
+    /** Reads from a stream with the CSV reader chosen: Commons CSV ({@code reference}) or {@link CsvLexer}. */
+    static Summary read(InputStream in, String displayName, Kind forced, Sink sink, boolean reference) throws IOException {
+        return new SheetReader(displayName, forced, reference).read(in, sink);
     }
 
     private Summary read(InputStream in, Sink sink) throws IOException {
-        CsvLexer lexer = lexer(in);
+        CsvRecords lexer = lexer(in);
         if (lexer == null) {
             return new Summary(file, null, "", 0, 0, List.of(), List.of(), ',', problems, problemCount, true);
         }
@@ -134,7 +142,7 @@ public final class SheetReader {
      * the separator told from the header line. Returns the lexer, or null after adding the
      * problem that stops the reading.
      */
-    private CsvLexer lexer(InputStream in) throws IOException {
+    private CsvRecords lexer(InputStream in) throws IOException {
         // Nothing here closes the stream: the caller owns it (and hashes the rest of it).
         PushbackInputStream pin = new PushbackInputStream(in, 3);
         byte[] bom = pin.readNBytes(3);
@@ -152,7 +160,8 @@ public final class SheetReader {
             return null;
         }
         pin.unread(bom, 0, keep);
-        CsvLexer lexer = new CsvLexer(new StrictUtf8Reader(pin));
+        Reader text = new StrictUtf8Reader(pin);
+        CsvRecords lexer = reference ? new CommonsCsvRecords(text) : new CsvLexer(text);
         try {
             delimiter = lexer.sniffDelimiter();
         } catch (CharacterCodingException e) {
@@ -181,9 +190,9 @@ public final class SheetReader {
      * file and line.
      */
     static void records(Path path, String displayName, Records sink) throws IOException, CatalogDataException {
-        SheetReader r = new SheetReader(displayName, null);
+        SheetReader r = new SheetReader(displayName, null, FastPath.CSV.reference());
         try (InputStream in = Files.newInputStream(path)) {
-            CsvLexer lexer = r.lexer(in);
+            CsvRecords lexer = r.lexer(in);
             if (lexer == null) {
                 throw new CatalogDataException(r.problems, r.problemCount);
             }
@@ -193,7 +202,7 @@ public final class SheetReader {
                         return;
                     }
                 } catch (IOException e) {
-                    throw new CatalogDataException(r.readFailure(e, lexer.startLine()));
+                    throw new CatalogDataException(r.readFailure(e, lexer.startLine(), null));
                 }
                 if (!lexer.blank()) {
                     sink.record(lexer.startLine(), lexer.toList());
@@ -202,7 +211,7 @@ public final class SheetReader {
         }
     }
 
-    private Summary readRecords(CsvLexer lexer, char delimiter, Sink sink) throws IOException {
+    private Summary readRecords(CsvRecords lexer, char delimiter, Sink sink) throws IOException {
         // Header: the first non-blank record.
         List<String> header = null;
         long headerLine = 0;
@@ -215,7 +224,7 @@ public final class SheetReader {
                 }
             }
         } catch (IOException e) {
-            return fatal(null, List.of(), delimiter, readFailure(e, lexer.startLine()));
+            return fatal(null, List.of(), delimiter, readFailure(e, lexer.startLine(), null));
         }
         if (header == null) {
             return fatal(null, List.of(), delimiter, Problem.ofLine(file, 0,
@@ -239,7 +248,7 @@ public final class SheetReader {
                     break;
                 }
             } catch (IOException e) {
-                add(readFailure(e, lexer.startLine()));
+                add(readFailure(e, lexer.startLine(), header));
                 fatal = true;
                 break;
             }
@@ -377,7 +386,7 @@ public final class SheetReader {
         return l;
     }
 
-    private Row parseRow(Schema schema, Layout l, CsvLexer rec, long line, boolean decimalComma, String keyColumn,
+    private Row parseRow(Schema schema, Layout l, CsvRecords rec, long line, boolean decimalComma, String keyColumn,
                          List<Problem> out) {
         if (rec.size() != l.width) {
             out.add(Problem.ofLine(file, line, "the row has " + rec.size() + " cells but the header has " + l.width
@@ -474,7 +483,12 @@ public final class SheetReader {
         return null;
     }
 
-    private Problem readFailure(IOException e, long line) {
+    /**
+     * What reading the records stopped at: text that is not UTF-8, malformed CSV (typed by the record
+     * reader, worded here with the column's header name when the header is known), or the reader's
+     * own I/O failure.
+     */
+    private Problem readFailure(IOException e, long line, List<String> header) {
         Throwable c = e;
         while (c != null) {
             if (c instanceof CharacterCodingException) {
@@ -482,16 +496,20 @@ public final class SheetReader {
             }
             c = c.getCause();
         }
-        String msg = String.valueOf(e.getMessage());
-        if (msg.contains("EOF reached before encapsulated token finished")) {
-            return Problem.ofLine(file, line, "a double quote opened in the row starting here is never closed"
-                    + " (expected a closing \" before the end of the file)");
+        if (e instanceof CsvSyntaxException s) {
+            String message = switch (s.syntax()) {
+                case UNCLOSED_QUOTE -> "a double quote opened in the row starting here is never closed"
+                        + " (expected a closing \" before the end of the file)";
+                case TEXT_AFTER_QUOTE -> "text follows a closing double quote in the row starting here"
+                        + " (expected a separator after a quoted value; write a quote inside a value as \"\")";
+            };
+            int at = s.column();
+            String name = header != null && at > 0 && at <= header.size() && !header.get(at - 1).isBlank()
+                    ? header.get(at - 1).strip().toLowerCase(Locale.ROOT) : null;
+            return new Problem(file, s.line(), name, at, null, name == null && at > 0
+                    ? message + " (column " + at + ")" : message);
         }
-        if (msg.contains("Invalid character between encapsulated token and delimiter")) {
-            return Problem.ofLine(file, line, "text follows a closing double quote in the row starting here"
-                    + " (expected a separator after a quoted value; write a quote inside a value as \"\")");
-        }
-        return Problem.ofLine(file, line, "cannot read the CSV: " + msg);
+        return Problem.ofLine(file, line, "cannot read the CSV: " + e.getMessage());
     }
 
     private Problem notUtf8(long line) {

@@ -2,6 +2,8 @@ package org.gatefit.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Path;
 import java.nio.file.NoSuchFileException;
 import java.time.Clock;
@@ -9,9 +11,8 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.CatalogDataException;
-import org.gatefit.index.CatalogBusyException;
+import org.gatefit.failure.Failure;
 import org.gatefit.report.Format;
 import picocli.CommandLine;
 
@@ -97,7 +98,15 @@ public final class Cli {
         cl.setExecutionStrategy(parsed -> {
             rejectHtml(parsed);
             checkFiles(parsed, ctx);
-            return new CommandLine.RunLast().execute(parsed);
+            try {
+                return new CommandLine.RunLast().execute(parsed);
+            } catch (Error e) { // picocli hands only exceptions to the handler below
+                CommandLine.ParseResult last = parsed;
+                while (last.hasSubcommand()) {
+                    last = last.subcommand();
+                }
+                return handle(e, last.commandSpec().commandLine(), top.verbose);
+            }
         });
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> handle(ex, cmd, top.verbose));
         cl.setParameterExceptionHandler((ex, args) -> {
@@ -186,34 +195,54 @@ public final class Cli {
         }
     }
 
-    private static int handle(Exception ex, CommandLine cmd, boolean verbose) {
+    /**
+     * Prints a failure and gives its exit code: a {@link Failure} as its kind says; a file that does
+     * not exist is bad input (3); any other I/O problem is the environment's (4); anything else is a
+     * bug in gatefit ({@link ExitCode#INTERNAL}), with a request for a report. Stack traces only
+     * under {@code --verbose}.
+     */
+    static int handle(Throwable thrown, CommandLine cmd, boolean verbose) {
         PrintWriter err = cmd.getErr();
+        String name = cmd.getCommandName();
+        Throwable ex = thrown instanceof UncheckedIOException u && u.getCause() != null ? u.getCause() : thrown;
         int code;
-        if (ex instanceof CatalogDataException e) {
-            err.println(e.getMessage());
-            code = ExitCode.BAD_DATA;
-        } else if (ex instanceof UsageException || ex instanceof BadValueException) {
-            err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
-            code = ExitCode.USAGE;
+        if (ex instanceof Failure f) {
+            err.println(f.report(name));
+            code = f.exitCode();
         } else if (ex instanceof NoSuchFileException e) {
-            err.println("gatefit " + cmd.getCommandName() + ": no such file: " + e.getFile());
+            err.println("gatefit " + name + ": no such file: " + e.getFile());
             code = ExitCode.BAD_DATA;
-        } else if (ex instanceof CatalogBusyException || ex instanceof org.gatefit.index.CatalogFormatException
-                || ex instanceof org.gatefit.index.CatalogStorageException) {
-            err.println("gatefit " + cmd.getCommandName() + ": " + ex.getMessage());
-            code = ExitCode.ENVIRONMENT;
-        } else if (ex instanceof java.io.IOException) {
-            err.println("gatefit " + cmd.getCommandName() + ": " + ex);
+        } else if (ex instanceof IOException e) {
+            err.println("gatefit " + name + ": " + ioProblem(e));
             code = ExitCode.ENVIRONMENT;
         } else {
-            err.println("gatefit " + cmd.getCommandName() + ": internal error: " + ex
-                    + (verbose ? "" : " (run with --verbose for the stack trace)"));
-            code = ExitCode.ENVIRONMENT;
+            err.println("gatefit " + name + ": internal error: " + ex);
+            err.println("This is a bug in gatefit: please report it with the command line and the --verbose output"
+                    + (verbose ? " below." : " (run the same command again with --verbose for it)."));
+            code = ExitCode.INTERNAL;
         }
         if (verbose) {
-            ex.printStackTrace(err);
+            thrown.printStackTrace(err);
         }
         err.flush();
         return code;
+    }
+
+    /** An I/O problem in words: which file and why, when the JDK says so. */
+    static String ioProblem(IOException e) {
+        if (e instanceof FileSystemException fs && fs.getFile() != null) {
+            String reason = fs.getReason() != null ? fs.getReason() : words(fs.getClass().getSimpleName());
+            return "cannot read or write " + fs.getFile() + (fs.getOtherFile() == null ? "" : " or " + fs.getOtherFile())
+                    + ": " + reason + " (expected a path gatefit may read and write; check it and its permissions)";
+        }
+        return "input/output error: " + (e.getMessage() == null ? words(e.getClass().getSimpleName()) : e.getMessage())
+                + " (check the disk, its free space and the paths given)";
+    }
+
+    /** {@code AccessDeniedException} → {@code access denied}. */
+    private static String words(String className) {
+        String s = className.endsWith("Exception") ? className.substring(0, className.length() - "Exception".length())
+                : className;
+        return s.replaceAll("(?<=[a-z])(?=[A-Z])", " ").toLowerCase(java.util.Locale.ROOT);
     }
 }

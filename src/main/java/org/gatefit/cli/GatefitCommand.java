@@ -13,7 +13,7 @@ import picocli.CommandLine.ScopeType;
             "",
             "The catalog directory is --catalog, else $GATEFIT_CATALOG, else a per-user data directory (run 'gatefit info' to see which).",
             "",
-            "Exit codes: 0 done and nothing failed; 1 a checked pair failed; 2 usage error; 3 bad input data (file, column, value); 4 catalog locked or I/O error."},
+            "Exit codes: 0 done and nothing failed; 1 a checked pair failed; 2 usage error; 3 bad input data (file, column, value); 4 catalog locked or I/O error; 70 internal error (please report it)."},
         footer = {"", "Figures are estimates from datasheet values: verify on the bench and against each part's"
                 + " datasheet. High voltage can kill; follow local codes and licensed practice."},
         synopsisSubcommandLabel = "COMMAND")

@@ -1,7 +1,9 @@
 package org.gatefit.cli;
 
+import org.gatefit.failure.UsageProblem;
+
 /** A command-line value that cannot be used; exits with {@link ExitCode#USAGE}. */
-final class UsageException extends Exception {
+final class UsageException extends UsageProblem {
     private static final long serialVersionUID = 1L;
 
     UsageException(String message) {

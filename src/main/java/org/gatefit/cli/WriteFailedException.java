@@ -7,7 +7,7 @@ import java.nio.file.FileSystemException;
  * A result could not be written (disk full, closed pipe, no permission): says which file, or
  * standard output, as the user named it, and why. Exit 4 like every I/O failure.
  */
-final class WriteFailedException extends IOException {
+final class WriteFailedException extends org.gatefit.failure.EnvironmentProblem {
     private static final long serialVersionUID = 1L;
 
     /** @param target the file as typed, or "standard output" */

@@ -15,7 +15,7 @@ import org.apache.lucene.index.IndexFormatTooOldException;
  * index refers to is missing), or not writable (disk full, read-only folder, no permission). The
  * message names the folder and says what to do; exit 4, like other I/O.
  */
-public final class CatalogStorageException extends IOException {
+public final class CatalogStorageException extends org.gatefit.failure.EnvironmentProblem {
     private static final long serialVersionUID = 1L;
 
     /** What to do about a damaged catalog, in every message that reports one. */

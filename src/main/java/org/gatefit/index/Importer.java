@@ -341,7 +341,7 @@ public final class Importer {
                 throw new ListenerFailed(e);
             }
         };
-        try (committed; IndexPipeline pipeline = new IndexPipeline(writer, committed, heard, threads, chunkRows)) {
+        try (committed; RowWriter pipeline = RowWriter.open(writer, committed, heard, threads, chunkRows)) {
         IndexOp clear = kind -> {
             if (options.replace() && cleared.add(kind)) {
                 removed.put(kind, before == null ? 0 : before.count(new TermQuery(new Term(Fields.KIND, kind.id()))));

@@ -43,7 +43,7 @@ import org.gatefit.catalog.Row;
  * replaces that row: withdrawn from its chunk if that chunk is still open, otherwise deleted by term
  * once every chunk sealed before has been written.
  */
-final class IndexPipeline implements AutoCloseable {
+final class IndexPipeline implements RowWriter {
     /** Most rows per chunk (memory bounds it further; see {@link #chunkRows}). */
     static final int MAX_CHUNK = 131_072;
     /** Rows per hand-off to a worker. */
@@ -131,12 +131,14 @@ final class IndexPipeline implements AutoCloseable {
     }
 
     /** The kind's committed parts were deleted in this import (--replace): their ids no longer exist. */
-    void cleared(String kind) {
+    @Override
+    public void cleared(String kind) {
         clearedKinds.add(kind);
     }
 
     /** Takes a row; rethrows a worker's failure. */
-    void submit(Row row) throws IOException {
+    @Override
+    public void submit(Row row) throws IOException {
         ensureOpen();
         String id = Fields.id(row.kind().id(), row.key());
         Chunk chunk = open.get(row.kind());
@@ -176,7 +178,8 @@ final class IndexPipeline implements AutoCloseable {
     }
 
     /** Rows taken so far. */
-    long written() {
+    @Override
+    public long written() {
         return written;
     }
 
@@ -239,7 +242,8 @@ final class IndexPipeline implements AutoCloseable {
      * @param segments whether the open chunks are written (for an import about to commit; one that
      *                 will roll back drops them)
      */
-    void finish(boolean segments) throws IOException {
+    @Override
+    public void finish(boolean segments) throws IOException {
         ensureOpen();
         for (Chunk c : new ArrayList<>(open.values())) {
             if (segments && c.rows > 0) {

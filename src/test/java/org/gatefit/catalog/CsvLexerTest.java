@@ -43,7 +43,7 @@ class CsvLexerTest {
                 .setIgnoreEmptyLines(false).setIgnoreSurroundingSpaces(false).get();
         List<List<String>> records = new ArrayList<>();
         List<Long> starts = new ArrayList<>();
-        try (CSVParser parser = CSVParser.builder().setReader(in).setFormat(format).get()) {
+        try (CSVParser parser = format.parse(in)) {
             Iterator<CSVRecord> it = parser.iterator();
             long prevEnd = 0;
             while (true) {
@@ -55,7 +55,7 @@ class CsvLexerTest {
                     }
                     rec = it.next();
                 } catch (UncheckedIOException e) {
-                    return new Outcome(records, starts, failure(e.getCause()), start);
+                    return new Outcome(records, starts, failure(CommonsCsvRecords.failure(e.getCause(), start)), start);
                 }
                 prevEnd = parser.getCurrentLineNumber();
                 records.add(rec.toList());
@@ -65,13 +65,24 @@ class CsvLexerTest {
         return new Outcome(records, starts, null, 0);
     }
 
-    /** What {@code SheetReader} tells from a failure: whether the text is not UTF-8, and the message. */
+    /**
+     * What {@code SheetReader} tells from a failure: the kind of syntax problem and its line, or
+     * whether the text is not UTF-8, and the message. (The cell position is the lexer's alone:
+     * Commons CSV does not tell it; {@link #syntaxProblemsNameTheirCell} checks it.)
+     */
     private static String failure(Throwable e) {
+        if (e instanceof CsvSyntaxException s) {
+            return s.syntax() + " in the record starting on line " + s.line();
+        }
         return (e instanceof java.nio.charset.CharacterCodingException ? "not UTF-8: " : "") + e.getMessage();
     }
 
     static Outcome ours(Reader in, char delimiter) {
-        CsvLexer lexer = new CsvLexer(in);
+        return read(new CsvLexer(in), delimiter);
+    }
+
+    /** Through a {@link CsvRecords}: the lexer, or the reference adapter over Commons CSV. */
+    static Outcome read(CsvRecords lexer, char delimiter) {
         lexer.delimiter(delimiter);
         List<List<String>> records = new ArrayList<>();
         List<Long> starts = new ArrayList<>();
@@ -126,6 +137,8 @@ class CsvLexerTest {
         Outcome expected = commons(new StringReader(text), delimiter);
         assertEquals(expected, ours(new StringReader(text), delimiter), () -> show(text));
         assertEquals(expected, ours(new Trickle(text, chunk, -1), delimiter), () -> "chunk " + chunk + ": " + show(text));
+        assertEquals(expected, read(new CommonsCsvRecords(new Trickle(text, chunk, -1)), delimiter),
+                () -> "the reference adapter, chunk " + chunk + ": " + show(text));
     }
 
     private static String show(String text) {
@@ -180,6 +193,28 @@ class CsvLexerTest {
         Outcome expected = commons(new Trickle(text, 1 << 20, at), ',');
         assertEquals(expected, ours(new Trickle(text, chunk, at), ','), () -> "fail at " + at + ": " + show(text));
         assertEquals(expected, ours(new Trickle(text, 1 << 20, at), ','), () -> "fail at " + at + ": " + show(text));
+        assertEquals(expected, read(new CommonsCsvRecords(new Trickle(text, chunk, at)), ','),
+                () -> "the reference adapter, fail at " + at + ": " + show(text));
+    }
+
+    @Example
+    void syntaxProblemsNameTheirCell() {
+        // RFC 4180 section 2, rules 5-7: a quoted field ends at a lone closing quote, then the separator follows.
+        CsvSyntaxException after = syntax("h1,h2,h3\nx,\"y\"z,w\n");
+        assertEquals(List.of(CsvSyntaxException.Syntax.TEXT_AFTER_QUOTE, 2L, 2),
+                List.of(after.syntax(), after.line(), after.column()));
+        CsvSyntaxException open = syntax("h1,h2,h3\nx,y,\"open\nmore\n");
+        assertEquals(List.of(CsvSyntaxException.Syntax.UNCLOSED_QUOTE, 2L, 3),
+                List.of(open.syntax(), open.line(), open.column()));
+    }
+
+    private static CsvSyntaxException syntax(String text) {
+        CsvLexer l = new CsvLexer(new StringReader(text));
+        return org.junit.jupiter.api.Assertions.assertThrows(CsvSyntaxException.class, () -> {
+            while (l.next()) {
+                l.toList();
+            }
+        });
     }
 
     @Example
@@ -207,6 +242,12 @@ class CsvLexerTest {
     void theDelimiterIsTheOneThatSplitsTheHeaderLineMost() throws IOException {
         // Common practice, no source: spreadsheets in many locales write semicolons or tabs.
         assertEquals(';', new CsvLexer(new StringReader("\n\na;b;c,d\nx,y,z,w,v")).sniffDelimiter());
+        assertEquals(';', new CommonsCsvRecords(new StringReader("\n\na;b;c,d\nx,y,z,w,v")).sniffDelimiter());
+        assertEquals('\t', new CommonsCsvRecords(new StringReader("a\tb\tc,d")).sniffDelimiter());
+        CsvRecords r = new CommonsCsvRecords(new StringReader("a;b\n1;2\n"));
+        r.delimiter(r.sniffDelimiter());
+        assertEquals(true, r.next(), "the reference's detection reads nothing away");
+        assertEquals(List.of("a", "b"), r.toList());
         assertEquals('\t', new CsvLexer(new StringReader("a\tb\tc,d")).sniffDelimiter());
         assertEquals(',', new CsvLexer(new StringReader("\"a;b;c\",d")).sniffDelimiter(), "quotes respected");
         assertEquals(',', new CsvLexer(new StringReader("a;b,c\td")).sniffDelimiter(), "a tie keeps the comma");

@@ -77,6 +77,31 @@ class MiniJsonTest {
         }
     }
 
+    /**
+     * The fast path ({@link MiniJson}) and its shipped reference ({@link JacksonJson}, {@link FastPath#JSON})
+     * side by side: the same tree, numbers as written included, for every schema file (and the same
+     * schema built from it) and for awkward texts.
+     */
+    @Test
+    void theReferenceReaderReadsEverySchemaFileToTheSameTreeAndSchema() throws Exception {
+        for (Kind k : Kind.values()) {
+            String text = Files.readString(Path.of("catalog-schema", k.id() + ".schema.json"));
+            Object fast = MiniJson.parse(text);
+            assertEquals(JacksonJson.parse(text), fast, k.id());
+            assertEquals(Schema.parse(k, JacksonJson.parse(text)).columns().toString(),
+                    Schema.parse(k, fast).columns().toString(), k.id());
+        }
+    }
+
+    // RFC 8259 sections 4-7: objects, arrays, numbers (minus, fraction, exponent with sign), string escapes.
+    @ParameterizedTest
+    @ValueSource(strings = {"{}", "[]", " [ ] ", "-0", "0.5e-3", "1E+2", "[1e5, -12.25, 0]", "\"\\u00b5\\ud83d\\ude00\"",
+        "\"\\\"\\\\\\/\\b\\f\\n\\r\\t\"", "{\"a\": {\"b\": [[], {}, [null, true, false]]}, \"c\": \"\"}",
+        "\r\n\t{\"z\":1,\"y\":2,\"x\":3}\n", "\"µ and ü as they are\""})
+    void theReferenceReaderReadsAwkwardTextsAlike(String text) {
+        assertEquals(JacksonJson.parse(text), MiniJson.parse(text), text);
+    }
+
     @Test
     void valuesOfEveryKind() {
         Object v = MiniJson.parse(" {\"a\": [1, -2.5e3, 0.001], \"b\": \"x\\u00b5\\n\\\"\", \"c\": true, \"d\": null, \"e\": {}} ");
@@ -96,5 +121,6 @@ class MiniJsonTest {
     void syntaxErrorsAreRefusedWithTheOffset(String text) {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> MiniJson.parse(text));
         assertTrue(e.getMessage().startsWith("JSON at offset "), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> JacksonJson.parse(text), "the reference refuses it too");
     }
 }

@@ -112,9 +112,9 @@ class BadInputTest {
                         "2 cells"),
                 Arguments.of("unbalanced quote", utf8(h + row("TST-001", "50") + "\n"
                         + "TST-002,Testmaker,si-mosfet,100,20,-20,50,\"never closed\n"
-                        + row("TST-003", "50") + "\n"), "line 3", "never closed"),
+                        + row("TST-003", "50") + "\n"), "line 3, column description (8)", "never closed"),
                 Arguments.of("text after a closing quote", utf8(h + row("TST-001", "50") + "\n"
-                        + "TST-002,Testmaker,si-mosfet,100,20,-20,50,\"quoted\"tail\n"), "line 3",
+                        + "TST-002,Testmaker,si-mosfet,100,20,-20,50,\"quoted\"tail\n"), "line 3, column description (8)",
                         "text follows a closing double quote"),
                 Arguments.of("empty file", new byte[0], null, "empty"),
                 Arguments.of("only blank lines", utf8("\n\n  \n"), null, "no header"),

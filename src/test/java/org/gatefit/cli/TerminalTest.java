@@ -94,9 +94,17 @@ class TerminalTest {
     void textTablesFitOneHundredColumns() {
         for (String[] args : textCommands()) {
             CliRun r = run(false, Map.of(), args);
+            // the command ran and printed its report (check exits 1 on the fixture's failing stage)
+            assertTrue(r.exit() == ExitCode.OK || r.exit() == ExitCode.FAILED, r.dump());
+            assertTrue(r.err().isEmpty(), r.dump());
+            int widest = 0;
             for (String line : r.out().split("\n")) {
-                assertTrue(line.codePointCount(0, line.length()) <= 100, args[2] + ": " + line.length() + ": " + line);
+                int width = line.codePointCount(0, line.length());
+                assertTrue(width <= 100, args[2] + ": " + width + ": " + line);
+                widest = Math.max(widest, width);
             }
+            // a report with lines near the limit: text was wrapped at 100 columns, not merely short
+            assertTrue(widest >= 90, args[2] + ": widest line " + widest + "\n" + r.out());
         }
     }
 

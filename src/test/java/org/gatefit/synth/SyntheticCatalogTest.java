@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.StringWriter;
-import java.nio.file.Files;
+import java.util.ArrayList;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.HashMap;
@@ -12,6 +12,10 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.gatefit.catalog.Kind;
+import org.gatefit.catalog.Row;
+import org.gatefit.catalog.SheetReader;
+import org.gatefit.index.Catalog;
 import org.gatefit.index.Importer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -80,7 +84,22 @@ class SyntheticCatalogTest {
                 List.of("switches.csv", "drivers.csv"), new Importer.Options(null, false, null), x -> { });
         assertEquals(2L * N, r.written());
         assertEquals(0, r.rejected());
-        assertTrue(Files.size(stages) > 0);
+        for (SheetReader.Summary s : r.files()) {
+            assertTrue(s.clean() && !s.fatal() && s.rows() == N, s.toString());
+        }
+        // The stage sheet reads without a problem, and every part it names is in the catalog.
+        List<Row> stageRows = new ArrayList<>();
+        SheetReader.Summary s = SheetReader.read(stages, "stages.csv", Kind.STAGE, stageRows::add);
+        assertTrue(s.clean() && !s.fatal(), s.problems().toString());
+        assertEquals(100, stageRows.size());
+        try (Catalog c = Catalog.open(tmp.resolve("catalog"))) {
+            for (Row st : stageRows) {
+                String driver = String.valueOf(st.values().get("driver"));
+                String part = String.valueOf(st.values().get("switch"));
+                assertTrue(c.get(Kind.DRIVER, driver).isPresent(), st.key() + ": driver " + driver);
+                assertTrue(c.get(Kind.SWITCH, part).isPresent(), st.key() + ": switch " + part);
+            }
+        }
     }
 
     private static double d(Map<String, String> r, String c) {

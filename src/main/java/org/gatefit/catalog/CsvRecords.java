@@ -1,0 +1,120 @@
+package org.gatefit.catalog;
+
+import java.io.IOException;
+import java.util.List;
+
+/**
+ * CSV text as records, one at a time, with {@code CSVFormat.DEFAULT}'s rules and the settings
+ * {@link SheetReader} reads with (one-character delimiter, double quote, no escape, no comments,
+ * empty lines kept, surrounding spaces kept). Two readers stand behind it: the hand-written
+ * {@link CsvLexer} (the fast path) and Commons CSV ({@link CommonsCsvRecords}, the reference);
+ * {@link FastPath#CSV} picks one.
+ */
+interface CsvRecords {
+    /** Characters the delimiter detection looks at, at most. */
+    int SNIFF_LIMIT = 1 << 16;
+
+    /** Picks the delimiter (see {@link #sniff}), reading nothing away. */
+    char sniffDelimiter() throws IOException;
+
+    void delimiter(char d);
+
+    /**
+     * Reads the next record.
+     *
+     * @return false at the end of the input
+     * @throws CsvSyntaxException for malformed quoting
+     * @throws IOException        from the reader (a {@link java.nio.charset.CharacterCodingException} for
+     *                            text that is not UTF-8)
+     */
+    boolean next() throws IOException;
+
+    /** Number of cells of the current record. */
+    int size();
+
+    /** Cell {@code i} of the current record. */
+    String get(int i);
+
+    /**
+     * The characters of the current record, valid until the next {@link #next}: cell {@code i} is
+     * {@code chars()[from(i)..to(i))} unless {@link #from} is negative (then read it by {@link #get}).
+     */
+    char[] chars();
+
+    int from(int i);
+
+    int to(int i);
+
+    /** Physical line the current record starts on. */
+    long startLine();
+
+    /** The cells of the current record, as a new list the caller may keep. */
+    default List<String> toList() {
+        String[] cells = new String[size()];
+        for (int i = 0; i < cells.length; i++) {
+            cells[i] = get(i);
+        }
+        return java.util.Arrays.asList(cells);
+    }
+
+    /** Whether every cell of the current record is blank ({@link String#isBlank}). */
+    default boolean blank() {
+        for (int i = 0; i < size(); i++) {
+            if (!get(i).isBlank()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Character {@code i} of the input from its start, or -1 past its end. */
+    @FunctionalInterface
+    interface CharAt {
+        int at(int i) throws IOException;
+    }
+
+    /**
+     * The separator that splits the header line (the first line with content) into the most cells,
+     * quotes respected, looking at the first {@link #SNIFF_LIMIT} characters at most: a semicolon or a
+     * tab when more of them than commas, else a comma.
+     */
+    static char sniff(CharAt text) throws IOException {
+        int comma = 0;
+        int semi = 0;
+        int tab = 0;
+        boolean quoted = false;
+        boolean content = false;
+        for (int i = 0; i < SNIFF_LIMIT; i++) {
+            int c = text.at(i);
+            if (c < 0) {
+                break;
+            }
+            char ch = (char) c;
+            if (ch == '"') {
+                quoted = !quoted;
+            } else if (!quoted) {
+                if (ch == '\n' || ch == '\r') {
+                    if (content) {
+                        break;
+                    }
+                    continue;
+                }
+                content = true;
+                switch (ch) {
+                    case ',' -> comma++;
+                    case ';' -> semi++;
+                    case '\t' -> tab++;
+                    default -> {
+                    }
+                }
+            }
+        }
+        if (semi > comma && semi >= tab) {
+            return ';';
+        }
+        if (tab > comma && tab > semi) {
+            return '\t';
+        }
+        return ',';
+    }
+}
