@@ -296,7 +296,7 @@ public class ShortlistBench {
                     && !(d.vIh() > bind[4]) && !(d.uvloOn() > bind[5])
                     && (floating ? d.vOffsetMax() >= bind[6] : d.isolationVrms() >= bind[7])
                     && d.inverting().contains(false)
-                    && !d.lifecycle().equals("obsolete")) {
+                    && d.lifecycle() != org.gatefit.match.Lifecycle.OBSOLETE) {
                 hits.add(d);
             }
         }
