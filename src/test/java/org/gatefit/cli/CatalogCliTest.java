@@ -55,9 +55,7 @@ class CatalogCliTest {
 
     @BeforeEach
     void importExamples() {
-        catalog = tmp.resolve("catalog");
-        CliRun r = CliRun.on(catalog, "import", SWITCHES.toString(), DRIVERS.toString());
-        assertEquals(ExitCode.OK, r.exit(), r.dump());
+        catalog = CliRun.examples(tmp.resolve("catalog"));
     }
 
     private static List<CSVRecord> records(Path csv) throws IOException {

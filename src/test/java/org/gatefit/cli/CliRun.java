@@ -52,6 +52,14 @@ record CliRun(int exit, String out, String err) {
         return new CliRun(code, out.toString(), err.toString());
     }
 
+    /** {@code catalog} with the bundled example catalog imported into it (import must succeed). */
+    static Path examples(Path catalog) {
+        CliRun r = on(catalog, "import", Project.file("examples/switches.csv").toString(),
+                Project.file("examples/drivers.csv").toString());
+        org.junit.jupiter.api.Assertions.assertEquals(ExitCode.OK, r.exit(), r.dump());
+        return catalog;
+    }
+
     /** A readable dump for assertion messages. */
     String dump() {
         return "exit " + exit + "\n--- stdout\n" + out + "\n--- stderr\n" + err;

@@ -18,8 +18,6 @@ import org.junit.jupiter.api.io.TempDir;
  * no source (README, "Plausible operating points").
  */
 class DailyTrapsCliTest {
-    private static final Path SWITCHES = Project.file("examples/switches.csv");
-    private static final Path DRIVERS = Project.file("examples/drivers.csv");
     /** A SiC MOSFET and a driver of the example catalog (input only). */
     private static final String SIC = "OBP-12M016K4";
     private static final String DRIVER = "VHM-4410N";
@@ -30,9 +28,7 @@ class DailyTrapsCliTest {
 
     @BeforeEach
     void importExamples() {
-        catalog = tmp.resolve("catalog");
-        CliRun r = CliRun.on(catalog, "import", SWITCHES.toString(), DRIVERS.toString());
-        assertEquals(ExitCode.OK, r.exit(), r.dump());
+        catalog = CliRun.examples(tmp.resolve("catalog"));
     }
 
     @Test

@@ -24,7 +24,6 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class DamagedCatalogCliTest {
     private static final Path SWITCHES = Project.file("examples/switches.csv");
-    private static final Path DRIVERS = Project.file("examples/drivers.csv");
     /** A switch of the example catalog. */
     private static final String SWITCH = "CVL-1025TL";
 
@@ -34,9 +33,7 @@ class DamagedCatalogCliTest {
 
     @BeforeEach
     void importExamples() {
-        catalog = tmp.resolve("catalog");
-        CliRun r = CliRun.on(catalog, "import", SWITCHES.toString(), DRIVERS.toString());
-        assertEquals(ExitCode.OK, r.exit(), r.dump());
+        catalog = CliRun.examples(tmp.resolve("catalog"));
     }
 
     /** The largest index file whose name ends with {@code suffix}. */

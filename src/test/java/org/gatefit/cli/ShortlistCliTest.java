@@ -30,7 +30,6 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class ShortlistCliTest {
     private static final ObjectMapper JSON = new ObjectMapper();
-    private static final Path SWITCHES = Project.file("examples/switches.csv");
     private static final Path DRIVERS = Project.file("examples/drivers.csv");
 
     /**
@@ -46,9 +45,7 @@ class ShortlistCliTest {
 
     @BeforeEach
     void importExamples() {
-        catalog = tmp.resolve("catalog");
-        CliRun r = CliRun.on(catalog, "import", SWITCHES.toString(), DRIVERS.toString());
-        assertEquals(ExitCode.OK, r.exit(), r.dump());
+        catalog = CliRun.examples(tmp.resolve("catalog"));
     }
 
     private static List<CSVRecord> records(Path csv) throws IOException {

@@ -30,7 +30,6 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class ShortlistFiltersCliTest {
     private static final ObjectMapper JSON = new ObjectMapper();
-    private static final Path SWITCHES = Project.file("examples/switches.csv");
     private static final Path DRIVERS = Project.file("examples/drivers.csv");
     /** A SiC switch of the example catalog whose lifecycle is nrnd (input only). */
     private static final String NRND_SIC = "OBP-12M020K4";
@@ -42,9 +41,7 @@ class ShortlistFiltersCliTest {
 
     @BeforeEach
     void importExamples() {
-        catalog = tmp.resolve("catalog");
-        CliRun r = CliRun.on(catalog, "import", SWITCHES.toString(), DRIVERS.toString());
-        assertEquals(ExitCode.OK, r.exit(), r.dump());
+        catalog = CliRun.examples(tmp.resolve("catalog"));
     }
 
     private static List<CSVRecord> drivers() throws IOException {
