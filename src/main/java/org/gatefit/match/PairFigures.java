@@ -122,10 +122,14 @@ final class PairFigures {
             pd = GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n, rInt / n) + hs;
             if (detail) {
                 pg = shown(() -> GatePower.total(qTotal, swing, op.fSw()));
-                pe = shown(() -> GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
-                        rInt / n).external());
-                pi = shown(() -> GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n,
-                        rInt / n).internal());
+                GatePower.Split split;
+                try {
+                    split = GatePower.split(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n, rInt / n);
+                } catch (IllegalArgumentException | ArithmeticException e) {
+                    split = null; // shown figures only: left out when the model refuses the values
+                }
+                pe = split == null ? Double.NaN : split.external();
+                pi = split == null ? Double.NaN : split.internal();
             }
         }
         pGate = pg;

@@ -48,9 +48,10 @@ public final class Rules {
         int w = 0;
         for (Entry e : PAIR_RULES) {
             String refused = judge(e, f, d, q, out);
-            PairRule.Worded said = refused == null ? e.rule().word(f, out.why())
-                    : e.rule() instanceof LifecycleRule ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
-                    : new PairRule.Worded(f == null ? without : "cannot estimate: " + refused);
+            PairRule.Worded said = out.why() == Reason.Common.CANNOT_ESTIMATE
+                    ? new PairRule.Worded(refused != null ? "cannot estimate: " + refused : without)
+                    : f == null ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
+                    : e.rule().word(f, out.why());
             checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
             v = v.and(out.verdict());
             sum += e.id().weight() * out.score();
@@ -88,16 +89,17 @@ public final class Rules {
     /**
      * Judges one rule. Without figures (a p-channel switch, or a physics model that refused the
      * pair's values) every rule but the lifecycle is unknown; a rule whose own model refuses the
-     * values is unknown too. Returns why a rule could not judge (for the sentence), or null when it did.
+     * values is unknown too. Returns the model's refusal when the rule's own judgement was refused
+     * (for the sentence), else null.
      */
     private static String judge(Entry e, PairFigures f, DriverPart d, Question q, Outcome out) {
         if (f == null) {
             if (e.rule() instanceof LifecycleRule) {
-                LifecycleRule.judge(d, q.lifecycleSwitch(), out);
-                return "";
+                LifecycleRule.judge(d, q.lifecycleSwitch(), out); // needs the parts only
+            } else {
+                out.unknown(Reason.Common.CANNOT_ESTIMATE);
             }
-            out.unknown(Reason.Common.CANNOT_ESTIMATE);
-            return "";
+            return null;
         }
         try {
             e.rule().judge(f, out);
