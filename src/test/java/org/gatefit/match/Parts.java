@@ -25,6 +25,7 @@ final class Parts {
     static final class Sw {
         String pn = "TST-S1";
         Technology tech = Technology.SI_MOSFET;
+        boolean nChannel = true;
         double vBlock = 100, iCont = 50, rOn = 5e-3, rOnVgs = 10, vCeSat = Double.NaN;
         double vThMin = 2, vThMax = 4, vGsMax = 20, vGsMin = -20, vGateOn = 10, vGateOff = 0;
         double qG = 50e-9, qGVgs = 10, qGs = 15e-9, qGd = 15e-9, vPlateau = 5;
@@ -34,7 +35,7 @@ final class Parts {
         double price = 1;
 
         SwitchPart build() {
-            return new SwitchPart(pn, "Testmaker", "PKG", "PKG", tech, true, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
+            return new SwitchPart(pn, "Testmaker", "PKG", "PKG", tech, nChannel, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
                     vThMax, vGsMax, vGsMin, vGateOn, vGateOff, qG, qGVgs, qGs, qGd, vPlateau, cIss, cRss, rGInt,
                     Lifecycle.of(lifecycle), stock, price);
         }

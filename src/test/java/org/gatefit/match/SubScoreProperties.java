@@ -143,4 +143,28 @@ class SubScoreProperties {
         ranking.rank(s.dr.build());
         assertEquals(r.score(), ranking.score(), 0.0, "the ranking scores what the check says");
     }
+
+    @Test
+    void aPChannelSwitchIsUnknownOnEveryElectricalRuleAndJudgedOnLifecycle() {
+        // The rules model n-channel gate drive only (DESIGN.md: unknown, never pass, when a rule
+        // cannot judge); the lifecycle rule needs the parts alone.
+        Setup s = new Setup();
+        s.sw.nChannel = false;
+        s.dr.lifecycle = "nrnd";
+        PairResult r = Parts.eval(s.sw, s.dr, s.op);
+        for (Check c : r.checks()) {
+            if (c.rule() == Rule.LIFECYCLE) {
+                assertEquals(Verdict.WARN, c.verdict(), c.message());
+                assertTrue(c.message().contains("not recommended for new designs"), c.message());
+            } else {
+                assertEquals(Verdict.UNKNOWN, c.verdict(), c.rule() + ": " + c.message());
+                assertTrue(c.message().contains("p-channel"), c.message());
+            }
+        }
+        assertEquals(Verdict.WARN, r.verdict());
+        assertTrue(r.figures().isEmpty());
+        Rules.Ranking ranking = new Rules.Ranking(Question.of(s.sw.build(), s.op.resolve(s.sw.build()), Margins.DEFAULT));
+        ranking.rank(s.dr.build());
+        assertEquals(r.score(), ranking.score(), 0.0);
+    }
 }
