@@ -16,21 +16,21 @@ final class DriveCurrentRule implements PairRule {
 
     /** Whether the source (turn-on) side is the weaker one relative to the need (ties: the source). */
     private static boolean sourceWorse(PairFigures f) {
-        return f.iPkSrc / f.q.iReq <= f.iPkSnk / f.q.iReq;
+        return f.iPkSrc() / f.q().iReq <= f.iPkSnk() / f.q().iReq;
     }
 
     /** Peak current of the weaker side over the current the edge needs. */
     private static double ratio(PairFigures f) {
-        return Math.min(f.iPkSrc / f.q.iReq, f.iPkSnk / f.q.iReq);
+        return Math.min(f.iPkSrc() / f.q().iReq, f.iPkSnk() / f.q().iReq);
     }
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        if (Double.isNaN(f.q.qTotal)) {
+        if (Double.isNaN(f.q().qTotal)) {
             out.unknown(Why.NO_CHARGE);
             return;
         }
-        double margin = f.m.driveCurrent();
+        double margin = f.m().driveCurrent();
         double ratio = ratio(f);
         if (ratio >= margin) {
             out.pass(Why.ENOUGH, (ratio - margin) / margin);
@@ -42,21 +42,22 @@ final class DriveCurrentRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
         Why w = (Why) why;
         if (w == Why.NO_CHARGE) {
             return new Worded("gate charge unknown");
         }
-        double need = f.q.iReq * f.m.driveCurrent();
+        double need = f.q().iReq * f.m().driveCurrent();
         boolean source = sourceWorse(f);
-        double have = source ? f.iPkSrc : f.iPkSnk;
-        double rated = source ? f.d.iSource() : f.d.iSink();
-        double rLoop = source ? f.rOnTot : f.rOffTot;
+        double have = source ? f.iPkSrc() : f.iPkSnk();
+        double rated = source ? f.d().iSource() : f.d().iSink();
+        double rLoop = source ? f.rOnTot() : f.rOffTot();
         List<Comparison> cmp = List.of(
-                new Comparison("peak source current (turn-on)", f.iPkSrc, "≥", need, "A"),
-                new Comparison("peak sink current (turn-off)", f.iPkSnk, "≥", need, "A"));
-        String what = "needs " + Eng.of(need, "A") + " for a " + Eng.of(f.op.edge(), "s") + " edge with "
-                + Eng.num(f.m.driveCurrent()) + "× margin (" + Eng.of(f.q.qTotal, "C") + " at " + Eng.of(f.op.swing(), "V") + ")";
+                new Comparison("peak source current (turn-on)", f.iPkSrc(), "≥", need, "A"),
+                new Comparison("peak sink current (turn-off)", f.iPkSnk(), "≥", need, "A"));
+        String what = "needs " + Eng.of(need, "A") + " for a " + Eng.of(f.op().edge(), "s") + " edge with "
+                + Eng.num(f.m().driveCurrent()) + "× margin (" + Eng.of(f.q().qTotal, "C") + " at " + Eng.of(f.op().swing(), "V") + ")";
         String gives = "this driver " + (source ? "sources " : "sinks ") + Eng.of(have, "A") + " through "
                 + Eng.of(rLoop, "Ω") + (have >= rated ? " (its rated peak)" : "");
         return switch (w) {
@@ -69,12 +70,12 @@ final class DriveCurrentRule implements PairRule {
 
     /** What would fix a short current: a smaller resistor when the driver's rating allows, else a stronger driver or a slower edge. */
     private static String fix(PairFigures f, double need, boolean source) {
-        int n = f.op.parallel();
-        double rDrv = source ? f.rSrc : f.rSnk;
-        double rated = source ? f.d.iSource() : f.d.iSink();
-        double rgNow = source ? f.op.rG() : f.op.rGOff();
-        double rgMax = n * (f.op.swing() / need - rDrv - f.q.rInt / n);
-        double edgeOk = f.q.qTotal * (need / f.q.iReq) / Math.min(source ? f.iPkSrc : f.iPkSnk, Double.MAX_VALUE);
+        int n = f.op().parallel();
+        double rDrv = source ? f.rSrc() : f.rSnk();
+        double rated = source ? f.d().iSource() : f.d().iSink();
+        double rgNow = source ? f.op().rG() : f.op().rGOff();
+        double rgMax = n * (f.op().swing() / need - rDrv - f.q().rInt / n);
+        double edgeOk = f.q().qTotal * (need / f.q().iReq) / Math.min(source ? f.iPkSrc() : f.iPkSnk(), Double.MAX_VALUE);
         String pick = "pick a driver rated ≥ " + Eng.of(Math.ceil(need * 10) / 10, "A");
         String relax = "relax the edge to " + Eng.of(edgeOk, "s");
         if (rated >= need && rgMax > 0 && rgMax < rgNow) {

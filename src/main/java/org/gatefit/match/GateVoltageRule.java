@@ -16,23 +16,23 @@ final class GateVoltageRule implements PairRule {
         UNDER_ENHANCED, FITS }
 
     private static double limit(PairFigures f) {
-        return f.s.vGsMax() * (1 - f.m.gateHeadroom());
+        return f.s().vGsMax() * (1 - f.m().gateHeadroom());
     }
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        SwitchPart s = f.s;
-        double on = f.op.vDrive();
-        double swing = f.op.swing();
+        SwitchPart s = f.s();
+        double on = f.op().vDrive();
+        double swing = f.op().swing();
         if (Double.isNaN(s.vGsMax())) {
             out.unknown(Why.NO_LIMIT);
             return;
         }
         double limit = limit(f);
         double full = PairFigures.fullEnhancement(s);
-        if (swing > f.d.vSupplyMax()) {
+        if (swing > f.d().vSupplyMax()) {
             out.fail(Why.SUPPLY_HIGH);
-        } else if (swing < f.d.vSupplyMin()) {
+        } else if (swing < f.d().vSupplyMin()) {
             out.fail(Why.SUPPLY_LOW);
         } else if (on > s.vGsMax()) {
             out.fail(Why.OVER_LIMIT);
@@ -50,9 +50,10 @@ final class GateVoltageRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        SwitchPart s = f.s;
-        OperatingPoint op = f.op;
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        SwitchPart s = f.s();
+        OperatingPoint op = f.op();
         double on = op.vDrive();
         double swing = op.swing();
         Why w = (Why) why;
@@ -63,8 +64,8 @@ final class GateVoltageRule implements PairRule {
         double limit = limit(f);
         double full = PairFigures.fullEnhancement(s);
         List<Comparison> cmp = new ArrayList<>();
-        cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", f.d.vSupplyMin(), "V"));
-        cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", f.d.vSupplyMax(), "V"));
+        cmp.add(new Comparison("driver supply (on − off level)", swing, "≥", f.d().vSupplyMin(), "V"));
+        cmp.add(new Comparison("driver supply (on − off level)", swing, "≤", f.d().vSupplyMax(), "V"));
         cmp.add(new Comparison("on level", on, "≤", limit, "V"));
         if (!Double.isNaN(full)) {
             cmp.add(new Comparison("on level (full enhancement)", on, "≥", full, "V"));
@@ -75,10 +76,10 @@ final class GateVoltageRule implements PairRule {
         String msg = switch (w) {
             case NO_LIMIT -> throw new IllegalStateException("worded above");
             case SUPPLY_HIGH -> "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
-                    + Eng.of(op.vDriveNeg(), "V") + ") exceeds this driver's " + Eng.of(f.d.vSupplyMax(), "V")
+                    + Eng.of(op.vDriveNeg(), "V") + ") exceeds this driver's " + Eng.of(f.d().vSupplyMax(), "V")
                     + " maximum — lower the drive levels or pick a driver rated ≥ " + Eng.of(swing, "V");
             case SUPPLY_LOW -> "the " + Eng.of(swing, "V") + " supply is below this driver's "
-                    + Eng.of(f.d.vSupplyMin(), "V") + " minimum — raise the supply or pick a driver that runs from "
+                    + Eng.of(f.d().vSupplyMin(), "V") + " minimum — raise the supply or pick a driver that runs from "
                     + Eng.of(swing, "V");
             case OVER_LIMIT -> "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
                     + Eng.of(s.vGsMax(), "V") + " and will damage the gate — drive at " + Eng.of(limit, "V")
@@ -87,7 +88,7 @@ final class GateVoltageRule implements PairRule {
                     + Eng.of(s.vThMax(), "V") + ", so the switch may not turn on — drive at "
                     + Eng.of(Double.isNaN(full) ? s.vThMax() * 2 : full, "V") + " or more";
             case NEAR_LIMIT -> "on level " + Eng.of(on, "V") + " is within "
-                    + Eng.pct(f.m.gateHeadroom()) + " of V_GS,max " + Eng.of(s.vGsMax(), "V")
+                    + Eng.pct(f.m().gateHeadroom()) + " of V_GS,max " + Eng.of(s.vGsMax(), "V")
                     + ", leaving little room for overshoot — drive at " + Eng.of(limit, "V") + " or less, or damp the gate loop";
             case NO_FULL_LEVEL -> "on level " + Eng.of(on, "V") + " is within the limits,"
                     + " but the level R_on is specified at (r_on_vgs_v) is unknown — check full enhancement in the datasheet";
@@ -97,8 +98,8 @@ final class GateVoltageRule implements PairRule {
                     + Eng.of(full, "V") + " or more";
             case FITS -> "on level " + Eng.of(on, "V") + " fully enhances the switch (≥ "
                     + Eng.of(full, "V") + ") and stays below " + Eng.of(limit, "V") + " (V_GS,max " + Eng.of(s.vGsMax(), "V")
-                    + " less " + Eng.pct(f.m.gateHeadroom()) + "); the driver runs from " + Eng.of(f.d.vSupplyMin(), "V")
-                    + " to " + Eng.of(f.d.vSupplyMax(), "V");
+                    + " less " + Eng.pct(f.m().gateHeadroom()) + "); the driver runs from " + Eng.of(f.d().vSupplyMin(), "V")
+                    + " to " + Eng.of(f.d().vSupplyMax(), "V");
         };
         return new Worded(msg, cmp);
     }

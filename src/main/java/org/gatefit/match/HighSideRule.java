@@ -16,15 +16,15 @@ final class HighSideRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        DriverPart d = f.d;
-        double bus = f.op.bus();
-        if (!f.op.highSide()) {
+        DriverPart d = f.d();
+        double bus = f.op().bus();
+        if (!f.op().highSide()) {
             out.pass(Why.LOW_SIDE, 1);
         } else if (!d.topology().floats()) {
             out.fail(Why.CANNOT_FLOAT);
         } else if (d.topology() == Topology.ISOLATED) {
             double iso = d.isolationVrms();
-            double want = bus * f.m.isolation();
+            double want = bus * f.m().isolation();
             if (Double.isNaN(iso)) {
                 out.unknown(Why.NO_ISOLATION);
             } else if (Double.isNaN(bus)) {
@@ -32,13 +32,13 @@ final class HighSideRule implements PairRule {
             } else if (iso < bus) {
                 out.fail(Why.ISOLATION_BELOW_BUS);
             } else if (iso < want) {
-                out.warn(Why.ISOLATION_THIN, (iso - bus) / (bus * (f.m.isolation() - 1)));
+                out.warn(Why.ISOLATION_THIN, (iso - bus) / (bus * (f.m().isolation() - 1)));
             } else {
                 out.pass(Why.ISOLATED_OK, iso / want - 1);
             }
         } else {
             double rating = d.vOffsetMax();
-            double need = bus * (1 + f.m.offset());
+            double need = bus * (1 + f.m().offset());
             if (Double.isNaN(rating)) {
                 out.unknown(Why.NO_OFFSET);
             } else if (Double.isNaN(bus)) {
@@ -54,13 +54,14 @@ final class HighSideRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        DriverPart d = f.d;
-        double bus = f.op.bus();
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        DriverPart d = f.d();
+        double bus = f.op().bus();
         double iso = d.isolationVrms();
-        double want = bus * f.m.isolation();
+        double want = bus * f.m().isolation();
         double rating = d.vOffsetMax();
-        double need = bus * (1 + f.m.offset());
+        double need = bus * (1 + f.m().offset());
         List<Comparison> isoCmp = List.of(new Comparison("isolation rating (rms)", iso, "≥", want, "V"));
         List<Comparison> offCmp = List.of(new Comparison("floating offset rating", rating, "≥", need, "V"));
         return switch ((Why) why) {
@@ -74,7 +75,7 @@ final class HighSideRule implements PairRule {
             case ISOLATION_BELOW_BUS -> new Worded("isolation " + Eng.of(iso, "V") + " rms is below the "
                     + Eng.of(bus, "V") + " bus — pick a driver rated ≥ " + Eng.of(want, "V"), isoCmp);
             case ISOLATION_THIN -> new Worded("isolation " + Eng.of(iso, "V") + " rms is less than "
-                    + Eng.num(f.m.isolation()) + "× the " + Eng.of(bus, "V") + " bus — check the working-voltage rating"
+                    + Eng.num(f.m().isolation()) + "× the " + Eng.of(bus, "V") + " bus — check the working-voltage rating"
                     + " (VIORM) and creepage for your standard", isoCmp);
             case ISOLATED_OK -> new Worded("isolated output, " + Eng.of(iso, "V") + " rms against a " + Eng.of(bus, "V")
                     + " bus; confirm the working-voltage rating for your standard", isoCmp);
@@ -84,7 +85,7 @@ final class HighSideRule implements PairRule {
             case OFFSET_BELOW_BUS -> new Worded("offset rating " + Eng.of(rating, "V") + " is below the " + Eng.of(bus, "V")
                     + " bus — pick a driver rated ≥ " + Eng.of(need, "V"), offCmp);
             case OFFSET_THIN -> new Worded("offset rating " + Eng.of(rating, "V") + " leaves less than "
-                    + Eng.pct(f.m.offset()) + " above the " + Eng.of(bus, "V") + " bus for switch-node overshoot — pick a"
+                    + Eng.pct(f.m().offset()) + " above the " + Eng.of(bus, "V") + " bus for switch-node overshoot — pick a"
                     + " driver rated ≥ " + Eng.of(need, "V") + " or measure the overshoot", offCmp);
             case OFFSET_OK -> new Worded("offset rating " + Eng.of(rating, "V") + " covers the "
                     + Eng.of(bus, "V") + " bus with " + Eng.pct(rating / bus - 1) + " to spare", offCmp);

@@ -19,7 +19,7 @@ final class LifecycleRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        judge(f.d, f.q.lifecycleSwitch(), out);
+        judge(f.d(), f.q().lifecycleSwitch(), out);
     }
 
     /**
@@ -40,8 +40,8 @@ final class LifecycleRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        return word(f.d, f.q.lifecycleSwitch(), (Why) why);
+    public Worded word(ShownFigures shown, Reason why) {
+        return word(shown.f.d(), shown.f.q().lifecycleSwitch(), (Why) why);
     }
 
     /** As {@link #judge(DriverPart, SwitchPart, Outcome)}: {@code s} null words the driver alone. */

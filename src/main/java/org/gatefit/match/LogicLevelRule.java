@@ -15,18 +15,18 @@ final class LogicLevelRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        DriverPart d = f.d;
-        double noise = f.m.logicNoise();
+        DriverPart d = f.d();
+        double noise = f.m().logicNoise();
         if (Double.isNaN(d.vIh()) || Double.isNaN(d.vIl())) {
             out.unknown(Why.NO_THRESHOLDS);
-        } else if (!Double.isNaN(d.vInMax()) && f.op.vOhMax() > d.vInMax()) {
+        } else if (!Double.isNaN(d.vInMax()) && f.op().vOhMax() > d.vInMax()) {
             out.fail(Why.OVER_INPUT_MAX);
-        } else if (f.nmHigh < 0) {
+        } else if (f.nmHigh() < 0) {
             out.fail(Why.HIGH_MISSED);
-        } else if (f.nmLow < 0) {
+        } else if (f.nmLow() < 0) {
             out.fail(Why.LOW_MISSED);
         } else {
-            double worst = Math.min(f.nmHigh, f.nmLow);
+            double worst = Math.min(f.nmHigh(), f.nmLow());
             if (worst < noise) {
                 out.warn(Why.THIN, worst / noise);
             } else {
@@ -36,10 +36,11 @@ final class LogicLevelRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        DriverPart d = f.d;
-        OperatingPoint op = f.op;
-        double noise = f.m.logicNoise();
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        DriverPart d = f.d();
+        OperatingPoint op = f.op();
+        double noise = f.m().logicNoise();
         String from = op.logic() == null ? "the controller" : "the " + op.logic().id() + " controller";
         Why w = (Why) why;
         if (w == Why.NO_THRESHOLDS) {
@@ -47,21 +48,21 @@ final class LogicLevelRule implements PairRule {
                     + from + " (V_OH " + Eng.of(op.vOh(), "V") + ", V_OL " + Eng.of(op.vOl(), "V") + ") drives it");
         }
         List<Comparison> cmp = new ArrayList<>();
-        cmp.add(new Comparison("noise margin high (V_OH − V_IH)", f.nmHigh, "≥", noise, "V"));
-        cmp.add(new Comparison("noise margin low (V_IL − V_OL)", f.nmLow, "≥", noise, "V"));
+        cmp.add(new Comparison("noise margin high (V_OH − V_IH)", f.nmHigh(), "≥", noise, "V"));
+        cmp.add(new Comparison("noise margin low (V_IL − V_OL)", f.nmLow(), "≥", noise, "V"));
         if (!Double.isNaN(d.vInMax())) {
             cmp.add(new Comparison("controller output high", op.vOhMax(), "≤", d.vInMax(), "V"));
         }
-        String margins = "noise margins " + Eng.of(f.nmHigh, "V") + " high, " + Eng.of(f.nmLow, "V") + " low";
+        String margins = "noise margins " + Eng.of(f.nmHigh(), "V") + " high, " + Eng.of(f.nmLow(), "V") + " low";
         String msg = switch (w) {
             case NO_THRESHOLDS -> throw new IllegalStateException("worded above");
             case OVER_INPUT_MAX -> from + " drives up to " + Eng.of(op.vOhMax(), "V") + ", above this driver's "
                     + Eng.of(d.vInMax(), "V") + " input maximum — add a level shifter or pick a driver with a higher input rating";
             case HIGH_MISSED -> from + " gives V_OH " + Eng.of(op.vOh(), "V") + " but this driver needs V_IH "
-                    + Eng.of(d.vIh(), "V") + " (margin " + Eng.of(f.nmHigh, "V") + "), so a high may not register — pick a driver"
+                    + Eng.of(d.vIh(), "V") + " (margin " + Eng.of(f.nmHigh(), "V") + "), so a high may not register — pick a driver"
                     + " with V_IH ≤ " + Eng.of(op.vOh() - noise, "V") + " or add a level shifter";
             case LOW_MISSED -> from + " gives V_OL " + Eng.of(op.vOl(), "V") + " but this driver needs V_IL "
-                    + Eng.of(d.vIl(), "V") + " (margin " + Eng.of(f.nmLow, "V") + "), so a low may not register — pick a driver"
+                    + Eng.of(d.vIl(), "V") + " (margin " + Eng.of(f.nmLow(), "V") + "), so a low may not register — pick a driver"
                     + " with V_IL ≥ " + Eng.of(op.vOl() + noise, "V");
             case THIN -> from + " into V_IH " + Eng.of(d.vIh(), "V") + " / V_IL "
                     + Eng.of(d.vIl(), "V") + ": " + margins + ", under the " + Eng.of(noise, "V")

@@ -14,14 +14,14 @@ final class NegativeBiasRule implements PairRule {
     enum Why implements Reason { NO_LIMIT, BELOW_LIMIT, NO_RAIL, BEYOND_RAIL, NEAR_LIMIT, CLAMP_HOLDS, LESS_NEGATIVE, FITS }
 
     private static double limit(PairFigures f) {
-        return f.s.vGsMin() * (1 - f.m.gateHeadroom());
+        return f.s().vGsMin() * (1 - f.m().gateHeadroom());
     }
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        SwitchPart s = f.s;
-        DriverPart d = f.d;
-        double off = f.op.vDriveNeg();
+        SwitchPart s = f.s();
+        DriverPart d = f.d();
+        double off = f.op().vDriveNeg();
         if (Double.isNaN(s.vGsMin())) {
             out.unknown(Why.NO_LIMIT);
         } else if (off < s.vGsMin()) {
@@ -44,10 +44,11 @@ final class NegativeBiasRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        SwitchPart s = f.s;
-        DriverPart d = f.d;
-        double off = f.op.vDriveNeg();
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        SwitchPart s = f.s();
+        DriverPart d = f.d();
+        double off = f.op().vDriveNeg();
         Why w = (Why) why;
         if (w == Why.NO_LIMIT) {
             return new Worded("the switch's V_GS,min (v_gs_min_v) is unknown, so the " + Eng.of(off, "V")
@@ -74,7 +75,7 @@ final class NegativeBiasRule implements PairRule {
                     + " this driver's negative rail supports — use " + Eng.of(d.vNegMin(), "V") + " or pick a driver rated for "
                     + Eng.of(off, "V");
             case NEAR_LIMIT -> "off level " + Eng.of(off, "V") + " is within "
-                    + Eng.pct(f.m.gateHeadroom()) + " of V_GS,min " + Eng.of(s.vGsMin(), "V") + " — undershoot may exceed it;"
+                    + Eng.pct(f.m().gateHeadroom()) + " of V_GS,min " + Eng.of(s.vGsMin(), "V") + " — undershoot may exceed it;"
                     + " use " + Eng.of(limit, "V") + " or less negative";
             case CLAMP_HOLDS -> "the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "
                     + Eng.of(off, "V") + "; this driver's Miller clamp holds the gate low, so verify turn-off on the bench";

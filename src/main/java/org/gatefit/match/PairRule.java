@@ -8,7 +8,7 @@ import org.gatefit.match.Check.Comparison;
  * from its own enum (which carries the verdict) and a sub-score in an {@link Outcome}, reading
  * only the pair's immutable {@link PairFigures}, building no strings and allocating nothing — and
  * <em>words</em> that judgement for the pairs that are shown: the sentence and the comparisons come
- * from the reason and the same figures. Ranking and the full evaluation call the same
+ * from the reason, the same figures and the figures only shown ({@link ShownFigures}). Ranking and the full evaluation call the same
  * {@link #judge}, so they agree by construction ({@link Rules}).
  *
  * <p>A rule that is certain to fail on a driver's own values declares those values as typed
@@ -26,7 +26,7 @@ sealed interface PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBia
     void judge(PairFigures f, Outcome out);
 
     /** The sentence and the comparisons of a judgement {@code why} of this rule on these figures. */
-    Worded word(PairFigures f, Reason why);
+    Worded word(ShownFigures shown, Reason why);
 
     /**
      * Adds the conditions on a driver's own catalog values under which this rule fails whatever the

@@ -10,8 +10,8 @@ final class PolarityRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        DriverPart d = f.d;
-        boolean wantInverting = !f.op.activeHigh();
+        DriverPart d = f.d();
+        boolean wantInverting = !f.op().activeHigh();
         if (d.offers(false) && d.offers(true)) {
             out.pass(Why.BOTH_SENSES, 1);
             return;
@@ -31,12 +31,13 @@ final class PolarityRule implements PairRule {
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        boolean wantInverting = !f.op.activeHigh();
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        boolean wantInverting = !f.op().activeHigh();
         return new Worded(switch ((Why) why) {
             case BOTH_SENSES -> "this driver has inverting and non-inverting inputs; use channel "
-                    + (f.d.inverting().indexOf(wantInverting) + 1) + " (" + (wantInverting ? "inverting" : "non-inverting")
-                    + ") for the " + (f.op.activeHigh() ? "active-high" : "active-low") + " PWM";
+                    + (f.d().inverting().indexOf(wantInverting) + 1) + " (" + (wantInverting ? "inverting" : "non-inverting")
+                    + ") for the " + (f.op().activeHigh() ? "active-high" : "active-low") + " PWM";
             case INVERTING_MATCH -> "inverting input matches the active-low PWM, but the switch turns"
                     + " on whenever the controller pin is low or unpowered (reset, boot) — add a pull-up and an enable,"
                     + " or use a non-inverting driver with active-high PWM";

@@ -34,12 +34,16 @@ public final class Rules {
     public static PairResult evaluate(DriverPart d, Question q) {
         String without = withoutFigures(q);
         PairFigures f = null;
+        ShownFigures shown = null;
         if (without == null) {
             try {
-                f = new PairFigures(q, d, true);
+                f = PairFigures.of(q, d);
             } catch (IllegalArgumentException | ArithmeticException e) {
                 without = "cannot estimate: " + e.getMessage();
             }
+        }
+        if (f != null) {
+            shown = new ShownFigures(f); // never throws: a shown figure its model refuses is left out
         }
         Outcome out = new Outcome();
         List<Check> checks = new ArrayList<>(PAIR_RULES.length);
@@ -51,7 +55,7 @@ public final class Rules {
             PairRule.Worded said = out.why() == Reason.Common.CANNOT_ESTIMATE
                     ? new PairRule.Worded(refused != null ? "cannot estimate: " + refused : without)
                     : f == null ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
-                    : e.rule().word(f, out.why());
+                    : e.rule().word(shown, out.why());
             checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
             v = v.and(out.verdict());
             sum += e.id().weight() * out.score();
@@ -60,7 +64,7 @@ public final class Rules {
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
                 q.s.lifecycle().availability(q.s.stock()), v);
-        return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, f == null ? List.of() : f.figures(), q.op,
+        return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, shown == null ? List.of() : shown.figures(), q.op,
                 q.m, Double.NaN);
     }
 
@@ -74,13 +78,17 @@ public final class Rules {
                 + " drive only — check this pair by hand against both datasheets";
     }
 
-    /** The figures of a pair for ranking, or null when the rules cannot compute them (every electrical rule unknown). */
-    private static PairFigures figuresOrNull(Question q, DriverPart d) {
+    /**
+     * The figures of a pair for ranking, computed into a ranking thread's {@code scratch}, or null
+     * when the rules cannot compute them (every electrical rule unknown).
+     */
+    private static PairFigures figuresOrNull(Question q, DriverPart d, PairFigures scratch) {
         if (withoutFigures(q) != null) {
             return null;
         }
         try {
-            return new PairFigures(q, d, false);
+            scratch.compute(q, d);
+            return scratch;
         } catch (IllegalArgumentException | ArithmeticException e) {
             return null;
         }
@@ -124,12 +132,14 @@ public final class Rules {
 
     /**
      * Verdicts and scores for one question, driver after driver (a ranker keeps one per thread;
-     * each driver's figures are one small immutable value). Not thread-safe.
+     * each driver's figures are computed into the ranking's one scratch, so ranking allocates
+     * nothing per driver). Not thread-safe.
      */
     public static final class Ranking {
         private final Question q;
         private final boolean scoreFailing;
         private final Outcome out = new Outcome();
+        private final PairFigures scratch = PairFigures.scratch();
         private Verdict verdict;
         private double score;
 
@@ -154,7 +164,7 @@ public final class Rules {
          * NaN for a failing driver when failing drivers are not scored).
          */
         public void rank(DriverPart d) {
-            PairFigures f = figuresOrNull(q, d);
+            PairFigures f = figuresOrNull(q, d, scratch);
             Verdict v = Verdict.PASS;
             double sum = 0;
             int w = 0;

@@ -20,7 +20,7 @@ final class UvloRule implements PairRule {
 
     /** The gate level just before lock-out: the falling threshold plus the (negative) off level. */
     private static double gateAtUvlo(PairFigures f) {
-        return offUvlo(f.d) + f.op.vDriveNeg();
+        return offUvlo(f.d()) + f.op().vDriveNeg();
     }
 
     /** What the gate must keep: the plateau (or V_th,max when higher or the plateau is unknown). */
@@ -30,32 +30,33 @@ final class UvloRule implements PairRule {
 
     @Override
     public void judge(PairFigures f, Outcome out) {
-        DriverPart d = f.d;
-        double supply = f.op.swing();
-        double need = need(f.s);
+        DriverPart d = f.d();
+        double supply = f.op().swing();
+        double need = need(f.s());
         if (Double.isNaN(d.uvloOn())) {
             out.unknown(Why.NO_UVLO);
         } else if (supply < d.uvloOn()) {
             out.fail(Why.NEVER_STARTS);
         } else if (!Double.isNaN(need) && gateAtUvlo(f) < need) {
             out.fail(Why.HALF_ON);
-        } else if (supply < d.uvloOn() + f.m.uvloHeadroom()) {
-            out.warn(Why.NEAR_START, (supply - d.uvloOn()) / f.m.uvloHeadroom());
-        } else if (Double.isNaN(need) && Double.isNaN(PairFigures.fullEnhancement(f.s))) {
+        } else if (supply < d.uvloOn() + f.m().uvloHeadroom()) {
+            out.warn(Why.NEAR_START, (supply - d.uvloOn()) / f.m().uvloHeadroom());
+        } else if (Double.isNaN(need) && Double.isNaN(PairFigures.fullEnhancement(f.s()))) {
             out.unknown(Why.NO_SWITCH_LEVELS);
         } else {
-            out.pass(Why.SAFE, (supply - d.uvloOn() - f.m.uvloHeadroom()) / Math.max(1, supply));
+            out.pass(Why.SAFE, (supply - d.uvloOn() - f.m().uvloHeadroom()) / Math.max(1, supply));
         }
     }
 
     @Override
-    public Worded word(PairFigures f, Reason why) {
-        DriverPart d = f.d;
-        double supply = f.op.swing();
-        double vNeg = f.op.vDriveNeg();
+    public Worded word(ShownFigures shown, Reason why) {
+        PairFigures f = shown.f;
+        DriverPart d = f.d();
+        double supply = f.op().swing();
+        double vNeg = f.op().vDriveNeg();
         Why w = (Why) why;
-        double full = PairFigures.fullEnhancement(f.s);
-        double need = need(f.s);
+        double full = PairFigures.fullEnhancement(f.s());
+        double need = need(f.s());
         double offUvlo = offUvlo(d);
         double gate = gateAtUvlo(f);
         switch (w) {
@@ -69,7 +70,7 @@ final class UvloRule implements PairRule {
                 break;
         }
         List<Comparison> cmp = new ArrayList<>();
-        cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + f.m.uvloHeadroom(), "V"));
+        cmp.add(new Comparison("supply above UVLO rising", supply, "≥", d.uvloOn() + f.m().uvloHeadroom(), "V"));
         if (w != Why.NEVER_STARTS) {
             if (!Double.isNaN(need)) {
                 cmp.add(new Comparison("on level just before lock-out", gate, "≥", need, "V"));
@@ -82,14 +83,14 @@ final class UvloRule implements PairRule {
             case NO_UVLO, NO_SWITCH_LEVELS -> throw new IllegalStateException("worded above");
             case NEVER_STARTS -> "the " + Eng.of(supply, "V") + " supply never reaches this driver's UVLO rising threshold "
                     + Eng.of(d.uvloOn(), "V") + ", so it stays locked out — raise the supply above " + Eng.of(d.uvloOn()
-                    + f.m.uvloHeadroom(), "V") + " or pick a driver with a lower UVLO";
+                    + f.m().uvloHeadroom(), "V") + " or pick a driver with a lower UVLO";
             case HALF_ON -> "the driver keeps switching down to " + Eng.of(offUvlo, "V") + " (UVLO falling), where the"
                     + " gate gets only " + Eng.of(gate, "V") + ", below the " + Eng.of(need, "V")
                     + " plateau/threshold, so a sagging supply leaves the switch half-on — pick a driver with UVLO falling ≥ "
                     + Eng.of(need - vNeg, "V") + (vNeg < 0 ? " (the plateau plus the "
                     + Eng.of(-vNeg, "V") + " negative rail)" : "");
             case NEAR_START -> "the " + Eng.of(supply, "V") + " supply is within "
-                    + Eng.of(f.m.uvloHeadroom(), "V") + " of UVLO rising " + Eng.of(d.uvloOn(), "V")
+                    + Eng.of(f.m().uvloHeadroom(), "V") + " of UVLO rising " + Eng.of(d.uvloOn(), "V")
                     + ", so supply tolerance or droop may lock the driver out — raise the supply or pick a lower UVLO";
             case SAFE -> "the driver starts at " + Eng.of(d.uvloOn(), "V") + " (supply "
                     + Eng.of(supply, "V") + ") and locks out at " + Eng.of(offUvlo, "V") + ", before the gate falls below the "
