@@ -89,7 +89,32 @@ class ReferenceFiguresTest {
             o.dvdt = 50e9;
             o.rGOff = 4.0;
         };
+        Consumer<OperatingPoint.Spec> bootOpRb = bootOp.andThen(o -> o.rBoot = 2.2);
+        // §3 with a 40 nH loop: R_crit = 2√(40 nH / 3.9 nF) = 6.405 Ω; the damping minimum
+        // 0.7·6.405 − (2 + 1.2) = 1.284 Ω; the edge maximum 12 V · 50 ns / (1.5 · 44 nC) − 3.2 Ω = 5.891 Ω
+        // (README: drive-current margin 1.5×); the recommended value the E24 value nearest half of it
+        // (2.945 Ω → 3.0 Ω, IEC 60063).
+        Consumer<OperatingPoint.Spec> loop40 = drive(12).andThen(o -> o.loop = 40e-9);
         return Stream.of(
+                row("REFERENCES §3, computed: 0.7·R_crit − R_driver − R_g,int", s12, SEC1_DRIVER, loop40,
+                        "gate-resistor-min", 1.2836, 1e-3),
+                row("REFERENCES §1: V·t / (margin·Q_g) − R_driver − R_g,int", s12, SEC1_DRIVER, loop40,
+                        "gate-resistor-max", 5.8909, 1e-3),
+                row("IEC 60063 E24 nearest 2.945 Ω", s12, SEC1_DRIVER, loop40, "gate-resistor-recommended", 3.0, 1e-9),
+                row("REFERENCES §4: (12 − 0.7) V / 2.2 Ω", boot, bootDriver, bootOpRb, "bootstrap-inrush", 5.136, 1e-3),
+                row("REFERENCES §4: 3 × 94.9 nF rounded up to E12 (IEC 60063): 330 nF", boot, bootDriver, bootOpRb,
+                        "bootstrap-capacitance-recommended", 330e-9, 1e-9),
+                row("REFERENCES §4: 1 − 3·2.2 Ω·330 nF·100 kHz", boot, bootDriver, bootOpRb, "bootstrap-duty-max", 0.7822,
+                        1e-4),
+                row("REFERENCES §7's RC-limited form solved for V_th,min 2 V (bisection, computed)", sec7, SEC1_DRIVER,
+                        sec7Op, "dv-dt-allowed", 4.1833e10, 1e-4),
+                row("REFERENCES §1: Q_g at the specified swing", s12, SEC1_DRIVER, drive(12), "gate-charge-at-swing",
+                        44e-9, 1e-9),
+                row("REFERENCES §1: R_source from the catalog", s12, SEC1_DRIVER, drive(12), "driver-resistance-source",
+                        2, 1e-9),
+                row("REFERENCES §1: R_sink from the catalog", s12, SEC1_DRIVER, drive(12), "driver-resistance-sink", 1,
+                        1e-9),
+                row("REFERENCES §7: dv/dt as given", sec7, SEC1_DRIVER, sec7Op, "dv-dt", 50e9, 1e-12),
                 row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "plateau-time-on", 4.753e-9, 1e-3),
                 row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "plateau-time-off", 11.96e-9, 1e-3),
                 row("REFERENCES §1, computed", s12, SEC1_DRIVER, drive(12), "delay-time-on", 6.956e-9, 1e-3),
@@ -122,6 +147,35 @@ class ReferenceFiguresTest {
                     d.vIh = 0.65 * 1.8;
                     d.vIl = 0.35 * 1.8;
                 }, o -> o.logic = LogicFamily.LVCMOS_1V8, "noise-margin-low", 0.18, 1e-9));
+    }
+
+    /**
+     * REFERENCES §1: without a catalog output resistance the driver is taken as V / I_peak
+     * (12 V / 4 A = 3 Ω source, 12 V / 6 A = 2 Ω sink) and the figure says it is an estimate.
+     */
+    @org.junit.jupiter.api.Test
+    void anOutputResistanceNotInTheCatalogIsEstimatedFromThePeakCurrentAndSaysSo() {
+        Parts.Sw s = Parts.sw();
+        sec1Switch(12).accept(s);
+        OperatingPoint.Spec o = Parts.op();
+        drive(12).accept(o);
+        Parts.Dr given = Parts.dr();
+        SEC1_DRIVER.accept(given);
+        PairResult known = Parts.eval(s, given, o);
+        org.junit.jupiter.api.Assertions.assertFalse(known.figure("driver-resistance-source").orElseThrow().estimated());
+        org.junit.jupiter.api.Assertions.assertFalse(known.figure("driver-resistance-sink").orElseThrow().estimated());
+        Parts.Dr none = Parts.dr();
+        none.rSource = Double.NaN;
+        none.rSink = Double.NaN;
+        PairResult est = Parts.eval(s, none, o);
+        Figure src = est.figure("driver-resistance-source").orElseThrow();
+        Figure snk = est.figure("driver-resistance-sink").orElseThrow();
+        assertEquals(3.0, src.value(), 1e-12);
+        assertEquals(2.0, snk.value(), 1e-12);
+        org.junit.jupiter.api.Assertions.assertTrue(src.estimated());
+        org.junit.jupiter.api.Assertions.assertTrue(snk.estimated());
+        org.junit.jupiter.api.Assertions.assertTrue(est.figure("gate-current-peak-source").orElseThrow().estimated());
+        org.junit.jupiter.api.Assertions.assertTrue(est.figure("gate-current-peak-sink").orElseThrow().estimated());
     }
 
     @ParameterizedTest(name = "{0}")
