@@ -57,6 +57,28 @@ public final class DriveCurrent {
     }
 
     /**
+     * Gate current during the Miller plateau, which sets the drain-voltage edge:
+     * {@code I = min(I_rated, ΔV_plateau / R_total)}, with ΔV_plateau = V_on − V_plateau at turn-on
+     * and V_plateau − V_off at turn-off. While the drain voltage moves, the gate sits at the plateau,
+     * so only the drive level's excess over (or the off level's distance under) the plateau drives
+     * current through the loop — not the full swing that {@link #peak} uses at the start of the
+     * edge. Source: plain circuit theory on the constant-voltage plateau (Mohan, Undeland, Robbins,
+     * <i>Power Electronics</i>, 3rd ed., gate-drive chapter; REFERENCES.md §8 "plateau-limited gate
+     * current").
+     *
+     * @param plateauDrive voltage across the loop on the plateau, V (≥ 0)
+     * @param totalResistance loop resistance R_driver + R_g + R_g,int, Ω (≥ 0)
+     * @param ratedPeak the driver's rated peak current, A (&gt; 0)
+     * @return plateau current, A (the rated peak when the loop has no resistance)
+     */
+    public static double plateau(double plateauDrive, double totalResistance, double ratedPeak) {
+        Require.nonNegative("plateau drive voltage", "V", plateauDrive);
+        Require.nonNegative("loop resistance", "Ω", totalResistance);
+        Require.positive("rated peak current", "A", ratedPeak);
+        return totalResistance == 0 ? ratedPeak : Math.min(ratedPeak, plateauDrive / totalResistance);
+    }
+
+    /**
      * Sum of the gate-loop resistances {@code R_driver + R_g,ext + R_g,int}.
      *
      * @return total loop resistance, Ω

@@ -63,6 +63,41 @@ public final class DvDt {
     }
 
     /**
+     * C_gd averaged over the drain swing, from the gate-drain charge: {@code C_gd,avg = Q_gd / ΔV}.
+     * C_gd falls steeply with V_DS, so C_rss at one test voltage misstates the charge the switch
+     * node actually moves through the gate; Q_gd is that charge (REFERENCES.md §8, charge-consistent
+     * Miller injection). With this C_gd the RC-limited form {@link #induced} is the current
+     * I_M = Q_gd / t over the transition time t = ΔV / (dv/dt).
+     *
+     * @param qgd gate-drain charge Q_gd, C (≥ 0)
+     * @param swing drain swing ΔV (the bus), V (&gt; 0)
+     * @return average C_gd, F
+     */
+    public static double averageCgd(double qgd, double swing) {
+        Require.nonNegative("gate-drain charge Q_gd", "C", qgd);
+        Require.positive("drain swing", "V", swing);
+        return qgd / swing;
+    }
+
+    /**
+     * The capacitive divider that bounds any induced gate voltage, whatever the resistance:
+     * {@code ΔV·C_gd / (C_gd + C_gs)} (plain circuit theory: an open gate takes this share of the
+     * drain step).
+     *
+     * @param cgd gate-drain capacitance (average over the swing), F (≥ 0)
+     * @param cgs gate-source capacitance, F (≥ 0; C_gd + C_gs &gt; 0)
+     * @param swing drain step ΔV, V (≥ 0)
+     * @return the divider's share of the step, V
+     */
+    public static double divider(double cgd, double cgs, double swing) {
+        Require.nonNegative("gate-drain capacitance C_gd", "F", cgd);
+        Require.nonNegative("gate-source capacitance C_gs", "F", cgs);
+        Require.positive("gate capacitance C_gd + C_gs", "F", cgd + cgs);
+        Require.nonNegative("drain voltage step ΔV", "V", swing);
+        return swing * cgd / (cgd + cgs);
+    }
+
+    /**
      * The dv/dt the simple bound allows before the gate reaches threshold,
      * {@code (V_th,min − V_off) / (C_gd·R_off)}.
      *

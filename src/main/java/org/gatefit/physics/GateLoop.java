@@ -63,6 +63,38 @@ public final class GateLoop {
     }
 
     /**
+     * The damping ratio whose step response overshoots by the fraction {@code os}: the inverse of
+     * {@link #overshoot}, {@code ζ = −ln(os)/√(π² + ln²(os))} (plain circuit theory).
+     *
+     * @param os allowed overshoot as a fraction of the step (0 &lt; os &lt; 1)
+     * @return damping ratio ζ (0 &lt; ζ &lt; 1)
+     */
+    public static double dampingForOvershoot(double os) {
+        Require.inRange("overshoot", "", os, Double.MIN_VALUE, Math.nextDown(1.0));
+        double l = Math.log(os);
+        return -l / Math.sqrt(Math.PI * Math.PI + l * l);
+    }
+
+    /**
+     * Peak gate voltage of a step from {@code from} to {@code to} through the series RLC: the step
+     * plus its overshoot, {@code to + (to − from)·exp(−πζ/√(1 − ζ²))}. For a falling step (turn-off)
+     * it is the undershoot below {@code to}. Plain circuit theory (second-order step response;
+     * REFERENCES.md §3 and §8: ζ 0.2 → 52.7 %, 0.5 → 16.3 %, 0.7 → 4.6 %).
+     *
+     * @param resistance loop resistance R_driver + R_g + R_g,int, Ω (≥ 0)
+     * @param inductance loop inductance, H (&gt; 0)
+     * @param capacitance gate capacitance (C_iss of the switches on the output), F (&gt; 0)
+     * @param from level before the step, V
+     * @param to level the driver steps to, V
+     * @return the extreme gate voltage of the first swing, V
+     */
+    public static double extreme(double resistance, double inductance, double capacitance, double from, double to) {
+        Require.finite("level before the step", "V", from);
+        Require.finite("level after the step", "V", to);
+        return to + (to - from) * overshoot(dampingRatio(resistance, inductance, capacitance));
+    }
+
+    /**
      * Damped ring frequency {@code f_d = f_0·√(1 − ζ²)}, Hz; 0 when ζ ≥ 1 (no ringing).
      */
     public static double ringFrequency(double resistance, double inductance,

@@ -24,6 +24,22 @@ public final class SwitchingTimes {
     }
 
     /**
+     * Plateau (drain-voltage transition) time at a given plateau current: {@code t = Q_gd / I}.
+     * With the plateau current of {@link DriveCurrent#plateau} this is {@link #plateauOn} /
+     * {@link #plateauOff} where the driver is resistive, and longer where its rated peak caps the
+     * current (REFERENCES.md §8: Q_gd 120 nC at 1.277 A → 94.0 ns).
+     *
+     * @param qgd Miller charge Q_gd, C (≥ 0)
+     * @param current gate current on the plateau, A (&gt; 0)
+     * @return plateau time, s
+     */
+    public static double plateauTime(double qgd, double current) {
+        Require.nonNegative("gate-drain charge Q_gd", "C", qgd);
+        Require.positive("plateau gate current", "A", current);
+        return qgd / current;
+    }
+
+    /**
      * Turn-on plateau (voltage-fall) time {@code t = Q_gd·R_on / (V_on − V_plateau)}.
      *
      * @param qgd Miller charge Q_gd, C (≥ 0)
