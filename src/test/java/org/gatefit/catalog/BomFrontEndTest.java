@@ -8,6 +8,7 @@ import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -66,12 +67,19 @@ class BomFrontEndTest {
     }
 
     @Test
-    void notUtf8OrUtf16IsBadInputNamingFileAndLine() throws Exception {
+    void windows1252AndUtf16AreReadAndAFileNeitherUtf8NorWindows1252IsBadInputNamingFileAndLine() throws Exception {
         byte[] latin1 = "Designator,MPN\nQ1,TST-SW1\nQ2,TST-\u00e9\n".getBytes(StandardCharsets.ISO_8859_1);
-        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("l.csv", latin1), "l.csv"));
-        assertTrue(e.getMessage().startsWith("l.csv line 3: the file is not UTF-8 text"), e.getMessage());
+        List<String> notes = new java.util.ArrayList<>();
+        Bom b = Bom.read(write("l.csv", latin1), "l.csv", new SheetReader.Options(null, 0, null, null, notes::add));
+        assertEquals("TST-\u00e9", b.get("Q2").orElseThrow().partNumber());
+        assertEquals(List.of("note: l.csv: not UTF-8 text; read as Windows-1252 (--encoding NAME reads another encoding)"),
+                notes);
         byte[] utf16 = "Designator,MPN\nQ1,TST-SW1\n".getBytes(StandardCharsets.UTF_16);
-        e = assertThrows(CatalogDataException.class, () -> Bom.read(write("w.csv", utf16), "w.csv"));
-        assertTrue(e.getMessage().startsWith("w.csv line 1: the file is UTF-16 text"), e.getMessage());
+        assertEquals("TST-SW1", Bom.read(write("w.csv", utf16), "w.csv").get("Q1").orElseThrow().partNumber());
+        // 0x81 is undefined in Windows-1252 (and a lone continuation byte in UTF-8): never decoded silently
+        byte[] neither = "Designator,MPN\nQ1,TST-SW1\nQ2,TST-\u0001\n".getBytes(StandardCharsets.ISO_8859_1);
+        neither[neither.length - 2] = (byte) 0x81;
+        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("n.csv", neither), "n.csv"));
+        assertTrue(e.getMessage().startsWith("n.csv line 3: the file is neither UTF-8 nor Windows-1252 text"), e.getMessage());
     }
 }
