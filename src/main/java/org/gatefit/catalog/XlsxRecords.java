@@ -31,6 +31,12 @@ final class XlsxRecords implements CsvRecords, AutoCloseable {
     private static final XMLInputFactory XML = XMLInputFactory.newFactory();
 
     static {
+        // POI logs through Log4j's API; with no logging provider in the jar, Log4j would print a warning about
+        // that on standard error. Its simple logger, switched off, keeps standard error for gatefit's messages.
+        if (System.getProperty("log4j.provider") == null && System.getProperty("log4j2.loggerContextFactory") == null) {
+            System.setProperty("log4j.provider", "org.apache.logging.log4j.simple.internal.SimpleProvider");
+            System.setProperty("log4j2.simplelogLevel", "OFF");
+        }
         XML.setProperty(XMLInputFactory.SUPPORT_DTD, false);
         XML.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
     }
