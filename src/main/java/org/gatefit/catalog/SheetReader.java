@@ -844,7 +844,7 @@ public final class SheetReader {
             }
         }
         if (!readAs.isEmpty()) {
-            note("note: " + file + ": headings read as " + String.join(", ", readAs));
+            note("note: " + file + ": headings read as columns:\n  " + String.join("\n  ", readAs));
         }
         List<String> missing = new ArrayList<>();
         for (String r : schema.requiredNames()) {

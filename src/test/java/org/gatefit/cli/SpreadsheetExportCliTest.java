@@ -79,10 +79,10 @@ class SpreadsheetExportCliTest {
         for (String note : List.of(
                 "approved.csv: not UTF-8 text; read as Windows-1252",
                 "approved.csv: 1 row above the header skipped (line 1: 'Approved power switches – rev. C'); the header is line 2",
-                "'Mfr' → maker", "'Part Number' → part_number", "'Type' → technology", "'Vds (V)' → v_block_v (V)",
-                "'Rds(on) mOhm' → r_on_mohm (mOhm)", "'Qg (nC)' → q_g_nc", "'Qgd, nC' → q_gd_nc (nC)",
-                "'Ciss, pF' → c_iss_pf (pF)", "'Vgs max' → v_gs_max_v", "'Status' → lifecycle",
-                "'Price €' → unit_price (€, kept as written)",
+                "approved.csv: headings read as columns:\n  'Mfr' → maker\n  'Part Number' → part_number\n"
+                        + "  'Type' → technology\n  'Vds (V)' → v_block_v (V)\n  'Rds(on) mOhm' → r_on_mohm (mOhm)\n"
+                        + "  'Qg (nC)' → q_g_nc\n  'Qgd, nC' → q_gd_nc (nC)\n  'Ciss, pF' → c_iss_pf (pF)\n"
+                        + "  'Vgs max' → v_gs_max_v\n  'Status' → lifecycle\n  'Price €' → unit_price (€, kept as written)\n",
                 "kept as extra attributes: Our ref",
                 "semicolon-separated, so a comma in a number is its decimal mark ('1,85' read as 1.85)",
                 "column 'Type' (technology) read 'Si MOSFET' as si-mosfet, 'Si MOSFET P-ch' as si-mosfet with channel p,"
