@@ -9,6 +9,7 @@ import java.util.Locale;
 public final class Cells {
     /** Characters that make a spreadsheet run a cell as a formula (OWASP CSV injection guidance). */
     static final String FORMULA_START = "=+-@\t\r";
+    private static final java.util.regex.Pattern THOUSANDS = java.util.regex.Pattern.compile("[+-]?[1-9]\\d{0,2}(\\.\\d{3})+(\\s*[^\\d.,].*)?");
     private static final java.util.regex.Pattern SPACE = java.util.regex.Pattern.compile("\\s+");
     private static final java.util.regex.Pattern PLAIN = java.util.regex.Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
 
@@ -37,12 +38,23 @@ public final class Cells {
             case TEXT -> text(c, raw.strip());
             case CHOICE -> choice(c, t);
             case NUMBER -> {
+                if (decimalComma && THOUSANDS.matcher(t).matches()) {
+                    throw new BadValueException(Problem.quote(t) + " has a point in a file whose numbers take a decimal"
+                            + " comma; is it a thousands separator? (expected the number without separators, e.g. "
+                            + t.replace(".", "") + ", or a decimal comma)");
+                }
                 double v = c.unit() == null ? plainNumber(c, t, decimalComma)
                         : Units.parse(t, c.unit(), decimalComma, bareExponent);
                 checkBounds(c, v, t);
                 yield v;
             }
             case INTEGER -> {
+                if (decimalComma && THOUSANDS.matcher(t).matches()) {
+                    // 1.200 in a file with decimal commas is most likely twelve hundred, never 1.2: not guessed
+                    throw new BadValueException(Problem.quote(t) + " has a point in a file whose numbers take a decimal"
+                            + " comma; is it a thousands separator? (expected a whole number without separators, e.g. "
+                            + t.replace(".", "") + ")");
+                }
                 long v = Units.parseInteger(t);
                 checkBounds(c, v, t);
                 yield v;
@@ -128,6 +140,8 @@ public final class Cells {
                         if (fraction >= 0) {
                             fraction++;
                         }
+                    } else if (ch == '.' && decimalComma) {
+                        return null; // parse decides whether it is a thousands separator
                     } else if ((ch == '.' || ch == ',' && comma) && fraction < 0) {
                         fraction = 0;
                     } else {

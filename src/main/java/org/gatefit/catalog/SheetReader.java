@@ -993,8 +993,8 @@ public final class SheetReader {
         String[] over = null;
         for (int slot : new int[] {l.gateMax, l.gateMin}) {
             int at = l.columnAt[slot];
-            if (at < 0 || at >= rec.size()) {
-                continue;
+            if (at < 0 || at >= rec.size() || !holds(rec, at, "±/")) {
+                continue; // the common cell, read without a string made of it
             }
             String cell = rec.get(at);
             String[] both = Cells.gateLimits(cell);
@@ -1011,7 +1011,7 @@ public final class SheetReader {
             }
         }
         int at = l.columnAt[l.technology];
-        if (at >= 0 && at < rec.size()) {
+        if (at >= 0 && at < rec.size() && holds(rec, at, " ,(/")) {
             String cell = rec.get(at);
             String[] tc = Cells.technologyWithChannel(cell);
             if (tc != null && Cells.tolerantChoice(Schema.of(l.kind).columns().get(l.technology), cell) == null) {
@@ -1041,6 +1041,34 @@ public final class SheetReader {
             }
         }
         return over;
+    }
+
+    /** Whether cell {@code at} holds one of {@code chars} (a quick test before a cell is split). */
+    private static boolean holds(CsvRecords rec, int at, String chars) {
+        int from = rec.from(at);
+        if (from < 0) {
+            String cell = rec.get(at).strip();
+            for (int i = 0; i < cell.length(); i++) {
+                if (chars.indexOf(cell.charAt(i)) >= 0) {
+                    return true;
+                }
+            }
+            return false;
+        }
+        char[] c = rec.chars();
+        int to = rec.to(at);
+        while (to > from && Character.isWhitespace(c[to - 1])) {
+            to--;
+        }
+        while (from < to && Character.isWhitespace(c[from])) {
+            from++;
+        }
+        for (int i = from; i < to; i++) {
+            if (chars.indexOf(c[i]) >= 0) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Remembers how a cell was read (the first few per column), for the column's note. */

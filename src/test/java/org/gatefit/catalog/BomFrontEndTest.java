@@ -82,4 +82,33 @@ class BomFrontEndTest {
         CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("n.csv", neither), "n.csv"));
         assertTrue(e.getMessage().startsWith("n.csv line 3: the file is neither UTF-8 nor Windows-1252 text"), e.getMessage());
     }
+
+    @Test
+    void aBomWorkbookWithATitleRowAndItsOwnHeadingsIsRead() throws Exception {
+        Path x = tmp.resolve("bom.xlsx");
+        try (org.apache.poi.xssf.streaming.SXSSFWorkbook wb = new org.apache.poi.xssf.streaming.SXSSFWorkbook();
+             java.io.OutputStream out = Files.newOutputStream(x)) {
+            org.apache.poi.ss.usermodel.Sheet s = wb.createSheet("BOM");
+            s.createRow(0).createCell(0).setCellValue("Board 7 BOM");
+            String[][] rows = {{"Ref Des", "Qty", "Mfr. Part No."}, {"Q1, Q3-Q4", "3", "TST-SW1"}, {"U2", "1", "TST-DR1"}};
+            for (int r = 0; r < rows.length; r++) {
+                org.apache.poi.ss.usermodel.Row row = s.createRow(r + 2);
+                for (int c = 0; c < rows[r].length; c++) {
+                    if (r > 0 && c == 1) {
+                        row.createCell(c).setCellValue(Double.parseDouble(rows[r][c]));
+                    } else {
+                        row.createCell(c).setCellValue(rows[r][c]);
+                    }
+                }
+            }
+            wb.write(out);
+            wb.dispose();
+        }
+        List<String> notes = new java.util.ArrayList<>();
+        Bom b = Bom.read(x, "bom.xlsx", new SheetReader.Options(null, 0, null, null, notes::add));
+        assertEquals("TST-SW1", b.get("Q4").orElseThrow().partNumber());
+        assertEquals("TST-DR1", b.get("u2").orElseThrow().partNumber());
+        assertEquals(List.of(), b.notes(), "quantity 3 for three designators");
+        assertEquals(List.of("note: bom.xlsx: 1 row above the header skipped; the header is line 3"), notes);
+    }
 }

@@ -133,6 +133,19 @@ class HeadingsTest {
     }
 
     @Test
+    void aPointThatMayBeAThousandsSeparatorInADecimalCommaFileIsNotGuessed() throws Exception {
+        Column stock = SWITCH.column("stock").orElseThrow();
+        Column ciss = SWITCH.column("c_iss_pf").orElseThrow();
+        for (Column c : List.of(stock, ciss)) {
+            BadValueException e = org.junit.jupiter.api.Assertions.assertThrows(BadValueException.class,
+                    () -> Cells.parse(c, "1.200", true));
+            assertTrue(e.getMessage().contains("is it a thousands separator?"), e.getMessage());
+        }
+        assertEquals(0.1, Cells.parse(ciss, "0.100", true), "a leading zero is no thousands group");
+        assertEquals(4.7, Cells.parse(ciss, "4.7", true));
+    }
+
+    @Test
     void gateLimitsAndTechnologyWithChannel() {
         assertArrayEquals(new String[] {"20", "-20"}, Cells.gateLimits("±20"));
         assertArrayEquals(new String[] {"20V", "-20V"}, Cells.gateLimits("+/- 20V"));
