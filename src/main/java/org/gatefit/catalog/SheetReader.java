@@ -230,7 +230,8 @@ public final class SheetReader {
             return true;
         }
         try (InputStream in = Files.newInputStream(path)) {
-            return XlsxRecords.isZip(in.readNBytes(4));
+            byte[] head = in.readNBytes(4); // a zip's first bytes; XlsxRecords (and POI) load only for a workbook
+            return head.length == 4 && head[0] == 'P' && head[1] == 'K' && head[2] == 3 && head[3] == 4;
         }
     }
 

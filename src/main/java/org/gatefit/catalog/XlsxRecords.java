@@ -66,11 +66,6 @@ final class XlsxRecords implements CsvRecords, AutoCloseable {
         }
     }
 
-    /** Whether a file is a zip (an {@code .xlsx} workbook is one) by its first bytes. */
-    static boolean isZip(byte[] head) {
-        return head.length >= 4 && head[0] == 'P' && head[1] == 'K' && head[2] == 3 && head[3] == 4;
-    }
-
     /** The sheet's name that is read. */
     String sheet() {
         return sheet;
