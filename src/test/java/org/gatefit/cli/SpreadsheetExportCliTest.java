@@ -266,6 +266,15 @@ class SpreadsheetExportCliTest {
         assertEquals("v_gs_max_v", m.get("headings").get("Vgs max").asText());
         assertEquals("", m.get("headings").get("Gate chg").asText());
         assertTrue(m.get("missing").has("q_g_nc"), m.toString());
+        com.networknt.schema.JsonSchema schema;
+        try (java.io.InputStream in = Files.newInputStream(Project.file("catalog-schema/mapping.schema.json"))) {
+            schema = com.networknt.schema.JsonSchemaFactory.getInstance(
+                    com.networknt.schema.SpecVersion.VersionFlag.V202012).getSchema(in);
+        }
+        assertEquals(java.util.Set.of(), schema.validate(m), "the suggested mapping is valid as mapping.schema.json says");
+        ObjectNode wrong = m.deepCopy();
+        ((ObjectNode) wrong.get("headings")).put("Item", "Part Number");
+        assertFalse(schema.validate(wrong).isEmpty(), "the schema is not vacuous: a column name must be one");
         ObjectNode h = (ObjectNode) m.get("headings");
         h.put("Item", "part_number");
         h.put("Kind", "technology");
