@@ -20,13 +20,23 @@ import java.util.regex.Pattern;
  * case-insensitively.
  */
 public final class Bom {
-    private static final List<String> DESIGNATOR = List.of("designator", "designators", "reference", "references",
-            "refdes", "ref des", "ref", "part reference", "ref designator", "reference designator");
-    private static final List<String> PART = List.of("manufacturer part number", "mpn", "mfr part number",
-            "mfg part number", "mfr. part number", "manufacturer_part_number", "part number", "part_number",
-            "part no", "part no.", "partnumber");
-    private static final List<String> QUANTITY = List.of("quantity", "qty", "qty.", "count");
-    private static final List<String> DNP = List.of("dnp", "do not place", "do not populate", "dni", "not fitted", "nf");
+    /** Headings of each column, compared as {@link Headings#normalise} compares them (case, spaces, dots, brackets ignored). */
+    private static final List<String> DESIGNATOR = normalised("designator", "designators", "reference", "references",
+            "refdes", "ref des", "ref", "part reference", "ref designator", "reference designator", "ref. des.",
+            "designator(s)", "refs");
+    private static final List<String> PART = normalised("manufacturer part number", "mpn", "mfr part number",
+            "mfg part number", "mfr. part number", "mfr. part no.", "mfr part no", "mfg part no", "manufacturer part no",
+            "manufacturer_part_number", "part number", "part_number", "part no", "part no.", "partnumber", "part #",
+            "p/n", "mfr p/n");
+    private static final List<String> QUANTITY = normalised("quantity", "qty", "qty.", "count", "qty per board");
+    private static final List<String> DNP = normalised("dnp", "do not place", "do not populate", "dni", "not fitted", "nf",
+            "fitted?");
+    /** Records before the header that the header search looks through (title rows). */
+    private static final int TITLE_ROWS = 10;
+
+    private static List<String> normalised(String... headings) {
+        return java.util.Arrays.stream(headings).map(Headings::normalise).toList();
+    }
     private static final Pattern RANGE = Pattern.compile("^([A-Za-z_]+)(\\d+)\\s*[-–]\\s*([A-Za-z_]*)(\\d+)$");
     private static final Pattern SINGLE = Pattern.compile("^[A-Za-z_]+\\d*[A-Za-z]?$");
     /** Most designators one range may expand to (guards against "R1-R999999"). */
@@ -162,12 +172,20 @@ public final class Bom {
      * problem is reported with file, line and column.
      */
     public static Bom read(Path path, String name) throws IOException, CatalogDataException {
+        return read(path, name, SheetReader.Options.DEFAULT);
+    }
+
+    /**
+     * Reads a BOM with the options of the sheet reader (encoding, sheet of a workbook, header row);
+     * its notes (the encoding read, title rows skipped) go to the options' listener.
+     */
+    public static Bom read(Path path, String name, SheetReader.Options options) throws IOException, CatalogDataException {
         if (Files.size(path) == 0) {
             throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM is empty (expected a header with"
                     + " designator and part-number columns)"));
         }
-        Reading reading = new Reading(name);
-        SheetReader.records(path, name, reading);
+        Reading reading = new Reading(name, options.headerRow(), options.notes());
+        SheetReader.records(path, name, options, reading);
         return reading.finish();
     }
 
@@ -182,15 +200,40 @@ public final class Bom {
         private int qCol = -1;
         private int nCol = -1;
         private List<String> headerCells;
+        private final long headerRow;
+        private long firstLine;
+        private List<String> firstCells;
+        private int before;
 
-        Reading(String name) {
+        private final java.util.function.Consumer<String> heard;
+
+        Reading(String name, long headerRow, java.util.function.Consumer<String> heard) {
             this.name = name;
+            this.headerRow = headerRow;
+            this.heard = heard;
         }
 
         @Override
         public void record(long line, List<String> rec) throws CatalogDataException {
             if (headerCells == null) {
-                header(line, rec);
+                if (headerRow > 0 && line < headerRow) {
+                    before++;
+                    return;
+                }
+                if (firstCells == null) {
+                    firstCells = rec;
+                    firstLine = line;
+                }
+                // Title rows above the header are skipped: the header is the first record naming both columns.
+                boolean last = headerRow > 0 || before + 1 >= TITLE_ROWS;
+                if (!header(line, rec, firstLine, firstCells, last)) {
+                    before++;
+                    return;
+                }
+                if (before > 0) {
+                    heard.accept("note: " + name + ": " + before + (before == 1 ? " row" : " rows")
+                            + " above the header skipped; the header is line " + line);
+                }
                 return;
             }
             String dCell = dCol < rec.size() ? rec.get(dCol) : "";
@@ -231,10 +274,16 @@ public final class Bom {
             }
         }
 
-        private void header(long line, List<String> rec) throws CatalogDataException {
+        /**
+         * Takes {@code rec} as the header when it names a designator and a part-number column; else,
+         * when {@code last}, fails naming what the first record ({@code firstLine}) held.
+         */
+        private boolean header(long line, List<String> rec, long firstLine, List<String> first, boolean last)
+                throws CatalogDataException {
+            dCol = pCol = qCol = nCol = -1;
             headerCells = rec;
             for (int i = 0; i < rec.size(); i++) {
-                String h = rec.get(i).strip().toLowerCase(Locale.ROOT);
+                String h = Headings.normalise(rec.get(i));
                 if (dCol < 0 && DESIGNATOR.contains(h)) {
                     dCol = i;
                 } else if (pCol < 0 && PART.contains(h)) {
@@ -246,11 +295,22 @@ public final class Bom {
                 }
             }
             if (dCol < 0 || pCol < 0) {
-                throw new CatalogDataException(Problem.ofLine(name, line, "the BOM header lacks a "
-                        + (dCol < 0 ? "designator column (expected one named Designator, Reference or RefDes)"
+                if (!last) {
+                    headerCells = null;
+                    return false;
+                }
+                boolean d = false;
+                boolean p = false;
+                for (String c : first) {
+                    d |= DESIGNATOR.contains(Headings.normalise(c));
+                    p |= PART.contains(Headings.normalise(c));
+                }
+                throw new CatalogDataException(Problem.ofLine(name, firstLine, "the BOM header lacks a "
+                        + (!d ? "designator column (expected one named Designator, Reference or RefDes)"
                         : "part-number column (expected one named Manufacturer Part Number, MPN or Part Number)")
-                        + "; found: " + Problem.names(headerCells)));
+                        + "; found: " + Problem.names(first)));
             }
+            return true;
         }
 
         private String column(int i) {
@@ -258,6 +318,9 @@ public final class Bom {
         }
 
         Bom finish() throws CatalogDataException {
+            if (headerCells == null && firstCells != null) {
+                header(firstLine, firstCells, firstLine, firstCells, true);
+            }
             if (headerCells == null) {
                 throw new CatalogDataException(Problem.ofLine(name, 0, "the BOM has no header line"));
             }

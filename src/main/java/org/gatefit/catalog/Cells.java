@@ -9,6 +9,7 @@ import java.util.Locale;
 public final class Cells {
     /** Characters that make a spreadsheet run a cell as a formula (OWASP CSV injection guidance). */
     static final String FORMULA_START = "=+-@\t\r";
+    private static final java.util.regex.Pattern THOUSANDS = java.util.regex.Pattern.compile("[+-]?[1-9]\\d{0,2}(\\.\\d{3})+(\\s*[^\\d.,].*)?");
     private static final java.util.regex.Pattern SPACE = java.util.regex.Pattern.compile("\\s+");
     private static final java.util.regex.Pattern PLAIN = java.util.regex.Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
 
@@ -20,6 +21,15 @@ public final class Cells {
      * allowed.
      */
     public static Object parse(Column c, String raw, boolean decimalComma) throws BadValueException {
+        return parse(c, raw, decimalComma, c.unit() == null ? 0 : c.unit().exponent());
+    }
+
+    /**
+     * {@link #parse(Column, String, boolean)} where a bare number in a column with a unit is in
+     * {@code 10^bareExponent} of the base unit (the unit the sheet's heading or units row names)
+     * and is converted to the column's unit.
+     */
+    public static Object parse(Column c, String raw, boolean decimalComma, int bareExponent) throws BadValueException {
         String t = raw == null ? "" : raw.strip();
         if (t.isEmpty()) {
             return null;
@@ -28,11 +38,23 @@ public final class Cells {
             case TEXT -> text(c, raw.strip());
             case CHOICE -> choice(c, t);
             case NUMBER -> {
-                double v = c.unit() == null ? plainNumber(c, t, decimalComma) : Units.parse(t, c.unit(), decimalComma);
+                if (decimalComma && THOUSANDS.matcher(t).matches()) {
+                    throw new BadValueException(Problem.quote(t) + " has a point in a file whose numbers take a decimal"
+                            + " comma; is it a thousands separator? (expected the number without separators, e.g. "
+                            + t.replace(".", "") + ", or a decimal comma)");
+                }
+                double v = c.unit() == null ? plainNumber(c, t, decimalComma)
+                        : Units.parse(t, c.unit(), decimalComma, bareExponent);
                 checkBounds(c, v, t);
                 yield v;
             }
             case INTEGER -> {
+                if (decimalComma && THOUSANDS.matcher(t).matches()) {
+                    // 1.200 in a file with decimal commas is most likely twelve hundred, never 1.2: not guessed
+                    throw new BadValueException(Problem.quote(t) + " has a point in a file whose numbers take a decimal"
+                            + " comma; is it a thousands separator? (expected a whole number without separators, e.g. "
+                            + t.replace(".", "") + ")");
+                }
                 long v = Units.parseInteger(t);
                 checkBounds(c, v, t);
                 yield v;
@@ -118,6 +140,8 @@ public final class Cells {
                         if (fraction >= 0) {
                             fraction++;
                         }
+                    } else if (ch == '.' && decimalComma) {
+                        return null; // parse decides whether it is a thousands separator
                     } else if ((ch == '.' || ch == ',' && comma) && fraction < 0) {
                         fraction = 0;
                     } else {
@@ -246,10 +270,82 @@ public final class Cells {
             };
         }
         if (!c.choices().contains(v)) {
+            String tolerant = tolerantChoice(c, t);
+            if (tolerant != null) {
+                return tolerant;
+            }
             throw new BadValueException(Problem.quote(t) + " is not one of the allowed values (expected one of "
                     + String.join(", ", c.choices()) + ")");
         }
         return v;
+    }
+
+    /**
+     * A choice as people write it: the choice or one of its {@code x-choice-words} compared with case,
+     * spaces, underscores, dots, brackets and inner hyphens ignored ({@code Low side} = {@code low-side},
+     * {@code N-ch} = {@code n}, {@code EOL} = {@code obsolete}); null when none is meant.
+     */
+    static String tolerantChoice(Column c, String t) {
+        String n = Headings.normalise(t);
+        if (n.isEmpty()) {
+            return null;
+        }
+        for (String choice : c.choices()) {
+            if (Headings.normalise(choice).equals(n)) {
+                return choice;
+            }
+        }
+        for (java.util.Map.Entry<String, String> w : c.choiceWords().entrySet()) {
+            if (Headings.normalise(w.getKey()).equals(n)) {
+                return w.getValue();
+            }
+        }
+        return null;
+    }
+
+    private static final String NUM = "(\\d+(?:[.,]\\d+)?|[.,]\\d+)\\s*([a-zA-Zµμ]*)";
+    private static final java.util.regex.Pattern PLUS_MINUS = java.util.regex.Pattern.compile(
+            "^(?:±|\\+/-|\\+-|\\+ / -)\\s*" + NUM + "$");
+    private static final java.util.regex.Pattern PLUS_SLASH_MINUS = java.util.regex.Pattern.compile(
+            "^\\+?\\s*" + NUM + "\\s*/\\s*-\\s*" + NUM + "$");
+    private static final java.util.regex.Pattern MINUS_SLASH_PLUS = java.util.regex.Pattern.compile(
+            "^-\\s*" + NUM + "\\s*/\\s*\\+?\\s*" + NUM + "$");
+
+    /**
+     * A gate-limit cell that gives both limits: {@code ±20} (also {@code +/-20}, {@code +-20}) is
+     * +20 and −20; {@code +22/-8} and {@code -8/+22} are +22 and −8. Returns the positive and the
+     * negative limit as cell texts, or null for any other cell.
+     */
+    public static String[] gateLimits(String cell) {
+        String t = cell.strip();
+        java.util.regex.Matcher m = PLUS_MINUS.matcher(t);
+        if (m.matches()) {
+            return new String[] {m.group(1) + m.group(2), "-" + m.group(1) + m.group(2)};
+        }
+        m = PLUS_SLASH_MINUS.matcher(t);
+        if (m.matches()) {
+            return new String[] {m.group(1) + m.group(2), "-" + m.group(3) + m.group(4)};
+        }
+        m = MINUS_SLASH_PLUS.matcher(t);
+        if (m.matches()) {
+            return new String[] {m.group(3) + m.group(4), "-" + m.group(1) + m.group(2)};
+        }
+        return null;
+    }
+
+    private static final java.util.regex.Pattern WITH_CHANNEL = java.util.regex.Pattern.compile(
+            "^(.*?)[\\s,/(-]*\\b([np])[\\s-]?(?:ch|chan|channel)\\b\\.?\\)?$", java.util.regex.Pattern.CASE_INSENSITIVE);
+
+    /**
+     * A technology cell that also names the channel ({@code Si MOSFET P-ch}, {@code SiC N-channel}):
+     * the technology's text and the channel ({@code n} or {@code p}), or null for any other cell.
+     */
+    public static String[] technologyWithChannel(String cell) {
+        java.util.regex.Matcher m = WITH_CHANNEL.matcher(cell.strip());
+        if (!m.matches() || m.group(1).isBlank()) {
+            return null;
+        }
+        return new String[] {m.group(1).strip(), m.group(2).toLowerCase(Locale.ROOT)};
     }
 
     private static double plainNumber(Column c, String t, boolean decimalComma) throws BadValueException {

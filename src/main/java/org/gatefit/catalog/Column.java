@@ -22,16 +22,20 @@ import java.util.regex.Pattern;
  * @param description  one line for documentation and help
  * @param example      an example value for messages, or null
  * @param wordsOnly    a long free text searched by its words only: not compared with --where or sorted
+ * @param headings     other headings that name this column in people's sheets ({@code x-headings})
+ * @param choiceWords  other ways people write each choice ({@code x-choice-words}): word → choice
  */
 public record Column(String name, ColumnType type, Unit unit, boolean required, List<String> choices,
                      Pattern pattern, Double minimum, boolean minExclusive, Double maximum,
                      String defaultValue, String defaultFrom, String description, String example,
-                     boolean wordsOnly) {
+                     boolean wordsOnly, List<String> headings, java.util.Map<String, String> choiceWords) {
 
     public Column {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(type, "type");
         choices = List.copyOf(choices);
+        headings = List.copyOf(headings);
+        choiceWords = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(choiceWords));
         if (type == ColumnType.CHOICE && choices.isEmpty()) {
             throw new IllegalArgumentException("expected choices for column " + name + ", got none");
         }

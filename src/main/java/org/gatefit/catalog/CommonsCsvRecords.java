@@ -30,16 +30,28 @@ final class CommonsCsvRecords implements CsvRecords {
 
     @Override
     public char sniffDelimiter() throws IOException {
-        in.mark(SNIFF_LIMIT + 1);
+        return sniffDelimiter(0);
+    }
+
+    @Override
+    public char sniffDelimiter(long headerLine) throws IOException {
+        in.mark(SNIFF_LIMIT + 2);
         try {
-            int[] read = {0};
-            return CsvRecords.sniff(i -> {
-                if (i != read[0]) {
-                    throw new IllegalStateException("expected characters in order, got " + i + " after " + read[0]);
+            char[] ahead = new char[SNIFF_LIMIT + 1];
+            int n = 0;
+            try {
+                while (n < ahead.length) {
+                    int got = in.read(ahead, n, ahead.length - n);
+                    if (got < 0) {
+                        break;
+                    }
+                    n += got;
                 }
-                read[0]++;
-                return in.read();
-            });
+            } catch (java.nio.charset.CharacterCodingException e) {
+                // the text before it decides; reading the records meets it again, on its line
+            }
+            int length = n;
+            return CsvRecords.sniff(i -> i < length ? ahead[i] : -1, headerLine);
         } finally {
             in.reset();
         }

@@ -57,7 +57,23 @@ final class CsvLexer implements CsvRecords {
     /** {@link CsvRecords#sniff} over the buffer (which only grows here: mark and pos are 0). */
     @Override
     public char sniffDelimiter() throws IOException {
-        return CsvRecords.sniff(i -> i < end || fill() ? buf[i] : -1);
+        return sniffDelimiter(0);
+    }
+
+    @Override
+    public char sniffDelimiter(long headerLine) throws IOException {
+        return CsvRecords.sniff(i -> {
+            while (i >= end) {
+                try {
+                    if (!fill()) {
+                        return -1;
+                    }
+                } catch (java.nio.charset.CharacterCodingException e) {
+                    return -1; // the text before it decides; reading the records meets it again, on its line
+                }
+            }
+            return buf[i];
+        }, headerLine);
     }
 
     @Override

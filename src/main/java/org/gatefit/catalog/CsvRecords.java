@@ -17,6 +17,9 @@ interface CsvRecords {
     /** Picks the delimiter (see {@link #sniff}), reading nothing away. */
     char sniffDelimiter() throws IOException;
 
+    /** {@link #sniffDelimiter()} with the header on physical line {@code headerLine} (0: found as {@link #sniff} finds it). */
+    char sniffDelimiter(long headerLine) throws IOException;
+
     void delimiter(char d);
 
     /**
@@ -73,18 +76,31 @@ interface CsvRecords {
         int at(int i) throws IOException;
     }
 
+    /** Content lines the delimiter detection looks through for the header line (title rows above it). */
+    int SNIFF_LINES = 10;
+
     /**
-     * The separator that splits the header line (the first line with content) into the most cells,
-     * quotes respected, looking at the first {@link #SNIFF_LIMIT} characters at most: a semicolon or a
-     * tab when more of them than commas, else a comma.
+     * The separator that splits the header line into the most cells, quotes respected, looking at the
+     * first {@link #SNIFF_LIMIT} characters at most: a semicolon or a tab when more of them than commas,
+     * else a comma. A comma followed by a space ({@code Ciss, pF}) is a heading's own, not counted. The
+     * header line is the first line with content that holds at least two separators of one kind
+     * (title rows above it hold fewer), among the first {@link #SNIFF_LINES} lines with content; when
+     * none does, the first line with content.
      */
     static char sniff(CharAt text) throws IOException {
-        int comma = 0;
-        int semi = 0;
-        int tab = 0;
+        return sniff(text, 0);
+    }
+
+    /** {@link #sniff}, with the header on physical line {@code headerLine} when it is above 0. */
+    static char sniff(CharAt text, long headerLine) throws IOException {
+        int[] first = null;
+        int[] counts = new int[3];
         boolean quoted = false;
         boolean content = false;
-        for (int i = 0; i < SNIFF_LIMIT; i++) {
+        long line = 1;
+        int contentLines = 0;
+        int i = 0;
+        for (; i < SNIFF_LIMIT; i++) {
             int c = text.at(i);
             if (c < 0) {
                 break;
@@ -92,23 +108,51 @@ interface CsvRecords {
             char ch = (char) c;
             if (ch == '"') {
                 quoted = !quoted;
-            } else if (!quoted) {
-                if (ch == '\n' || ch == '\r') {
-                    if (content) {
+                content = true;
+            } else if (!quoted && (ch == '\n' || ch == '\r')) {
+                if (ch == '\r' && text.at(i + 1) == '\n') {
+                    i++;
+                }
+                if (headerLine > 0 ? line == headerLine : content) {
+                    if (headerLine > 0 || Math.max(counts[0], Math.max(counts[1], counts[2])) >= 2) {
+                        return choose(counts);
+                    }
+                    if (first == null) {
+                        first = counts.clone();
+                    }
+                    if (++contentLines >= SNIFF_LINES) {
                         break;
                     }
-                    continue;
                 }
+                line++;
+                counts = new int[3];
+                content = false;
+            } else if (!quoted) {
                 content = true;
                 switch (ch) {
-                    case ',' -> comma++;
-                    case ';' -> semi++;
-                    case '\t' -> tab++;
+                    case ',' -> {
+                        if (text.at(i + 1) != ' ') {
+                            counts[0]++;
+                        }
+                    }
+                    case ';' -> counts[1]++;
+                    case '\t' -> counts[2]++;
                     default -> {
                     }
                 }
             }
         }
+        if (headerLine > 0 ? line == headerLine : content && (first == null
+                || Math.max(counts[0], Math.max(counts[1], counts[2])) >= 2)) {
+            return choose(counts);
+        }
+        return first == null ? ',' : choose(first);
+    }
+
+    private static char choose(int[] counts) {
+        int comma = counts[0];
+        int semi = counts[1];
+        int tab = counts[2];
         if (semi > comma && semi >= tab) {
             return ';';
         }

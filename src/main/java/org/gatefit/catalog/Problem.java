@@ -11,8 +11,21 @@ import java.util.Objects;
  * @param columnNumber 1-based column position, or 0 when unknown
  * @param text    the offending text, or null
  * @param message what is wrong and what was expected, as one sentence
+ * @param sheetRows whether {@code line} is a spreadsheet's row (an {@code .xlsx} sheet): shown as
+ *                  "row 14, column D (q_g_nc)"
  */
-public record Problem(String file, long line, String column, int columnNumber, String text, String message) {
+public record Problem(String file, long line, String column, int columnNumber, String text, String message,
+                      boolean sheetRows) {
+
+    /** A problem of a text file (lines). */
+    public Problem(String file, long line, String column, int columnNumber, String text, String message) {
+        this(file, line, column, columnNumber, text, message, false);
+    }
+
+    /** This problem in a spreadsheet's rows and lettered columns. */
+    public Problem inSheetRows() {
+        return sheetRows ? this : new Problem(file, line, column, columnNumber, text, message, true);
+    }
 
     public Problem {
         Objects.requireNonNull(file, "file");
@@ -75,6 +88,20 @@ public record Problem(String file, long line, String column, int columnNumber, S
     @Override
     public String toString() {
         StringBuilder sb = new StringBuilder(file);
+        if (sheetRows) {
+            if (line > 0) {
+                sb.append(" row ").append(line);
+            }
+            if (columnNumber > 0) {
+                sb.append(", column ").append(XlsxRecords.letters(columnNumber));
+                if (column != null) {
+                    sb.append(" (").append(column).append(')');
+                }
+            } else if (column != null) {
+                sb.append(", column ").append(column);
+            }
+            return sb.append(": ").append(message).toString();
+        }
         if (line > 0) {
             sb.append(" line ").append(line);
         }

@@ -22,7 +22,8 @@ import java.util.regex.Pattern;
  * the files use two annotations of ours: {@code x-unit} (the unit of a number, e.g. {@code nC})
  * {@code x-default-from} (the column whose value fills an empty cell) and {@code x-words-only}
  * (a free text searched by its words, not compared or sorted, so the index keeps no exact term or
- * sort value for it).
+ * sort value for it), {@code x-headings} (the headings people's sheets name the column by, see
+ * {@link Headings}) and {@code x-choice-words} (per choice, the other ways people write it).
  */
 public final class Schema {
     /** Classpath folder of the bundled schema files. */
@@ -140,9 +141,23 @@ public final class Schema {
         List<Object> examples = p.get("examples") instanceof List<?> l ? (List<Object>) l : List.of();
         String example = examples.isEmpty() ? null : text(examples.get(0));
         Pattern pattern = p.containsKey("pattern") ? Pattern.compile(text(p.get("pattern"))) : null;
+        List<String> headings = new ArrayList<>();
+        for (Object h : (List<Object>) p.getOrDefault("x-headings", List.of())) {
+            headings.add(text(h));
+        }
+        Map<String, String> words = new LinkedHashMap<>();
+        for (Map.Entry<String, Object> e : ((Map<String, Object>) p.getOrDefault("x-choice-words", Map.of())).entrySet()) {
+            if (!choices.contains(e.getKey())) {
+                throw new IllegalStateException("column " + name + ": x-choice-words names " + e.getKey()
+                        + ", which is not one of its choices " + choices);
+            }
+            for (Object w : (List<Object>) e.getValue()) {
+                words.put(text(w), e.getKey());
+            }
+        }
         return new Column(name, type, unit, required, choices, pattern, min, minEx, max, def, defFrom,
                 p.containsKey("description") ? text(p.get("description")) : "", example,
-                Boolean.TRUE.equals(p.get("x-words-only")));
+                Boolean.TRUE.equals(p.get("x-words-only")), headings, words);
     }
 
     public Kind kind() {

@@ -238,6 +238,65 @@ public final class Units {
         return unit.plural() + ", e.g. " + ex + " or " + ex + unit.symbol();
     }
 
+    /**
+     * The power of ten a unit written in a heading or a units row stands for in a column of
+     * {@code dim} ({@code mΩ}, {@code mOhm}, {@code Ω}, {@code nC}, {@code kHz}, {@code %} for a
+     * fraction), or null when the text is no unit of it; a prefix alone ({@code m}) is no unit here.
+     */
+    public static Integer headingExponent(String text, Dimension dim) {
+        String t = text.strip();
+        if (t.isEmpty()) {
+            return null;
+        }
+        if (dim == Dimension.RATIO) {
+            return t.equals("%") ? Integer.valueOf(-2) : t.equals("1") ? Integer.valueOf(0) : null;
+        }
+        if (isPrefixOnly(t)) {
+            return null;
+        }
+        return suffixExponent(t, dim);
+    }
+
+    /** The dimension a heading's unit belongs to (the first that reads it), or null. */
+    public static Dimension headingDimension(String text) {
+        for (Dimension d : Dimension.values()) {
+            if (headingExponent(text, d) != null) {
+                return d;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * Parses {@code text} for a column in {@code unit} where a bare number is in {@code 10^bareExponent}
+     * of the base unit (the unit a heading such as {@code Rds(on) (Ω)} gives), not in the column's
+     * own unit; a cell with its own unit reads as always.
+     */
+    public static double parse(String text, Unit unit, boolean decimalComma, int bareExponent) throws BadValueException {
+        if (bareExponent == unit.exponent()) {
+            return parse(text, unit, decimalComma);
+        }
+        checkLength(text.strip(), expectation(unit, null));
+        String t = text.strip();
+        Matcher m = NUMBER.matcher(t);
+        try {
+            if (m.matches() && m.group(2).isBlank()) {
+                String num = m.group(1);
+                if (num.indexOf(',') >= 0) {
+                    if (!decimalComma) {
+                        throw new BadValueException(Problem.quote(text) + " uses a comma as decimal mark; in a comma-separated"
+                                + " file write a point (expected " + expectation(unit, null) + ")");
+                    }
+                    num = num.replace(',', '.');
+                }
+                return finish(new BigDecimal(num), bareExponent, unit, text);
+            }
+            return parseNumber(text, unit, decimalComma);
+        } catch (NumberFormatException | ArithmeticException e) {
+            throw new BadValueException(Problem.quote(text) + " is out of range (expected " + expectation(unit, null) + ")");
+        }
+    }
+
     private static boolean isPrefixOnly(String suffix) {
         return Unit.Prefix.ofSymbol(suffix) != null;
     }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.Bom;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Kind;
@@ -52,6 +53,9 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
+    @Mixin
+    SheetOptions sheet;
+
     CheckCommand(Context ctx) {
         super(ctx);
     }
@@ -75,17 +79,21 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     }
 
     /** Reads the stage sheet and BOM and checks every stage against the catalog. */
-    StageCheck.Report run(Path stagesFile, Path bomFile, Margins m) throws IOException, CatalogDataException {
+    StageCheck.Report run(Path stagesFile, Path bomFile, Margins m) throws IOException, CatalogDataException,
+            BadValueException, UsageException {
         if (!Files.isRegularFile(ctx.path(stagesFile))) {
             throw new NoSuchFileException(stagesFile.toString());
         }
-        List<Row> rows = readStages(ctx.path(stagesFile), stagesFile.toString());
+        SheetReader.Options options = sheet == null ? SheetReader.Options.DEFAULT : sheet.options(ctx);
+        List<Row> rows = readStages(ctx.path(stagesFile), stagesFile.toString(), options);
         Bom b = null;
         if (bomFile != null) {
             if (!Files.isRegularFile(ctx.path(bomFile))) {
                 throw new NoSuchFileException(bomFile.toString());
             }
-            b = Bom.read(ctx.path(bomFile), bomFile.toString());
+            // The BOM has headings of its own: only the encoding and the notes apply to it.
+            b = Bom.read(ctx.path(bomFile), bomFile.toString(), new SheetReader.Options(options.encoding(), 0, null,
+                    null, options.notes()));
         }
         try (Catalog c = Catalog.open(catalogDir())) {
             if (c.isEmpty()) {
@@ -146,6 +154,11 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
 
     /** The stage sheet's rows; any problem is bad input (exit 3). */
     static List<Row> readStages(Path file, String name) throws IOException, CatalogDataException {
+        return readStages(file, name, SheetReader.Options.DEFAULT);
+    }
+
+    /** The stage sheet's rows read with {@code options} (its notes, e.g. a misspelt column, go to them). */
+    static List<Row> readStages(Path file, String name, SheetReader.Options options) throws IOException, CatalogDataException {
         if (!Files.isRegularFile(file)) {
             throw new NoSuchFileException(name);
         }
@@ -155,7 +168,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             public void accept(Row row) {
                 rows.add(row);
             }
-        });
+        }, options);
         if (!s.clean()) {
             throw new CatalogDataException(s.problems(), s.problemCount());
         }

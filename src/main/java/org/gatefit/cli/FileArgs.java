@@ -24,7 +24,7 @@ final class FileArgs {
     /** Options naming a file the command writes. */
     static final Set<String> OUTPUTS = Set.of("--output", "--junit", "--skip-invalid");
     /** Options and parameters (by label) naming a file the command reads. */
-    static final Set<String> INPUTS = Set.of("--stages", "--bom", "FILE", "STAGES.csv");
+    static final Set<String> INPUTS = Set.of("--stages", "--bom", "FILE", "STAGES.csv", "--map-file");
 
     /** The catalog folder (an option of every command): outputs may not go inside it. */
     static final String CATALOG = "--catalog";

@@ -14,7 +14,7 @@ import picocli.CommandLine.Parameters;
 
 @Command(name = "import", mixinStandardHelpOptions = true,
         header = "Import switch and driver catalogs (CSV) into the catalog, in one commit.",
-        description = {"Reads each FILE (UTF-8, comma, semicolon or tab separated; the kind is told from the columns: 'technology' for switches, 'topology' for drivers) and upserts its parts by part number. All files go in one commit: if any row of any file is bad, nothing is written and every problem is listed with file, line and column (exit 3). Columns the schema does not know are kept as extra attributes. See catalog-schema/README.md for the columns and units."})
+        description = {"Reads each FILE (CSV: UTF-8, UTF-16 or Windows-1252, comma, semicolon or tab separated; or an .xlsx workbook; headings as people write them, e.g. 'Vds (V)', 'Qg (nC)', mapped with --map; the kind is told from the columns) and upserts its parts by part number. All files go in one commit: if any row of any file is bad, nothing is written and every problem is listed with file, line and column (exit 3). Columns the schema does not know are kept as extra attributes. See catalog-schema/README.md for the columns and units."})
 final class ImportCommand extends CatalogCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FILE", arity = "1..*", description = "CSV files to import.")
     List<Path> files;
@@ -27,8 +27,11 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
     boolean replace;
 
     @Option(names = "--skip-invalid", paramLabel = "REJECTS.csv",
-            description = "Import the good rows and write the rejected rows, with their reasons, to REJECTS.csv.")
+            description = "Import the good rows and write the rejected rows, with their reasons, to REJECTS.csv (it imports again once fixed).")
     Path rejects;
+
+    @picocli.CommandLine.Mixin
+    SheetOptions sheet;
 
     ImportCommand(Context ctx) {
         super(ctx);
@@ -49,7 +52,8 @@ final class ImportCommand extends CatalogCommand implements Callable<Integer> {
         long lines = ctx.terminal ? Progress.dataLines(paths) : 0;
         Importer.Result r;
         try (Progress bar = ctx.progress("rows imported", lines >= Progress.LONG_IMPORT ? lines : 0)) {
-            r = new Importer(dir, ctx.clock).run(paths, names, new Importer.Options(kind, replace, ctx.path(rejects)),
+            r = new Importer(dir, ctx.clock).run(paths, names, new Importer.Options(kind, replace, ctx.path(rejects),
+                    sheet.options(ctx)),
                     bar::update);
         }
         for (SheetReader.Summary s : r.files()) {

@@ -76,12 +76,14 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         List<Row> stageRows = List.of();
         Bom b = null;
         if (stages != null) {
-            stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString());
+            stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString(),
+                    new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println));
             if (bom != null) {
                 if (!Files.isRegularFile(ctx.path(bom))) {
                     throw new NoSuchFileException(bom.toString());
                 }
-                b = Bom.read(ctx.path(bom), bom.toString());
+                b = Bom.read(ctx.path(bom), bom.toString(),
+                        new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println));
             }
         }
         Replacement.Result r;

@@ -30,6 +30,13 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
     @Mixin
     OutputOptions output;
 
+    @Mixin
+    SheetOptions sheet;
+
+    @Option(names = "--suggest-map",
+            description = "Instead of the report, print a mapping file of the headings read (heading → column, \"\" for an extra attribute, and the nearest headings of each required column not found), to edit and give to --map-file.")
+    boolean suggestMap;
+
     ValidateCommand(Context ctx) {
         super(ctx);
     }
@@ -44,6 +51,7 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
                 throw new UsageException("--kind: " + e.getMessage());
             }
         }
+        SheetReader.Options options = sheet.options(ctx);
         List<SheetReader.Summary> results = new ArrayList<>();
         for (Path f : files) {
             if (!Files.isRegularFile(ctx.path(f))) {
@@ -53,7 +61,27 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
                 @Override
                 public void accept(Row row) {
                 }
-            }));
+            }, options));
+        }
+        if (suggestMap) {
+            java.util.Map<String, String> headings = new java.util.LinkedHashMap<>();
+            java.util.Map<String, List<String>> missing = new java.util.LinkedHashMap<>();
+            for (SheetReader.Summary s : results) {
+                s.headings().forEach(headings::putIfAbsent);
+                s.missing().forEach(missing::putIfAbsent);
+            }
+            if (output.format != org.gatefit.report.Format.TEXT && output.format != org.gatefit.report.Format.JSON) {
+                throw new UsageException("--suggest-map writes JSON (expected --format text or json, got " + output.format + ")");
+            }
+            try (Writer w = output.open(ctx)) {
+                w.write(org.gatefit.catalog.Mapping.json(headings, missing));
+            }
+            if (!missing.isEmpty()) {
+                ctx.err.println("note: no heading names the required column" + (missing.size() > 1 ? "s " : " ")
+                        + String.join(", ", missing.keySet()) + "; the mapping lists the nearest headings under \"missing\":"
+                        + " map one of them under \"headings\"");
+            }
+            return ExitCode.OK;
         }
         try (Writer w = output.open(ctx)) {
             CatalogReports.validation(results, output.format, w);

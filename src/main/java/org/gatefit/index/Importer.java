@@ -61,9 +61,16 @@ public final class Importer {
      * @param forced  kind to read every file as, or null to tell from the columns
      * @param replace whether each imported kind's previous parts are dropped (in the same commit)
      * @param rejects where to write rejected rows; null means all-or-nothing
+     * @param sheet   how to read the files (encoding, header row, sheet, mapping, notes)
      */
-    public record Options(Kind forced, boolean replace, Path rejects) {
+    public record Options(Kind forced, boolean replace, Path rejects, SheetReader.Options sheet) {
+        /** With the sheet reader's defaults. */
+        public Options(Kind forced, boolean replace, Path rejects) {
+            this(forced, replace, rejects, SheetReader.Options.DEFAULT);
+        }
+
         public Options {
+            sheet = sheet == null ? SheetReader.Options.DEFAULT : sheet;
             if (forced == Kind.STAGE) {
                 throw new IllegalArgumentException("expected --kind switch or driver, got stage (check a stage sheet with 'check')");
             }
@@ -354,6 +361,13 @@ public final class Importer {
             boolean[] stop = {false};
             SheetReader.Summary s = SheetReader.read(files.get(i), name, options.forced(), new SheetReader.Sink() {
                 @Override
+                public void format(SheetReader.Format format) {
+                    if (rejects != null) {
+                        rejects.format(format);
+                    }
+                }
+
+                @Override
                 public void accept(Row row) throws IOException {
                     if (row.kind() == Kind.STAGE || stop[0]) {
                         return;
@@ -379,7 +393,7 @@ public final class Importer {
                         stop[0] = true; // all-or-nothing: keep checking, stop writing
                     }
                 }
-            });
+            }, options.sheet());
             summaries.add(s);
             if (s.kind() == Kind.STAGE) {
                 problems.add(Problem.ofLine(name, 1, "this is a stage sheet (expected a switch or driver catalog;"
@@ -499,22 +513,42 @@ public final class Importer {
      */
     private static final class RejectsFile implements AutoCloseable {
         private final Writer out;
-        private final CSVPrinter printer;
+        private CSVPrinter printer;
         private List<String> header;
+        private SheetReader.Format format;
         private boolean closed;
 
         RejectsFile(Path path) throws IOException {
             out = Files.newBufferedWriter(path, StandardCharsets.UTF_8);
-            printer = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get());
+        }
+
+        /**
+         * How the next rows' sheet is written: the rejects keep its separator (so decimal commas read
+         * back) and its units row, under a header the importer reads back (its two columns of reasons
+         * are ignored on import).
+         */
+        void format(SheetReader.Format f) {
+            this.format = f;
         }
 
         void write(List<String> fileHeader, long line, List<String> cells, List<Problem> problems) throws IOException {
+            if (printer == null) {
+                char d = format == null ? ',' : format.delimiter();
+                printer = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setDelimiter(d).setRecordSeparator('\n').get());
+            }
             if (!fileHeader.equals(header)) {
                 header = List.copyOf(fileHeader);
                 List<String> h = new ArrayList<>(header);
-                h.add("rejected_line");
-                h.add("rejected_because");
+                h.add(SheetReader.REJECTED_LINE);
+                h.add(SheetReader.REJECTED_BECAUSE);
                 printer.printRecord(h);
+                if (format != null && !format.units().isEmpty()) {
+                    List<String> u = new ArrayList<>(format.units());
+                    while (u.size() < h.size()) {
+                        u.add("");
+                    }
+                    printer.printRecord(u);
+                }
             }
             StringBuilder because = new StringBuilder();
             for (Problem p : problems) {
@@ -536,7 +570,11 @@ public final class Importer {
         public void close() throws IOException {
             if (!closed) {
                 closed = true;
-                printer.close(true);
+                if (printer != null) {
+                    printer.close(true);
+                } else {
+                    out.close();
+                }
             }
         }
     }

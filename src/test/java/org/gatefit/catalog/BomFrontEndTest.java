@@ -8,6 +8,7 @@ import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -66,12 +67,48 @@ class BomFrontEndTest {
     }
 
     @Test
-    void notUtf8OrUtf16IsBadInputNamingFileAndLine() throws Exception {
+    void windows1252AndUtf16AreReadAndAFileNeitherUtf8NorWindows1252IsBadInputNamingFileAndLine() throws Exception {
         byte[] latin1 = "Designator,MPN\nQ1,TST-SW1\nQ2,TST-\u00e9\n".getBytes(StandardCharsets.ISO_8859_1);
-        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("l.csv", latin1), "l.csv"));
-        assertTrue(e.getMessage().startsWith("l.csv line 3: the file is not UTF-8 text"), e.getMessage());
+        List<String> notes = new java.util.ArrayList<>();
+        Bom b = Bom.read(write("l.csv", latin1), "l.csv", new SheetReader.Options(null, 0, null, null, notes::add));
+        assertEquals("TST-\u00e9", b.get("Q2").orElseThrow().partNumber());
+        assertEquals(List.of("note: l.csv: not UTF-8 text; read as Windows-1252 (--encoding NAME reads another encoding)"),
+                notes);
         byte[] utf16 = "Designator,MPN\nQ1,TST-SW1\n".getBytes(StandardCharsets.UTF_16);
-        e = assertThrows(CatalogDataException.class, () -> Bom.read(write("w.csv", utf16), "w.csv"));
-        assertTrue(e.getMessage().startsWith("w.csv line 1: the file is UTF-16 text"), e.getMessage());
+        assertEquals("TST-SW1", Bom.read(write("w.csv", utf16), "w.csv").get("Q1").orElseThrow().partNumber());
+        // 0x81 is undefined in Windows-1252 (and a lone continuation byte in UTF-8): never decoded silently
+        byte[] neither = "Designator,MPN\nQ1,TST-SW1\nQ2,TST-\u0001\n".getBytes(StandardCharsets.ISO_8859_1);
+        neither[neither.length - 2] = (byte) 0x81;
+        CatalogDataException e = assertThrows(CatalogDataException.class, () -> Bom.read(write("n.csv", neither), "n.csv"));
+        assertTrue(e.getMessage().startsWith("n.csv line 3: the file is neither UTF-8 nor Windows-1252 text"), e.getMessage());
+    }
+
+    @Test
+    void aBomWorkbookWithATitleRowAndItsOwnHeadingsIsRead() throws Exception {
+        Path x = tmp.resolve("bom.xlsx");
+        try (org.apache.poi.xssf.streaming.SXSSFWorkbook wb = new org.apache.poi.xssf.streaming.SXSSFWorkbook();
+             java.io.OutputStream out = Files.newOutputStream(x)) {
+            org.apache.poi.ss.usermodel.Sheet s = wb.createSheet("BOM");
+            s.createRow(0).createCell(0).setCellValue("Board 7 BOM");
+            String[][] rows = {{"Ref Des", "Qty", "Mfr. Part No."}, {"Q1, Q3-Q4", "3", "TST-SW1"}, {"U2", "1", "TST-DR1"}};
+            for (int r = 0; r < rows.length; r++) {
+                org.apache.poi.ss.usermodel.Row row = s.createRow(r + 2);
+                for (int c = 0; c < rows[r].length; c++) {
+                    if (r > 0 && c == 1) {
+                        row.createCell(c).setCellValue(Double.parseDouble(rows[r][c]));
+                    } else {
+                        row.createCell(c).setCellValue(rows[r][c]);
+                    }
+                }
+            }
+            wb.write(out);
+            wb.dispose();
+        }
+        List<String> notes = new java.util.ArrayList<>();
+        Bom b = Bom.read(x, "bom.xlsx", new SheetReader.Options(null, 0, null, null, notes::add));
+        assertEquals("TST-SW1", b.get("Q4").orElseThrow().partNumber());
+        assertEquals("TST-DR1", b.get("u2").orElseThrow().partNumber());
+        assertEquals(List.of(), b.notes(), "quantity 3 for three designators");
+        assertEquals(List.of("note: bom.xlsx: 1 row above the header skipped; the header is line 3"), notes);
     }
 }

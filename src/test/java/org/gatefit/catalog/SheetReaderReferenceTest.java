@@ -62,9 +62,11 @@ class SheetReaderReferenceTest {
         SheetReader.Summary f = fast.summary();
         SheetReader.Summary r = ref.summary();
         assertEquals(new SheetReader.Summary(r.file(), r.kind(), r.sha256(), r.rows(), r.rejected(), r.header(),
-                r.unknownColumns(), r.delimiter(), List.of(), r.problemCount(), r.fatal()),
+                r.unknownColumns(), r.delimiter(), List.of(), r.problemCount(), r.fatal(), r.headings(), r.missing(),
+                r.notes()),
                 new SheetReader.Summary(f.file(), f.kind(), f.sha256(), f.rows(), f.rejected(), f.header(),
-                        f.unknownColumns(), f.delimiter(), List.of(), f.problemCount(), f.fatal()), what);
+                        f.unknownColumns(), f.delimiter(), List.of(), f.problemCount(), f.fatal(), f.headings(),
+                        f.missing(), f.notes()), what);
         assertEquals(r.problems().size(), f.problems().size(), what);
         for (int i = 0; i < r.problems().size(); i++) {
             Problem a = f.problems().get(i);
