@@ -170,11 +170,14 @@ class RulesTest {
                             d.uvloOn = 11;
                             d.uvloOff = 10.5;
                         }, O0, "11 V", "raise the supply above 12 V"),
-                row(Verdict.FAIL, "UVLO falling 4.5 V < plateau 5 V: a sagging supply leaves the switch half-on (§5)",
-                        S0, d -> d.uvloOff = 4.5, O0, "4.5 V", "5 V", "pick a driver with UVLO falling ≥ 5 V"),
-                row(Verdict.FAIL, "+10/−6 V: UVLO falling 6.5 V leaves 6.5 − 6 = 0.5 V on the gate < plateau 5 V;"
-                        + " needs UVLO falling ≥ 5 + 6 = 11 V", S0, d -> d.vNegMin = -10, o -> o.vDriveNeg = -6.0,
-                        "500 mV", "pick a driver with UVLO falling ≥ 11 V"),
+                row(Verdict.FAIL, "UVLO falling 4.5 V < plateau 5 V: a sagging supply leaves the switch half-on (§5);"
+                        + " with the 15 % uvlo-plateau margin it needs ≥ 5.75 V", S0, d -> d.uvloOff = 4.5, O0, "4.5 V",
+                        "5 V", "pick a driver with UVLO falling ≥ 5.75 V"),
+                row(Verdict.FAIL, "+10/−6 V, UVLO on the total supply: UVLO falling 6.5 V leaves 6.5 − 6 = 0.5 V on the"
+                        + " gate < plateau 5 V; needs UVLO falling ≥ 5.75 + 6 = 11.75 V", S0, d -> {
+                            d.vNegMin = -10;
+                            d.uvloTotal = true;
+                        }, o -> o.vDriveNeg = -6.0, "500 mV", "pick a driver with UVLO falling ≥ 11.8 V"),
                 row(Verdict.UNKNOWN, "uvlo_on_v unknown", S0, d -> {
                     d.uvloOn = Double.NaN;
                     d.uvloOff = Double.NaN;
@@ -184,8 +187,51 @@ class RulesTest {
                     s.vThMax = Double.NaN;
                     s.rOnVgs = Double.NaN;
                     s.vGateOn = Double.NaN;
-                }, D0, O0, "7 V"));
+                }, D0, O0, "7 V"),
+                // uvlo-plateau margin 15 % above the plateau (common practice, no source): 5 V · 1.15 = 5.75 V.
+                row(Verdict.WARN, "UVLO falling 5.5 V: above the 5 V plateau but under 5.75 V", S0, d -> d.uvloOff = 5.5,
+                        O0, "5.5 V", "15 %", "UVLO falling ≥ 5.75 V"),
+                // What the UVLO monitors (REFERENCES §5): +10/−3 V, UVLO falling 6.5 V. On the positive rail the gate
+                // keeps 6.5 V ≥ 5.75 V; on the total supply it keeps 6.5 − 3 = 3.5 V < 5 V (half-on).
+                row(Verdict.WARN, "reference unknown, +10/−3 V: positive-rail reading 6.5 V passes, total-supply reading"
+                        + " 3.5 V fails — they disagree", S0, d -> d.vNegMin = -10, o -> o.vDriveNeg = -3.0,
+                        "uvlo_monitors", "6.5 V", "3.5 V"),
+                row(Verdict.PASS, "UVLO on the positive rail, +10/−3 V: 6.5 V at lock-out ≥ 5.75 V", S0, d -> {
+                    d.vNegMin = -10;
+                    d.uvloTotal = false;
+                }, o -> o.vDriveNeg = -3.0, "positive rail", "6.5 V"),
+                row(Verdict.FAIL, "UVLO on the total supply, +10/−3 V: 3.5 V at lock-out < 5 V plateau; needs UVLO falling"
+                        + " ≥ 5.75 + 3 = 8.75 V", S0, d -> {
+                            d.vNegMin = -10;
+                            d.uvloTotal = true;
+                        }, o -> o.vDriveNeg = -3.0, "3.5 V", "UVLO falling ≥ 8.75 V"),
+                // IGBT: near the plateau at rated current it desaturates (REFERENCES §9 practice; from memory).
+                row(Verdict.PASS, "IGBT, +15 V, plateau 9 V, UVLO 12/11 V: 11 V ≥ 9·1.15 = 10.35 V, but below the 15 V"
+                        + " V_CE(sat) level the sentence warns of desaturation", IGBT, d -> {
+                            d.uvloOn = 12;
+                            d.uvloOff = 11;
+                        }, o -> o.vDrive = 15.0, "desaturate", "15 V"),
+                row(Verdict.WARN, "IGBT, UVLO falling 10 V < 10.35 V: near the plateau an IGBT desaturates", IGBT, d -> {
+                    d.uvloOn = 12;
+                    d.uvloOff = 10;
+                }, o -> o.vDrive = 15.0, "desaturates", "10.4 V"),
+                // Advice stays in the gate window: V_GS,max 20 V less 10 % = 18 V; starting needs 19 + 1 = 20 V.
+                row(Verdict.FAIL, "UVLO rising 19 V: starting needs 20 V on the gate, beyond the 18 V window", S0, d -> {
+                    d.uvloOn = 19;
+                    d.uvloOff = 18;
+                }, O0, "no on level within the switch's gate window", "lower UVLO"));
     }
+
+    /** An IGBT with round figures: plateau 9 V, V_th 5–6.5 V, V_CE(sat) specified at 15 V, ±20 V. */
+    private static final Consumer<Parts.Sw> IGBT = s -> {
+        s.tech = Technology.IGBT;
+        s.vPlateau = 9;
+        s.vThMin = 5;
+        s.vThMax = 6.5;
+        s.rOnVgs = 15;
+        s.vGateOn = 15;
+        s.qGVgs = 15;
+    };
 
     @ParameterizedTest(name = "{0}")
     @MethodSource
@@ -253,6 +299,12 @@ class RulesTest {
 
     private static final Consumer<OperatingPoint.Spec> HIGH = o -> o.highSide = true;
 
+    /** An isolated driver with a 150 kV/µs (150 V/ns) CMTI and no isolation ratings yet. */
+    private static final Consumer<Parts.Dr> ISO = d -> {
+        d.topology = Topology.ISOLATED;
+        d.cmti = 150e9;
+    };
+
     static Stream<Row> highSide() {
         return Stream.of(
                 row(Verdict.PASS, "low side: nothing floats", S0, D0, O0, "low side"),
@@ -266,20 +318,41 @@ class RulesTest {
                 row(Verdict.UNKNOWN, "v_offset_max_v unknown", S0, d -> d.vOffsetMax = Double.NaN, HIGH,
                         "v_offset_max_v"),
                 row(Verdict.UNKNOWN, "bus not given", S0, D0, HIGH.andThen(o -> o.bus = null), "--bus"),
-                row(Verdict.PASS, "isolated, 5 kV rms ≥ 2 × 800 V bus = 1.6 kV", S0, d -> {
-                    d.topology = Topology.ISOLATED;
-                    d.isolationVrms = 5000;
-                }, HIGH.andThen(o -> o.bus = 800.0), "5 kV", "800 V"),
-                row(Verdict.WARN, "isolated, 1 kV rms ≥ 800 V bus but < 1.6 kV", S0, d -> {
-                    d.topology = Topology.ISOLATED;
-                    d.isolationVrms = 1000;
-                }, HIGH.andThen(o -> o.bus = 800.0), "1 kV", "800 V"),
-                row(Verdict.FAIL, "isolated, 600 V rms < 800 V bus", S0, d -> {
-                    d.topology = Topology.ISOLATED;
-                    d.isolationVrms = 600;
-                }, HIGH.andThen(o -> o.bus = 800.0), "600 V", "pick a driver rated ≥ 1.6 kV"),
-                row(Verdict.UNKNOWN, "isolated with unknown isolation rating", S0, d -> d.topology = Topology.ISOLATED,
-                        HIGH, "isolation"));
+                // Isolated: V_IORM (peak working voltage, IEC 60747-17's definition; REFERENCES §9) against the
+                // bus plus the 20 % overshoot allowance (offset margin, common practice, no source). Turn-on
+                // plateau Q_gd·R/(V−V_pl) = 15 nC·(2+2+1) Ω/(10−5) V = 15 ns (REFERENCES §1), so the
+                // switch node slews 800 V/15 ns = 53.3 V/ns (48 V: 3.2 V/ns); CMTI margin 2× (common practice).
+                row(Verdict.PASS, "isolated, V_IORM 1.5 kV peak ≥ 800·1.2 = 960 V; CMTI 150 V/ns ≥ 2·53.3 V/ns", S0,
+                        ISO.andThen(d -> d.vIorm = 1500), HIGH.andThen(o -> o.bus = 800.0), "1.5 kV", "800 V", "CMTI"),
+                row(Verdict.WARN, "isolated, V_IORM 900 V peak ≥ 800 V bus but < 960 V", S0, ISO.andThen(d -> d.vIorm = 900),
+                        HIGH.andThen(o -> o.bus = 800.0), "900 V", "960 V"),
+                row(Verdict.FAIL, "isolated, V_IORM 700 V peak < 800 V bus", S0, ISO.andThen(d -> d.vIorm = 700),
+                        HIGH.andThen(o -> o.bus = 800.0), "700 V", "V_IORM ≥ 960 V"),
+                row(Verdict.WARN, "isolated, only a 5 kV rms one-minute withstand at an 800 V bus: a test level, the"
+                        + " working voltage is unknown (REFERENCES §9) — never a pass above 60 V (IEC 62368-1 ES1, from memory)",
+                        S0, ISO.andThen(d -> d.isolationVrms = 5000), HIGH.andThen(o -> o.bus = 800.0), "5 kV",
+                        "working isolation voltage", "960 V"),
+                row(Verdict.PASS, "isolated, 5 kV rms withstand at a 48 V bus (≤ 60 V): 5 kV ≥ 2·48 V; CMTI 150 V/ns ≥"
+                        + " 2·3.2 V/ns", S0, ISO.andThen(d -> d.isolationVrms = 5000), HIGH, "5 kV", "48 V"),
+                row(Verdict.WARN, "isolated, 60 V rms withstand at a 48 V bus: ≥ the bus but < 2·48 V", S0,
+                        ISO.andThen(d -> d.isolationVrms = 60), HIGH, "60 V", "48 V"),
+                row(Verdict.FAIL, "isolated, 600 V rms withstand < 800 V bus", S0, ISO.andThen(d -> d.isolationVrms = 600),
+                        HIGH.andThen(o -> o.bus = 800.0), "600 V", "V_IORM) is ≥ 960 V"),
+                row(Verdict.UNKNOWN, "isolated with unknown isolation ratings", S0, d -> d.topology = Topology.ISOLATED,
+                        HIGH, "isolation"),
+                row(Verdict.FAIL, "isolated, CMTI 40 V/ns < the 53.3 V/ns switch node", S0,
+                        ISO.andThen(d -> { d.vIorm = 1500; d.cmti = 40e9; }), HIGH.andThen(o -> o.bus = 800.0),
+                        "53.3 GV/s", "CMTI ≥ 107 GV/s"),
+                row(Verdict.WARN, "isolated, CMTI 80 V/ns ≥ 53.3 V/ns but < 2× = 107 V/ns", S0,
+                        ISO.andThen(d -> { d.vIorm = 1500; d.cmti = 80e9; }), HIGH.andThen(o -> o.bus = 800.0), "80 GV/s",
+                        "107 GV/s"),
+                row(Verdict.UNKNOWN, "isolated, working voltage fine but CMTI unknown with the dv/dt estimated", S0,
+                        ISO.andThen(d -> { d.vIorm = 1500; d.cmti = Double.NaN; }), HIGH.andThen(o -> o.bus = 800.0),
+                        "cmti_kv_us"),
+                row(Verdict.FAIL, "bootstrapped level shifter with a 2 V/ns dv/dt immunity < the 3.2 V/ns switch node", S0,
+                        d -> d.cmti = 2e9, HIGH, "3.2 GV/s", "CMTI ≥ 6.4 GV/s"),
+                row(Verdict.PASS, "bootstrapped with CMTI unknown: offset judged alone (a level shifter's immunity is"
+                        + " judged only where given)", S0, D0, HIGH, "200 V"));
     }
 
     @ParameterizedTest(name = "{0}")
