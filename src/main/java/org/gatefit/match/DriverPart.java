@@ -105,6 +105,7 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
         static final int desat = S.position("desat");
         static final int tDesat = S.position("t_desat_ns");
         static final int softOff = S.position("soft_off");
+        static final int bootClamp = S.position("boot_clamp_v");
     }
 
     /** Input senses as listed, e.g. {@code non-inverting;inverting}; the few distinct lists are decoded once. */
@@ -141,7 +142,8 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                 Double.isNaN(stock) ? -1 : (long) stock, r.si(C.price),
                 new DriverRatings(r.si(C.vIorm), r.number(C.cmti) * DriverRatings.KV_PER_US,
                         DriverRatings.uvloTotal(r.text(C.uvloMonitors)), r.si(C.iQOut), r.si(C.qLs),
-                        yesNo(r.text(C.desat)), r.si(C.tDesat), yesNo(r.text(C.softOff))));
+                        yesNo(r.text(C.desat)), r.si(C.tDesat), yesNo(r.text(C.softOff)),
+                        r.si(C.bootClamp)));
     }
 
     private static Boolean yesNo(String s) {

@@ -118,13 +118,18 @@ final class PairFigures {
             }
             if (qKnown && (!Double.isNaN(uv) || !Double.isNaN(full))) {
                 double tOn = (Double.isNaN(op.dutyMax()) ? 1 : op.dutyMax()) / op.fSw();
-                bCharge = Bootstrap.chargePerCycle(qTotal, Double.isNaN(d.iQbs()) ? 0 : d.iQbs(), tOn, 0, 0);
+                double drain = (Double.isNaN(d.iQbs()) ? 0 : d.iQbs()) + Bootstrap.LEAKAGE_ALLOWANCE;
+                double qLs = Double.isNaN(d.ratings().qLs()) ? 0 : d.ratings().qLs();
+                bCharge = Bootstrap.chargePerCycle(qTotal, drain, tOn, qLs, 0);
                 bDroop = op.vDrive() - op.diodeDrop() - bFloor;
                 if (bDroop > 0) {
+                    // Sized so that the capacitance left at its DC bias (boot-cap-bias) is still the
+                    // recommended multiple of the minimum; the duty limit is the charge balance of
+                    // that derated capacitance (REFERENCES §9), not a count of time constants.
                     bCMin = Bootstrap.minCapacitance(bCharge, bDroop);
-                    bCRec = Bootstrap.recommended(bCMin);
-                    bDuty = Bootstrap.maxDuty(Bootstrap.refreshTime(op.rBoot(), bCRec,
-                            Bootstrap.REFRESH_TIME_CONSTANTS), op.fSw());
+                    bCRec = Bootstrap.recommended(bCMin / q.m.bootCapBias());
+                    bDuty = Bootstrap.maxDutyChargeBalance(op.vDrive() - op.diodeDrop(), bFloor, op.rBoot(),
+                            bCRec * q.m.bootCapBias(), qTotal + qLs, drain, op.fSw());
                 }
             }
         }

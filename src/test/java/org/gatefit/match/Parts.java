@@ -55,6 +55,7 @@ final class Parts {
         int channels = 2;
         /** Optional ratings: V_IORM (V), CMTI (V/s), UVLO reference (null unknown, true total supply), I_q,out (A), Q_ls (C), fault protection. */
         double vIorm = Double.NaN, cmti = Double.NaN, iQOut = Double.NaN, qLs = Double.NaN, tDesat = Double.NaN;
+        double bootClamp = Double.NaN;
         Boolean uvloTotal = null, desat = null, softOff = null;
         String lifecycle = "active";
         long stock = 1000;
@@ -64,7 +65,7 @@ final class Parts {
             return new DriverPart(pn, "Testmaker", "PKG", "PKG", topology, channels, inverting, iSource, iSink, rSource,
                     rSink, vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs,
                     vNegMin, tProp, tMatch, millerClamp, isolationVrms, pMax, Lifecycle.of(lifecycle), stock, price,
-                    new DriverRatings(vIorm, cmti, uvloTotal, iQOut, qLs, desat, tDesat, softOff));
+                    new DriverRatings(vIorm, cmti, uvloTotal, iQOut, qLs, desat, tDesat, softOff, bootClamp));
         }
     }
 

@@ -64,11 +64,14 @@ class ReferenceFiguresTest {
         // §4: Q_g + I_qbs·t_on + Q_ls with Q_ls 2.5 nC folded into Q_g (it adds the same way):
         // 46.5 nC at 12 V, I_qbs 100 µA, t_on = 0.95 / 100 kHz = 9.5 µs; ΔV = 12 − 0.7 − 10.8 (UVLO,off) = 0.5 V.
         Consumer<Parts.Sw> boot = s -> {
-            s.qG = 46.5e-9;
+            s.qG = 44e-9;
             s.qGVgs = 12;
         };
+        // REFERENCES §4: 44 nC + 100 µA·9.5 µs + 2.5 nC level shift: the 100 µA is I_qbs 50 µA plus the engine's
+        // 50 µA leakage allowance (Bootstrap.LEAKAGE_ALLOWANCE), the 2.5 nC the driver's q_ls_nc.
         Consumer<Parts.Dr> bootDriver = d -> {
-            d.iQbs = 100e-6;
+            d.iQbs = 50e-6;
+            d.qLs = 2.5e-9;
             d.uvloOn = 11.2;
             d.uvloOff = 10.8;
         };
