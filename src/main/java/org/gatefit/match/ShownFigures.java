@@ -139,7 +139,7 @@ final class ShownFigures {
         add(l, "delay-time-off", delayOff, "s", "R·C_iss·ln((V_drive − V_off) / (V_pl − V_off))", false);
         add(l, "plateau-time-off", f.plateauOff(), "s", "Q_gd·R_off,total / (V_plateau − V_drive,neg)", false);
         add(l, "gate-drive-power", pGate, "W", "Q_g·ΔV·f", qEst);
-        add(l, "driver-power", f.pDriver(), "W", "share of gate power in the driver, plus high-side quiescent", qEst);
+        add(l, "driver-power", f.pDriver(), "W", "channels × (gate-power share + quiescent + level shift)", qEst);
         add(l, "gate-resistor-power", pExternal, "W", "share of gate power in the external resistors", qEst);
         add(l, "gate-internal-power", pInternal, "W", "share of gate power in the internal gate resistance", qEst);
         add(l, "gate-resistance-critical", rCrit, "Ω", "2·√(L/C) of the gate loop", false);

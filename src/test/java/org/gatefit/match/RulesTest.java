@@ -479,13 +479,29 @@ class RulesTest {
     // ------------------------------------------------------------------ driver-power
 
     static Stream<Row> driverPower() {
+        // Per package (the baseline driver has 2 channels; all switch unless --channels-used says fewer):
+        // P_G = 50 nC·10 V·100 kHz = 50 mW (REFERENCES §2); share per channel 25 mW·(2/5 + 1/4) = 16.25 mW.
+        Consumer<OperatingPoint.Spec> one = o -> o.channelsUsed = 1;
         return Stream.of(
-                row(Verdict.PASS, "P_G = 50 nC·10 V·100 kHz = 50 mW (REFERENCES §2); driver share"
-                        + " 25 mW·(2/5 + 1/4) = 16.25 mW ≤ 0.7·1 W", S0, D0, O0, "50 mW", "1 W"),
-                row(Verdict.WARN, "P_max 20 mW: 16.25 mW > 0.7·20 = 14 mW but ≤ 20 mW", S0, d -> d.pMax = 0.02, O0,
-                        "20 mW", "70 %"),
-                row(Verdict.FAIL, "P_max 10 mW < 16.25 mW", S0, d -> d.pMax = 0.01, O0, "10 mW",
+                row(Verdict.PASS, "2 channels × 16.25 mW = 32.5 mW ≤ 0.7·1 W", S0, D0, O0, "32.5 mW", "2 channels", "1 W"),
+                row(Verdict.WARN, "P_max 40 mW: 32.5 mW > 0.7·40 = 28 mW but ≤ 40 mW", S0, d -> d.pMax = 0.04, O0,
+                        "40 mW", "70 %"),
+                row(Verdict.FAIL, "P_max 20 mW < 32.5 mW for both channels", S0, d -> d.pMax = 0.02, O0, "20 mW",
                         "add external gate resistance"),
+                row(Verdict.WARN, "--channels-used 1, P_max 20 mW: 16.25 mW > 14 mW but ≤ 20 mW", S0, d -> d.pMax = 0.02,
+                        one, "16.3 mW", "1 channel"),
+                row(Verdict.WARN, "one channel with 2 mA output-side quiescent: 16.25 + 10 V·2 mA = 36.25 mW > 0.7·40 mW",
+                        S0, d -> {
+                            d.pMax = 0.04;
+                            d.iQOut = 2e-3;
+                        }, one, "36.3 mW"),
+                row(Verdict.PASS, "one high-side channel: 16.25 + I_qbs 50 µA·10 V = 16.75 mW ≤ 0.7·30 mW", S0,
+                        d -> d.pMax = 0.03, one.andThen(HIGH), "16.8 mW"),
+                row(Verdict.WARN, "plus level shift Q_ls·V_bus·f = 2 nC·48 V·100 kHz = 9.6 mW (REFERENCES §2):"
+                        + " 26.35 mW > 21 mW", S0, d -> {
+                            d.pMax = 0.03;
+                            d.qLs = 2e-9;
+                        }, one.andThen(HIGH), "26.4 mW"),
                 row(Verdict.UNKNOWN, "p_max_w unknown", S0, d -> d.pMax = Double.NaN, O0, "p_max_w"),
                 row(Verdict.UNKNOWN, "Q_g unknown", s -> s.qG = Double.NaN, D0, O0, "gate charge"));
     }
@@ -669,7 +685,7 @@ class RulesTest {
             case DRIVER_POWER -> driverPower().toList();
             case DV_DT -> dvdt().toList();
             case LIFECYCLE -> lifecycle().toList();
-            case CATALOG -> List.of();
+            case CATALOG, DESIGN -> List.of(); // stage-level rules: cli/CheckCliTest, PackageCheckCliTest
         };
     }
 
