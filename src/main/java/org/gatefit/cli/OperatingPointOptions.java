@@ -75,6 +75,11 @@ final class OperatingPointOptions {
             description = "Switch-node slew rate to check, V/ns (default: estimated as bus / turn-on plateau time).")
     String dvdt;
 
+    @Option(names = "--channels-used", paramLabel = "N",
+            description = "Channels of the driver's package that switch at this point; their dissipation adds up in the"
+                    + " package (default: all of the driver's channels).")
+    String channelsUsed;
+
     /** The option that sets a checked quantity, for warnings. */
     static String option(Plausibility.Quantity q) {
         return switch (q) {
@@ -129,6 +134,18 @@ final class OperatingPointOptions {
                 s.dvdt = v * 1e9;
             } catch (NumberFormatException e) {
                 throw new BadValueException("--dvdt: '" + dvdt + "' is not a positive number (expected V/ns, e.g. 50)");
+            }
+        }
+        if (channelsUsed != null) {
+            try {
+                int n = Integer.parseInt(channelsUsed.strip());
+                if (n < 1) {
+                    throw new NumberFormatException();
+                }
+                s.channelsUsed = n;
+            } catch (NumberFormatException e) {
+                throw new BadValueException("--channels-used: '" + channelsUsed + "' is not a whole number ≥ 1 (expected"
+                        + " how many channels of the package switch, e.g. 2)");
             }
         }
         return s;

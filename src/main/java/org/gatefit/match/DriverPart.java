@@ -19,7 +19,8 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                          double rSink, double vSupplyMin, double vSupplyMax, double uvloOn, double uvloOff,
                          double vIh, double vIl, double vInMax, double vOffsetMax, Boolean bootstrapDiode,
                          double iQbs, double vNegMin, double tProp, double tMatch, Boolean millerClamp,
-                         double isolationVrms, double pMax, Lifecycle lifecycle, long stock, double price) {
+                         double isolationVrms, double pMax, Lifecycle lifecycle, long stock, double price,
+                         DriverRatings ratings) {
 
     public DriverPart {
         Objects.requireNonNull(partNumber, "partNumber");
@@ -29,6 +30,19 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
             throw new IllegalArgumentException("expected an input polarity for " + partNumber + ", got none");
         }
         Objects.requireNonNull(lifecycle, "lifecycle");
+        Objects.requireNonNull(ratings, "ratings");
+    }
+
+    /** A driver without the optional ratings ({@link DriverRatings#UNKNOWN}). */
+    public DriverPart(String partNumber, String maker, String pinout, String packageName, Topology topology,
+                      int channels, List<Boolean> inverting, double iSource, double iSink, double rSource,
+                      double rSink, double vSupplyMin, double vSupplyMax, double uvloOn, double uvloOff,
+                      double vIh, double vIl, double vInMax, double vOffsetMax, Boolean bootstrapDiode,
+                      double iQbs, double vNegMin, double tProp, double tMatch, Boolean millerClamp,
+                      double isolationVrms, double pMax, Lifecycle lifecycle, long stock, double price) {
+        this(partNumber, maker, pinout, packageName, topology, channels, inverting, iSource, iSink, rSource, rSink,
+                vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs, vNegMin,
+                tProp, tMatch, millerClamp, isolationVrms, pMax, lifecycle, stock, price, DriverRatings.UNKNOWN);
     }
 
     /** From a catalog row of kind driver. */
@@ -83,6 +97,15 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
         static final int lifecycle = S.position("lifecycle");
         static final int stock = S.position("stock");
         static final int price = S.position("unit_price");
+        static final int vIorm = S.position("v_iorm_v");
+        static final int cmti = S.position("cmti_kv_us");
+        static final int uvloMonitors = S.position("uvlo_monitors");
+        static final int iQOut = S.position("i_q_out_ma");
+        static final int qLs = S.position("q_ls_nc");
+        static final int desat = S.position("desat");
+        static final int tDesat = S.position("t_desat_ns");
+        static final int softOff = S.position("soft_off");
+        static final int bootClamp = S.position("boot_clamp_v");
     }
 
     /** Input senses as listed, e.g. {@code non-inverting;inverting}; the few distinct lists are decoded once. */
@@ -116,7 +139,11 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                 r.si(C.vInMax), r.si(C.vOffsetMax), yesNo(r.text(C.bootstrapDiode)), r.si(C.iQbs),
                 r.si(C.vNegMin), r.si(C.tProp), r.si(C.tMatch), yesNo(r.text(C.millerClamp)),
                 r.si(C.isolation), r.si(C.pMax), Lifecycle.of(life),
-                Double.isNaN(stock) ? -1 : (long) stock, r.si(C.price));
+                Double.isNaN(stock) ? -1 : (long) stock, r.si(C.price),
+                new DriverRatings(r.si(C.vIorm), r.number(C.cmti) * DriverRatings.KV_PER_US,
+                        DriverRatings.uvloTotal(r.text(C.uvloMonitors)), r.si(C.iQOut), r.si(C.qLs),
+                        yesNo(r.text(C.desat)), r.si(C.tDesat), yesNo(r.text(C.softOff)),
+                        r.si(C.bootClamp)));
     }
 
     private static Boolean yesNo(String s) {

@@ -4,9 +4,13 @@ import java.util.List;
 import org.gatefit.match.Check.Comparison;
 
 /**
- * {@code driver-power}: the share of the gate-drive power Q_g·ΔV·f dissipated in the driver (its
- * output resistance against the external and internal gate resistance; REFERENCES.md §2), plus the
- * high side's quiescent power, against the package limit derated by the driver-power margin.
+ * {@code driver-power}: per package, not per channel: each channel that switches (all of the
+ * driver's unless {@code --channels-used} says fewer; one per stage in {@code check}, where the
+ * stages on one designator are then added up) adds the share of the gate-drive power Q_g·ΔV·f
+ * dissipated in the driver (its output resistance against the external and internal gate
+ * resistance; REFERENCES.md §2), the high side's quiescent power, the output-side quiescent power
+ * (supply × {@code i_q_out_ma}) and a high side's level-shifter loss ({@code q_ls_nc} × bus × f),
+ * against the package limit derated by the driver-power margin.
  */
 final class DriverPowerRule implements PairRule {
     enum Why implements Reason { NO_CHARGE, NO_LIMIT, OVER_LIMIT, HOT, COOL }
@@ -37,9 +41,10 @@ final class DriverPowerRule implements PairRule {
         }
         double pMax = f.d().pMax();
         double allowed = pMax * f.m().driverPower();
-        String est = Eng.of(f.pDriver(), "W") + " in the driver (of " + Eng.of(shown.pGate, "W") + " gate-drive power at "
-                + Eng.of(f.op().fSw(), "Hz") + (f.rSrcEstimated() || f.rSnkEstimated() ? ", output resistance estimated as V/I_peak" : "")
-                + ")";
+        int ch = PairFigures.channelsUsed(f.d(), f.op());
+        String est = Eng.of(f.pDriver(), "W") + " in the driver package (" + (ch == 1 ? "1 channel" : ch + " channels alike")
+                + " switching, each " + Eng.of(shown.pGate, "W") + " gate-drive power at " + Eng.of(f.op().fSw(), "Hz")
+                + (f.rSrcEstimated() || f.rSnkEstimated() ? ", output resistance estimated as V/I_peak" : "") + ")";
         List<Comparison> cmp = List.of(new Comparison("driver dissipation", f.pDriver(), "≤", allowed, "W"));
         return switch (w) {
             case NO_CHARGE -> throw new IllegalStateException("worded above");

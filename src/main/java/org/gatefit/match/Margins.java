@@ -26,12 +26,26 @@ import java.util.Map;
  *                         (default 0.7, for ambient temperature derating; common practice)
  * @param dvdt             Miller-induced gate voltage plus off level may reach this fraction of
  *                         V_th,min to pass (default 0.7; common practice, no source)
+ * @param cmti             a floating output's common-mode transient immunity must be this many times
+ *                         the estimated switch-node dv/dt to pass (default 2: the estimate is the
+ *                         average slew over the transition, the peak is steeper; common practice,
+ *                         no source)
+ * @param uvloPlateau      the gate level at UVLO lock-out must exceed the Miller plateau by this
+ *                         fraction to pass (default 0.15: the plateau rises with current above the
+ *                         datasheet's test current and with temperature; common practice, no source)
+ * @param bootCapBias      fraction of a bootstrap capacitor's nominal capacitance left at its
+ *                         working DC bias (default 0.5: high-K MLCCs lose 30–70 % at rated bias,
+ *                         REFERENCES.md §9, from memory; use the part's curve where known)
+ * @param protectionBus    bus voltage above which an IGBT or SiC stage is expected to have
+ *                         desaturation or over-current detection (default 100 V; common practice,
+ *                         no source)
  */
 public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadroom, double logicNoise, double offset,
-                      double isolation, double driverPower, double dvdt) {
+                      double isolation, double driverPower, double dvdt, double cmti, double uvloPlateau,
+                      double bootCapBias, double protectionBus) {
 
     /** The defaults documented above. */
-    public static final Margins DEFAULT = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7);
+    public static final Margins DEFAULT = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100);
 
     public Margins {
         check("drive-current", driveCurrent, 1, 100);
@@ -42,6 +56,17 @@ public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadr
         check("isolation", isolation, 1, 100);
         check("driver-power", driverPower, 0.01, 1);
         check("dv-dt", dvdt, 0.01, 1);
+        check("cmti", cmti, 1, 100);
+        check("uvlo-plateau", uvloPlateau, 0, 1);
+        check("boot-cap-bias", bootCapBias, 0.05, 1);
+        check("protection-bus", protectionBus, 0, 10000);
+    }
+
+    /** The margins of a map in {@link #asMap}'s order and names. */
+    private static Margins of(Map<String, Double> v) {
+        return new Margins(v.get("drive-current"), v.get("gate-headroom"), v.get("uvlo-headroom"), v.get("logic-noise"),
+                v.get("offset"), v.get("isolation"), v.get("driver-power"), v.get("dv-dt"), v.get("cmti"),
+                v.get("uvlo-plateau"), v.get("boot-cap-bias"), v.get("protection-bus"));
     }
 
     private static void check(String name, double v, double lo, double hi) {
@@ -62,14 +87,18 @@ public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadr
         m.put("isolation", isolation);
         m.put("driver-power", driverPower);
         m.put("dv-dt", dvdt);
+        m.put("cmti", cmti);
+        m.put("uvlo-plateau", uvloPlateau);
+        m.put("boot-cap-bias", bootCapBias);
+        m.put("protection-bus", protectionBus);
         return m;
     }
 
     /** Units of the margins, for printing: × for factors, V for volts, blank for fractions. */
     public static String unitOf(String name) {
         return switch (name) {
-            case "drive-current", "isolation" -> "×";
-            case "uvlo-headroom", "logic-noise" -> "V";
+            case "drive-current", "isolation", "cmti" -> "×";
+            case "uvlo-headroom", "logic-noise", "protection-bus" -> "V";
             default -> "";
         };
     }
@@ -88,17 +117,12 @@ public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadr
             throw new IllegalArgumentException("expected a number after '" + name + "=', got '"
                     + assignment.substring(eq + 1) + "'");
         }
-        return switch (name) {
-            case "drive-current" -> new Margins(v, gateHeadroom, uvloHeadroom, logicNoise, offset, isolation, driverPower, dvdt);
-            case "gate-headroom" -> new Margins(driveCurrent, v, uvloHeadroom, logicNoise, offset, isolation, driverPower, dvdt);
-            case "uvlo-headroom" -> new Margins(driveCurrent, gateHeadroom, v, logicNoise, offset, isolation, driverPower, dvdt);
-            case "logic-noise" -> new Margins(driveCurrent, gateHeadroom, uvloHeadroom, v, offset, isolation, driverPower, dvdt);
-            case "offset" -> new Margins(driveCurrent, gateHeadroom, uvloHeadroom, logicNoise, v, isolation, driverPower, dvdt);
-            case "isolation" -> new Margins(driveCurrent, gateHeadroom, uvloHeadroom, logicNoise, offset, v, driverPower, dvdt);
-            case "driver-power" -> new Margins(driveCurrent, gateHeadroom, uvloHeadroom, logicNoise, offset, isolation, v, dvdt);
-            case "dv-dt" -> new Margins(driveCurrent, gateHeadroom, uvloHeadroom, logicNoise, offset, isolation, driverPower, v);
-            default -> throw new IllegalArgumentException("unknown margin '" + name + "' (expected one of "
-                    + String.join(", ", asMap().keySet()) + ")");
-        };
+        Map<String, Double> values = asMap();
+        if (!values.containsKey(name)) {
+            throw new IllegalArgumentException("unknown margin '" + name + "' (expected one of "
+                    + String.join(", ", values.keySet()) + ")");
+        }
+        values.put(name, v);
+        return of(values);
     }
 }

@@ -29,11 +29,13 @@ import org.gatefit.physics.LogicFamily;
  * @param dvdt       switch-node slew rate to check against, V/s (NaN: estimate from the pair)
  * @param bootAssumed whether the bootstrap diode drop or resistance was assumed (said by the bootstrap check)
  * @param assumed    what was assumed, one line each
+ * @param channelsUsed how many channels of the driver's package switch at this point (their
+ *                   dissipation adds up in the package); 0: all of the driver's channels
  */
 public record OperatingPoint(boolean highSide, double bus, double fSw, double edge, double vDrive, double vDriveNeg,
                              LogicFamily logic, double vOh, double vOl, double vOhMax, boolean activeHigh, double rG,
                              double rGOff, double dutyMax, int parallel, double loop, double diodeDrop, double rBoot,
-                             double dvdt, boolean bootAssumed, List<String> assumed) {
+                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed) {
 
     /** Gate-loop inductance assumed when none is given (REFERENCES.md §3: 10–20 nH leaded, from memory). */
     public static final double DEFAULT_LOOP = 10e-9;
@@ -57,6 +59,9 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         }
         if (!Double.isNaN(dutyMax) && (dutyMax < 0 || dutyMax > 1)) {
             throw new IllegalArgumentException("expected a duty cycle from 0 to 1, got " + dutyMax);
+        }
+        if (channelsUsed < 0) {
+            throw new IllegalArgumentException("expected at least 1 channel used (0: all), got " + channelsUsed);
         }
         if (!(rG >= 0) || !(rGOff >= 0)) {
             throw new IllegalArgumentException("expected gate resistors ≥ 0 Ω, got " + rG + " / " + rGOff);
@@ -97,6 +102,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         public Double diodeDrop;
         public Double rBoot;
         public Double dvdt;
+        /** Channels of the driver's package that switch (null: all). */
+        public Integer channelsUsed;
 
         /**
          * What a stage-sheet row (or the same columns typed on the command line) gives; empty
@@ -157,6 +164,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.diodeDrop = diodeDrop;
             s.rBoot = rBoot;
             s.dvdt = dvdt;
+            s.channelsUsed = channelsUsed;
             return s;
         }
 
@@ -236,7 +244,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             return new OperatingPoint(hs, bus == null ? Double.NaN : bus, fSw, e, on, off, fam, oh, ol, ohMax,
                     activeHigh == null || activeHigh, rg, rgOff, dutyMax == null ? Double.NaN : dutyMax,
                     parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt,
-                    diodeDrop == null || rBoot == null, a);
+                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed);
         }
     }
 }

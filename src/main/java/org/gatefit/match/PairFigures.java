@@ -95,9 +95,10 @@ final class PairFigures {
                 : Double.NaN;
 
         // Only the driver's share is ruled on (driver-power); the split's other shares are shown figures.
+        // Per package: each channel that switches at this point adds its share, quiescent and level-shift loss.
         double pDriver = qKnown && rOnTot > 0 && rOffTot > 0
-                ? GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n, op.rGOff() / n, rInt / n)
-                        + highSideQuiescent(d, op) : Double.NaN;
+                ? channelsUsed(d, op) * (GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n,
+                        op.rGOff() / n, rInt / n) + highSideQuiescent(d, op) + channelExtras(d, op)) : Double.NaN;
 
         double bCharge = Double.NaN;
         double bDroop = Double.NaN;
@@ -118,13 +119,18 @@ final class PairFigures {
             }
             if (qKnown && (!Double.isNaN(uv) || !Double.isNaN(full))) {
                 double tOn = (Double.isNaN(op.dutyMax()) ? 1 : op.dutyMax()) / op.fSw();
-                bCharge = Bootstrap.chargePerCycle(qTotal, Double.isNaN(d.iQbs()) ? 0 : d.iQbs(), tOn, 0, 0);
+                double drain = (Double.isNaN(d.iQbs()) ? 0 : d.iQbs()) + Bootstrap.LEAKAGE_ALLOWANCE;
+                double qLs = Double.isNaN(d.ratings().qLs()) ? 0 : d.ratings().qLs();
+                bCharge = Bootstrap.chargePerCycle(qTotal, drain, tOn, qLs, 0);
                 bDroop = op.vDrive() - op.diodeDrop() - bFloor;
                 if (bDroop > 0) {
+                    // Sized so that the capacitance left at its DC bias (boot-cap-bias) is still the
+                    // recommended multiple of the minimum; the duty limit is the charge balance of
+                    // that derated capacitance (REFERENCES §9), not a count of time constants.
                     bCMin = Bootstrap.minCapacitance(bCharge, bDroop);
-                    bCRec = Bootstrap.recommended(bCMin);
-                    bDuty = Bootstrap.maxDuty(Bootstrap.refreshTime(op.rBoot(), bCRec,
-                            Bootstrap.REFRESH_TIME_CONSTANTS), op.fSw());
+                    bCRec = Bootstrap.recommended(bCMin / q.m.bootCapBias());
+                    bDuty = Bootstrap.maxDutyChargeBalance(op.vDrive() - op.diodeDrop(), bFloor, op.rBoot(),
+                            bCRec * q.m.bootCapBias(), qTotal + qLs, drain, op.fSw());
                 }
             }
         }
@@ -175,6 +181,25 @@ final class PairFigures {
     private static double highSideQuiescent(DriverPart d, OperatingPoint op) {
         return op.highSide() && d.topology().bootstrapped() && !Double.isNaN(d.iQbs())
                 ? GatePower.highSideQuiescent(op.vDrive(), d.iQbs()) : 0;
+    }
+
+    /** Channels of the package switching at this point: as asked, else all of the driver's (at least 1). */
+    static int channelsUsed(DriverPart d, OperatingPoint op) {
+        return op.channelsUsed() > 0 ? op.channelsUsed() : Math.max(1, d.channels());
+    }
+
+    /**
+     * A channel's output-side quiescent power (supply × i_q_out_ma) and, on the high side, its
+     * level-shifter loss (q_ls_nc × bus × f; REFERENCES.md §2), W; 0 where unknown.
+     */
+    static double channelExtras(DriverPart d, OperatingPoint op) {
+        double iq = d.ratings().iQOut();
+        double p = Double.isNaN(iq) ? 0 : op.swing() * iq;
+        double qLs = d.ratings().qLs();
+        if (op.highSide() && !Double.isNaN(qLs) && !Double.isNaN(op.bus())) {
+            p += GatePower.levelShift(op.bus(), qLs, op.fSw());
+        }
+        return p;
     }
 
     /** The voltage step of the switch node that the Miller current integrates over: the bus, or 1 µs of the slew without one. */

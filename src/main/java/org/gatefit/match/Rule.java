@@ -13,7 +13,8 @@ public enum Rule {
     DRIVER_POWER("driver-power", 1, "driver dissipation against its package limit"),
     DV_DT("dv-dt", 1, "Miller-induced gate voltage against the threshold"),
     LIFECYCLE("lifecycle", 0, "production status and stock of both parts"),
-    CATALOG("catalog", 0, "both parts are in the catalog");
+    CATALOG("catalog", 0, "both parts are in the catalog"),
+    DESIGN("design", 0, "one driver package used consistently across the stages of a check");
 
     private final String id;
     private final int weight;
@@ -35,7 +36,7 @@ public enum Rule {
      * side or has the wrong input sense or supply range is wrong in kind, before a UVLO or a drive
      * current that is merely too small). Common practice, no source.
      */
-    private static final java.util.List<Rule> FUNDAMENTAL = java.util.List.of(CATALOG, HIGH_SIDE, POLARITY,
+    private static final java.util.List<Rule> FUNDAMENTAL = java.util.List.of(CATALOG, DESIGN, HIGH_SIDE, POLARITY,
             GATE_VOLTAGE, NEGATIVE_BIAS, LOGIC_LEVEL, UVLO, DRIVE_CURRENT, BOOTSTRAP, DRIVER_POWER, DV_DT, LIFECYCLE);
 
     static {

@@ -139,7 +139,7 @@ final class ShownFigures {
         add(l, "delay-time-off", delayOff, "s", "R·C_iss·ln((V_drive − V_off) / (V_pl − V_off))", false);
         add(l, "plateau-time-off", f.plateauOff(), "s", "Q_gd·R_off,total / (V_plateau − V_drive,neg)", false);
         add(l, "gate-drive-power", pGate, "W", "Q_g·ΔV·f", qEst);
-        add(l, "driver-power", f.pDriver(), "W", "share of gate power in the driver, plus high-side quiescent", qEst);
+        add(l, "driver-power", f.pDriver(), "W", "channels × (gate-power share + quiescent + level shift)", qEst);
         add(l, "gate-resistor-power", pExternal, "W", "share of gate power in the external resistors", qEst);
         add(l, "gate-internal-power", pInternal, "W", "share of gate power in the internal gate resistance", qEst);
         add(l, "gate-resistance-critical", rCrit, "Ω", "2·√(L/C) of the gate loop", false);
@@ -147,11 +147,13 @@ final class ShownFigures {
         add(l, "gate-resistor-min", rgMin, "Ω", "per switch, for damping ζ ≥ " + DAMPING_TARGET, false);
         add(l, "gate-resistor-max", rgMax, "Ω", "per switch, for the target edge with the drive-current margin", false);
         add(l, "gate-resistor-recommended", rgRecommended, "Ω", "IEC 60063 E24 value in the range", false);
-        add(l, "bootstrap-charge", f.bootCharge(), "C", "Q_g + I_qbs·t_on,max per cycle", qEst);
+        add(l, "bootstrap-charge", f.bootCharge(), "C", "Q_g + Q_ls + (I_qbs + " + Eng.of(Bootstrap.LEAKAGE_ALLOWANCE, "A")
+                + " leakage)·t_on,max per cycle", qEst);
         add(l, "bootstrap-capacitance-min", f.bootCMin(), "F", "Q / allowed droop", qEst);
         add(l, "bootstrap-capacitance-recommended", f.bootCRec(), "F", Eng.num(Bootstrap.RECOMMENDED_FACTOR)
-                + "× the minimum, E12 (common practice)", qEst);
-        add(l, "bootstrap-duty-max", f.bootDutyMax(), "1", "1 − 3·R_boot·C_boot·f", false);
+                + "× the minimum at " + Eng.pct(q.m.bootCapBias()) + " of nominal left at DC bias, E12", qEst);
+        add(l, "bootstrap-duty-max", f.bootDutyMax(), "1", "charge balance: lowest voltage ≥ the high side's floor",
+                false);
         add(l, "bootstrap-inrush", bootInrush, "A", "(V_drive − V_F) / R_boot at first charge", false);
         add(l, "noise-margin-high", f.nmHigh(), "V", "V_OH − V_IH", false);
         add(l, "noise-margin-low", f.nmLow(), "V", "V_IL − V_OL", false);

@@ -107,6 +107,8 @@ public final class StageCheck {
             progress.accept(out.size());
         }
         out = deadTime(out, pn -> driverCache.computeIfAbsent(pn, drivers));
+        out = PackageCheck.apply(out, pn -> driverCache.computeIfAbsent(pn, drivers),
+                pn -> switchCache.computeIfAbsent(pn, switches), m);
         return new Report(file, out, bom == null ? List.of() : bom.notes(), m);
     }
 
@@ -163,7 +165,9 @@ public final class StageCheck {
         SwitchPart sp = SwitchPart.of(switches.apply(s.pn()).orElseThrow());
         OperatingPoint op;
         try {
-            op = OperatingPoint.Spec.fromStage(st).resolve(sp);
+            OperatingPoint.Spec spec = OperatingPoint.Spec.fromStage(st);
+            spec.channelsUsed = 1; // a stage is one channel; PackageCheck adds up the stages of one package
+            op = spec.resolve(sp);
         } catch (IllegalArgumentException e) {
             Check c = new Check(Rule.CATALOG, Verdict.FAIL, "the stage's operating point cannot be used: " + e.getMessage(),
                     List.of(), 0);

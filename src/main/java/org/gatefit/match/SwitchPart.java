@@ -12,12 +12,25 @@ public record SwitchPart(String partNumber, String maker, String pinout, String 
                          boolean nChannel, double vBlock, double iCont, double rOn, double rOnVgs, double vCeSat,
                          double vThMin, double vThMax, double vGsMax, double vGsMin, double vGateOn,
                          double vGateOff, double qG, double qGVgs, double qGs, double qGd, double vPlateau,
-                         double cIss, double cRss, double rGInt, Lifecycle lifecycle, long stock, double price) {
+                         double cIss, double cRss, double rGInt, Lifecycle lifecycle, long stock, double price,
+                         SwitchRatings ratings) {
 
     public SwitchPart {
         Objects.requireNonNull(partNumber, "partNumber");
         Objects.requireNonNull(technology, "technology");
         Objects.requireNonNull(lifecycle, "lifecycle");
+        Objects.requireNonNull(ratings, "ratings");
+    }
+
+    /** A switch without the optional ratings ({@link SwitchRatings#UNKNOWN}). */
+    public SwitchPart(String partNumber, String maker, String pinout, String packageName, Technology technology,
+                      boolean nChannel, double vBlock, double iCont, double rOn, double rOnVgs, double vCeSat,
+                      double vThMin, double vThMax, double vGsMax, double vGsMin, double vGateOn,
+                      double vGateOff, double qG, double qGVgs, double qGs, double qGd, double vPlateau,
+                      double cIss, double cRss, double rGInt, Lifecycle lifecycle, long stock, double price) {
+        this(partNumber, maker, pinout, packageName, technology, nChannel, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
+                vThMax, vGsMax, vGsMin, vGateOn, vGateOff, qG, qGVgs, qGs, qGd, vPlateau, cIss, cRss, rGInt, lifecycle,
+                stock, price, SwitchRatings.UNKNOWN);
     }
 
     /** From a catalog row of kind switch. */
@@ -32,7 +45,8 @@ public record SwitchPart(String partNumber, String maker, String pinout, String 
                 r.si("v_gate_off_v"), r.si("q_g_nc"), r.si("q_g_vgs_v"), r.si("q_gs_nc"), r.si("q_gd_nc"),
                 r.si("v_plateau_v"), r.si("c_iss_pf"), r.si("c_rss_pf"), r.si("r_g_int_ohm"),
                 Lifecycle.of(r.text("lifecycle")),
-                Double.isNaN(r.number("stock")) ? -1 : (long) r.number("stock"), r.si("unit_price"));
+                Double.isNaN(r.number("stock")) ? -1 : (long) r.number("stock"), r.si("unit_price"),
+                new SwitchRatings(r.si("v_gate_on_max_v"), r.si("v_gate_off_min_v"), r.si("t_sc_us")));
     }
 
     /** Internal gate resistance, 0 when unknown (the message of a check says when it was assumed). */

@@ -14,7 +14,15 @@ package org.gatefit.physics;
  *       with about ten times C_boot (common practice).</li>
  *   <li>Refresh: the capacitor charges only while the switch node is low, so 100 % duty is
  *       impossible; with an n·τ refresh ({@code τ = R_boot·C_boot}),
- *       {@code D_max ≈ 1 − n·τ·f}.</li>
+ *       {@code D_max ≈ 1 − n·τ·f} (a rule of thumb, kept for comparison).</li>
+ *   <li>Steady-state charge balance (REFERENCES §9; plain circuit theory): each cycle the
+ *       capacitor gives {@code Q_on = Q_g + Q_ls + I·t_on} and, while the switch node is low,
+ *       charges through R_boot and the diode toward {@code V_S − I·R_boot} ({@code V_S = V_DD − V_F},
+ *       I the steady drain) with {@code k = e^(−t_off/(R_boot·C))}; the fixed point of
+ *       {@code V_hi = V_S' − (V_S' − V_lo)·k}, {@code V_lo = V_hi − Q_on/C} is the lowest voltage
+ *       {@code V_lo = V_S − I·R_boot − Q_on / (C·(1 − k))} ({@link #steadyLowest}); the largest duty
+ *       keeping it at or above the high side's floor is {@link #maxDutyChargeBalance}. A
+ *       cycle-by-cycle integration confirms it ({@code BootstrapTest}).</li>
  *   <li>First-charge inrush {@code (V_DD − V_F) / R_boot}.</li>
  *   <li>The diode blocks the bus voltage when the switch node is high, so its reverse rating must
  *       be at least V_bus (plus any switch-node overshoot); use a fast- or ultrafast-recovery
@@ -28,6 +36,13 @@ public final class Bootstrap {
 
     /** Common practice, no source: the V_DD decoupling capacitor is about ten times C_boot. */
     public static final double DECOUPLING_FACTOR = 10;
+
+    /**
+     * Steady leakage drawn from the bootstrap capacitor besides the driver's quiescent current:
+     * a fast-recovery bootstrap diode's reverse current when hot, tens of µA (from memory; MLCC
+     * leakage is negligible beside it), A.
+     */
+    public static final double LEAKAGE_ALLOWANCE = 50e-6;
 
     /** Common practice, no source: the capacitor counts as refreshed after three time constants. */
     public static final double REFRESH_TIME_CONSTANTS = 3;
@@ -145,5 +160,70 @@ public final class Bootstrap {
         Require.nonNegative("bus voltage", "V", busVoltage);
         Require.nonNegative("overshoot allowance", "V", overshoot);
         return busVoltage + overshoot;
+    }
+
+    /**
+     * Lowest capacitor voltage in steady state, {@code V_S − I·R − Q_on / (C·(1 − e^(−t_off/(R·C))))}
+     * (the class comment's charge balance); {@code R = 0} refreshes fully, {@code V_S − Q_on/C}.
+     *
+     * @param vCharge what the capacitor charges toward, V_DD − V_F, V
+     * @param resistance bootstrap resistance R_boot, Ω (≥ 0)
+     * @param capacitance effective capacitance at its DC bias, F (&gt; 0)
+     * @param chargeOn charge taken while the high side is on, Q_g + Q_ls + I·t_on, C (≥ 0)
+     * @param drain steady drain (quiescent plus leakage), A (≥ 0)
+     * @param offTime time the switch node is low, s (≥ 0)
+     * @return lowest voltage, V (−∞ when the capacitor is never refreshed)
+     */
+    public static double steadyLowest(double vCharge, double resistance, double capacitance, double chargeOn,
+            double drain, double offTime) {
+        Require.finite("charging voltage V_DD − V_F", "V", vCharge);
+        Require.nonNegative("bootstrap resistance", "Ω", resistance);
+        Require.positive("bootstrap capacitance", "F", capacitance);
+        Require.nonNegative("charge per cycle", "C", chargeOn);
+        Require.nonNegative("drain current", "A", drain);
+        Require.nonNegative("off time", "s", offTime);
+        double refreshed = resistance == 0 ? (offTime > 0 ? 1 : 0)
+                : -Math.expm1(-offTime / (resistance * capacitance));
+        if (refreshed <= 0) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        return vCharge - drain * resistance - chargeOn / (capacitance * refreshed);
+    }
+
+    /**
+     * The largest high-side duty whose steady-state lowest voltage ({@link #steadyLowest}) stays at
+     * or above {@code floor}: the lowest voltage falls as the duty rises (more on-time drain, less
+     * refresh time), so the limit is found by bisection to 1e-9. 0 when even a vanishing duty fails.
+     *
+     * @param vCharge V_DD − V_F, V
+     * @param floor the high side's floor (UVLO falling, full enhancement), V
+     * @param resistance R_boot, Ω
+     * @param capacitance effective capacitance, F
+     * @param chargeFixed charge taken at each turn-on, Q_g + Q_ls, C
+     * @param drain steady drain, A
+     * @param frequency switching frequency, Hz
+     * @return maximum duty, 0 … 1 (exclusive of 1)
+     */
+    public static double maxDutyChargeBalance(double vCharge, double floor, double resistance, double capacitance,
+            double chargeFixed, double drain, double frequency) {
+        Require.positive("switching frequency f", "Hz", frequency);
+        Require.finite("floor", "V", floor);
+        double period = 1 / frequency;
+        java.util.function.DoubleUnaryOperator low = d -> steadyLowest(vCharge, resistance, capacitance,
+                chargeFixed + drain * d * period, drain, (1 - d) * period);
+        if (low.applyAsDouble(0) < floor) {
+            return 0;
+        }
+        double lo = 0;
+        double hi = 1;
+        for (int i = 0; i < 60 && hi - lo > 1e-9; i++) {
+            double mid = (lo + hi) / 2;
+            if (low.applyAsDouble(mid) >= floor) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
     }
 }

@@ -74,25 +74,27 @@ class ReplaceCliTest {
 
     /*
      * Stage sheet: TST-S100 as Q1 (high side) and Q2 (low side) on U1 = TST-HB1; a third stage (Q3 =
-     * TST-S080) does not use it. 48 V bus, 20 kHz, duty ≤ 0.96, 12 V / 0 V drive, V_F 0.7 V, R_boot 2.2 Ω.
+     * TST-S080) does not use it. 48 V bus, 20 kHz, duty ≤ 0.96, 12 V / 0 V drive, V_F 0.7 V, R_boot 20 Ω.
      *
-     * Bootstrap (REFERENCES.md §4): t_on,max = 0.96 / 20 kHz = 48 µs; Q = Q_g + I_qbs·t_on = Q_g + 50 µA·48 µs
-     * = Q_g + 2.4 nC; droop ΔV = V_DD − V_F − UVLO,off = 12 − 0.7 − 10.0 = 1.3 V (which is also the 10 V
-     * full-enhancement level of r_on_vgs_v, so both floors agree); C_min = Q / ΔV; choose 3·C_min
-     * ("several times the minimum", REFERENCES.md §4) rounded up to IEC 60063 E12; refresh 3τ:
-     * D_max = 1 − 3·R_boot·C·f.
-     *   TST-S100 : Q 102.4 nC → C_min 78.8 nF → 236 nF → 270 nF → D_max = 1 − 3·2.2·270n·20k = 0.9644 ≥ 0.96 pass
-     *   TST-S100B: Q  97.4 nC → 74.9 nF → 225 nF → 270 nF → 0.9644 pass (stays drop-in)
-     *   TST-S100H: Q 120.4 nC → 92.6 nF → 278 nF → 330 nF → D_max = 1 − 3·2.2·330n·20k = 0.9564 < 0.96 FAIL
-     *   TST-S100Q: Q 152.4 nC → 117 nF → 352 nF → 390 nF → 0.9485 FAIL
+     * Bootstrap (REFERENCES.md §4, §9): t_on,max = 0.96 / 20 kHz = 48 µs; Q = Q_g + (I_qbs 50 µA + 50 µA leakage
+     * allowance)·t_on = Q_g + 4.8 nC; droop ΔV = V_DD − V_F − UVLO,off = 12 − 0.7 − 10.0 = 1.3 V (which is also the
+     * 10 V full-enhancement level of r_on_vgs_v, so both floors agree); C_min = Q / ΔV; choose 3·C_min at half its
+     * nominal value left at DC bias (boot-cap-bias 0.5) → E12 above 6·C_min; duty limit from the steady-state
+     * charge balance with C_eff = nominal / 2: 11.3 − 100 µA·20 Ω − (Q_g + 100 µA·D·50 µs) / (C_eff·(1 −
+     * e^(−(1−D)·50 µs/(20 Ω·C_eff)))) ≥ 10 V (solved numerically; BootstrapBalanceTest holds the closed form to a
+     * cycle-by-cycle simulation):
+     *   TST-S100 : C_min 80.6 nF → 560 nF → D_max 0.9619 ≥ 0.96 pass
+     *   TST-S100B: 76.8 nF → 470 nF → 0.9627 pass (stays drop-in)
+     *   TST-S100H: 94.5 nF → 680 nF → 0.9557 < 0.96 FAIL
+     *   TST-S100Q: 119 nF → 820 nF → 0.9437 FAIL
      * The other rules keep their verdicts, e.g. drive current: peak source min(4 A, 12 V / (1.5 + 2.2 + 1.0) Ω)
      * = 2.55 A against 1.5 × Q/edge = 1.5 × 118 nC / 100 ns = 1.77 A for S100H (REFERENCES.md §1) → pass.
      */
     static final String STAGES = """
             stage,driver,switch,side,bus_v,f_sw_khz,edge_ns,v_drive_v,v_drive_neg_v,logic,pwm_sense,r_g_ohm,r_g_off_ohm,duty_max,parallel,loop_nh,v_f_boot_v,r_boot_ohm
-            HS,U1,Q1,high,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,2.2
-            LS,U1,Q2,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,2.2
-            OTHER,U2,Q3,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,2.2
+            HS,U1,Q1,high,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
+            LS,U1,Q2,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
+            OTHER,U2,Q3,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
             """;
 
     static final String BOM = """
@@ -255,7 +257,7 @@ class ReplaceCliTest {
         assertEquals(List.of("HS", "LS"), st, "Q1 and Q2 are TST-S100 in the BOM; OTHER uses TST-S080");
 
         JsonNode b = candidate(r, "TST-S100B");
-        assertEquals("drop-in", b.get("grade").asText(), "D_max 0.9644 ≥ 0.96: " + b);
+        assertEquals("drop-in", b.get("grade").asText(), "D_max 0.9627 ≥ 0.96: " + b);
         assertEquals(0, b.get("checks").size(), "every rule passes in both stages: " + b.get("checks"));
         assertEquals("TST-S100B", order(r).get(0));
 
@@ -267,13 +269,13 @@ class ReplaceCliTest {
         JsonNode c = checks.get(0);
         assertEquals(List.of("HS", "bootstrap", "fail", "pass"), List.of(c.get("stage").asText(), c.get("rule").asText(),
                 c.get("verdict").asText(), c.get("was").asText()));
-        // 330 nF recommended, D_max 95.6 % (hand derivation in the STAGES comment).
-        assertTrue(c.get("message").asText().contains("330 nF"), c.toString());
+        // 680 nF recommended, D_max 95.6 % (derivation in the STAGES comment).
+        assertTrue(c.get("message").asText().contains("680 nF"), c.toString());
         assertTrue(c.get("message").asText().contains("95.6 %"), c.toString());
 
         JsonNode q = candidate(r, "TST-S100Q");
         assertEquals("pin-compatible", q.get("grade").asText());
-        assertTrue(q.get("checks").toString().contains("390 nF"), q.get("checks").toString());
+        assertTrue(q.get("checks").toString().contains("820 nF"), q.get("checks").toString());
 
         // Same die, other pinout: same pairing results as the original, so it stays functional.
         JsonNode f = candidate(r, "TST-S100D7");
@@ -310,40 +312,26 @@ class ReplaceCliTest {
     }
 
     @Test
-    void theExampleLargerDieFailsTheBootstrapInEveryHighSideStage() throws Exception {
+    void theExampleLargerDiePassesTheBootstrapByChargeBalanceAndStaysPinCompatible() throws Exception {
         Path c = exampleCatalog();
         JsonNode r = json(CliRun.on(c, "replace", "CVL-1025TL", "--stages", Project.file("examples/stages.csv").toString(),
                 "--bom", Project.file("examples/bom.csv").toString(), "--format", "json"));
-        // The high-side stages that use Q1-Q6 (CVL-1025TL in the BOM), read from the sheet itself.
-        List<String> highSide = new ArrayList<>();
-        for (CSVRecord rec : records(Project.file("examples/stages.csv"))) {
-            if (rec.get("side").equals("high") && rec.get("switch").matches("Q[1-6]")) {
-                highSide.add(rec.get("stage"));
-            }
-        }
-        assertEquals(List.of("MC-UH", "MC-VH", "MC-WH"), highSide);
         /*
-         * Hand derivation for MC-UH (PGL-HB1046, I_qbs 65 µA, UVLO off 6.6 V; 12 V, 20 kHz, duty 0.95, V_F 0.7 V
-         * and R_boot 2.2 Ω assumed). Q_g at 12 V from the 10 V figure, slope above the plateau
-         * (Q_g − Q_gs − Q_gd) / (V_spec − V_pl) (REFERENCES.md §1 gate-charge curve):
-         *   CVL-1018TL: 160 + (160 − 51 − 37) / (10 − 4.8) · 2 = 187.7 nC; + 65 µA · 47.5 µs = 3.1 nC → 190.8 nC.
-         * The engine keeps the bootstrapped gate at the 10 V R_on spec level (stricter than UVLO 6.6 V), so
-         * ΔV = 12 − 0.7 − 10 = 1.3 V → C_min 146.8 nF → 3× = 440 nF → E12 470 nF → D_max = 1 − 3·2.2·470n·20k
-         * = 0.938 < 0.95 → fail. The original: 112 + 50/5.2·2 + 3.1 = 134.3 nC → 103 nF → 310 → 330 nF →
-         * D_max 0.956 ≥ 0.95 → pass.
+         * MC-UH (PGL-HB1046, I_qbs 65 µA, q_ls 2 nC; 12 V, 20 kHz, duty 0.95, V_F 0.7 V and R_boot 2.2 Ω assumed).
+         * CVL-1018TL: Q_g at 12 V = 160 + (160 − 51 − 37) / (10 − 4.8) · 2 = 187.7 nC (REFERENCES.md §1 curve);
+         * + 2 nC + (65 + 50) µA · 47.5 µs = 195.2 nC; ΔV = 12 − 0.7 − 10 = 1.3 V → C_min 150 nF → 6× = 901 nF → E12
+         * 1 µF nominal, 500 nF at bias. Charge balance (REFERENCES.md §9): τ = 2.2 Ω · 500 nF = 1.1 µs, t_off 2.5 µs,
+         * k = e^(−2.27) = 0.103; V_lo = 11.3 − 193 nC / (500 nF · 0.897) ≈ 10.87 V ≥ 10 V → pass. Three time
+         * constants of 470 nF (1 − 3·2.2·470n·20k = 0.938 < 0.95) used to fail it: a design that works.
          */
         JsonNode big = candidate(r, "CVL-1018TL");
-        List<String> failing = new ArrayList<>();
         for (JsonNode n : big.get("checks")) {
-            if (n.get("rule").asText().equals("bootstrap") && n.get("verdict").asText().equals("fail")) {
-                assertEquals("pass", n.get("was").asText(), n.toString());
-                assertTrue(n.get("message").asText().contains("470 nF"), n.toString());
-                failing.add(n.get("stage").asText());
-            }
+            assertFalse(n.get("rule").asText().equals("bootstrap") && n.get("verdict").asText().equals("fail"),
+                    n.toString());
         }
-        assertEquals(highSide, failing);
-        assertEquals("pin-compatible", big.get("grade").asText());
-        assertEquals("drop-in", candidate(r, "YSP-N10T22").get("grade").asText(), "105 nC keeps 330 nF: still passes");
+        assertEquals("pin-compatible", big.get("grade").asText(), "five parameters outside the re-verify window");
+        assertTrue(reasons(big).contains("5 parameters outside the re-verify window"), reasons(big));
+        assertEquals("drop-in", candidate(r, "YSP-N10T22").get("grade").asText(), "105 nC: still passes");
     }
 
     @Test

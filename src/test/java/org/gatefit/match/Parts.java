@@ -30,6 +30,7 @@ final class Parts {
         double vThMin = 2, vThMax = 4, vGsMax = 20, vGsMin = -20, vGateOn = 10, vGateOff = 0;
         double qG = 50e-9, qGVgs = 10, qGs = 15e-9, qGd = 15e-9, vPlateau = 5;
         double cIss = 3e-9, cRss = 50e-12, rGInt = 1;
+        double vGateOnMax = Double.NaN, vGateOffMin = Double.NaN, tSc = Double.NaN;
         String lifecycle = "active";
         long stock = 1000;
         double price = 1;
@@ -37,7 +38,7 @@ final class Parts {
         SwitchPart build() {
             return new SwitchPart(pn, "Testmaker", "PKG", "PKG", tech, nChannel, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
                     vThMax, vGsMax, vGsMin, vGateOn, vGateOff, qG, qGVgs, qGs, qGd, vPlateau, cIss, cRss, rGInt,
-                    Lifecycle.of(lifecycle), stock, price);
+                    Lifecycle.of(lifecycle), stock, price, new SwitchRatings(vGateOnMax, vGateOffMin, tSc));
         }
     }
 
@@ -51,14 +52,20 @@ final class Parts {
         double iQbs = 50e-6, vNegMin = 0, tProp = 20e-9, tMatch = Double.NaN;
         Boolean millerClamp = false;
         double isolationVrms = Double.NaN, pMax = 1.0;
+        int channels = 2;
+        /** Optional ratings: V_IORM (V), CMTI (V/s), UVLO reference (null unknown, true total supply), I_q,out (A), Q_ls (C), fault protection. */
+        double vIorm = Double.NaN, cmti = Double.NaN, iQOut = Double.NaN, qLs = Double.NaN, tDesat = Double.NaN;
+        double bootClamp = Double.NaN;
+        Boolean uvloTotal = null, desat = null, softOff = null;
         String lifecycle = "active";
         long stock = 1000;
         double price = 1;
 
         DriverPart build() {
-            return new DriverPart(pn, "Testmaker", "PKG", "PKG", topology, 2, inverting, iSource, iSink, rSource, rSink,
-                    vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs, vNegMin,
-                    tProp, tMatch, millerClamp, isolationVrms, pMax, Lifecycle.of(lifecycle), stock, price);
+            return new DriverPart(pn, "Testmaker", "PKG", "PKG", topology, channels, inverting, iSource, iSink, rSource,
+                    rSink, vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs,
+                    vNegMin, tProp, tMatch, millerClamp, isolationVrms, pMax, Lifecycle.of(lifecycle), stock, price,
+                    new DriverRatings(vIorm, cmti, uvloTotal, iQOut, qLs, desat, tDesat, softOff, bootClamp));
         }
     }
 

@@ -64,11 +64,14 @@ class ReferenceFiguresTest {
         // §4: Q_g + I_qbs·t_on + Q_ls with Q_ls 2.5 nC folded into Q_g (it adds the same way):
         // 46.5 nC at 12 V, I_qbs 100 µA, t_on = 0.95 / 100 kHz = 9.5 µs; ΔV = 12 − 0.7 − 10.8 (UVLO,off) = 0.5 V.
         Consumer<Parts.Sw> boot = s -> {
-            s.qG = 46.5e-9;
+            s.qG = 44e-9;
             s.qGVgs = 12;
         };
+        // REFERENCES §4: 44 nC + 100 µA·9.5 µs + 2.5 nC level shift: the 100 µA is I_qbs 50 µA plus the engine's
+        // 50 µA leakage allowance (Bootstrap.LEAKAGE_ALLOWANCE), the 2.5 nC the driver's q_ls_nc.
         Consumer<Parts.Dr> bootDriver = d -> {
-            d.iQbs = 100e-6;
+            d.iQbs = 50e-6;
+            d.qLs = 2.5e-9;
             d.uvloOn = 11.2;
             d.uvloOff = 10.8;
         };
@@ -129,7 +132,8 @@ class ReferenceFiguresTest {
                         "gate-resistance-critical", 4.53, 2e-3),
                 row("REFERENCES §3, computed: ζ(6.2 Ω)", s12, SEC1_DRIVER, drive(12), "gate-loop-damping", 1.369, 1e-3),
                 row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-drive-power", 44.0e-3, 1e-6),
-                row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "driver-power", 11.33e-3, 1e-3),
+                row("REFERENCES §2, computed (one channel of the package)", s10, SEC1_DRIVER,
+                        drive(10).andThen(o -> o.channelsUsed = 1), "driver-power", 11.33e-3, 1e-3),
                 row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-resistor-power", 23.34e-3, 1e-3),
                 row("REFERENCES §2, computed", s10, SEC1_DRIVER, drive(10), "gate-internal-power", 9.33e-3, 1e-3),
                 row("REFERENCES §4, computed", boot, bootDriver, bootOp, "bootstrap-charge", 47.45e-9, 1e-6),
