@@ -17,6 +17,7 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
+import org.apache.commons.text.similarity.LevenshteinDistance;
 import org.gatefit.index.Catalog;
 import org.gatefit.serve.Questions;
 import picocli.CommandLine;
@@ -174,8 +175,10 @@ public final class Answers implements Questions {
             }
             OptionSpec opt = spec.findOption("--" + name);
             if (REFUSED.contains(name) || opt == null || name.length() < 2) {
-                throw new UsageException("unknown parameter '" + name + "'; expected one of "
-                        + String.join(", ", known(spec, command)));
+                List<String> known = known(spec, command);
+                String near = nearest(name, known);
+                throw new UsageException("unknown parameter '" + name + "'" + (near == null ? "" : " (did you mean '"
+                        + near + "'?)") + "; expected one of " + String.join(", ", known));
             }
             if (Path.class.equals(opt.type()) || opt.type() == List.class && opt.auxiliaryTypes()[0] == Path.class) {
                 throw new UsageException("parameter '" + name + "' names a file: post it as the multipart field '"
@@ -247,6 +250,27 @@ public final class Answers implements Questions {
             names.add(POSITIONAL.get(command));
         }
         return List.copyOf(names);
+    }
+
+    /**
+     * The accepted name nearest to a misspelt one by edit distance (Commons Text's Levenshtein, as
+     * the "nearest" part numbers), case ignored, at most a third of its length apart (at least 2,
+     * at most 3); the first in order on a tie; null when none is that near.
+     */
+    static String nearest(String name, List<String> known) {
+        String key = name.toLowerCase(Locale.ROOT);
+        int most = Math.min(3, Math.max(2, key.length() / 3));
+        LevenshteinDistance distance = new LevenshteinDistance(most);
+        String best = null;
+        int bestD = Integer.MAX_VALUE;
+        for (String k : known) {
+            int d = distance.apply(key, k);
+            if (d >= 0 && d < bestD) {
+                best = k;
+                bestD = d;
+            }
+        }
+        return best;
     }
 
     /** A posted file's name as the reports will give it: its own name when plain, else the field's. */

@@ -30,6 +30,9 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
+import org.eclipse.jetty.http.BadMessageException;
+import org.eclipse.jetty.server.HttpConnectionFactory;
+import org.eclipse.jetty.server.ServerConnector;
 import org.gatefit.index.Catalog;
 import org.gatefit.report.Caution;
 
@@ -63,13 +66,27 @@ public final class Server implements AutoCloseable {
      * @param importToken     the token a web import must carry; null: imports refused (read-only)
      * @param maxRequestBytes the largest request body accepted
      * @param timeout         how long one question may take before the answer is 503
-     * @param workers         questions answered at once (more wait in a queue of the same length)
+     * @param workers         questions answered at once (more wait in a queue four times as long)
+     * @param idleTimeout     how long a connection may send nothing (a slow or stalled client) before it
+     *                        is closed
      */
     public record Settings(String host, int port, Path catalog, String importToken, long maxRequestBytes,
-                           Duration timeout, int workers) {
+                           Duration timeout, int workers, Duration idleTimeout) {
+        /** Connections idle this long are closed ({@link #idleTimeout}). */
+        public static final Duration IDLE_TIMEOUT = Duration.ofSeconds(10);
+
+        public Settings(String host, int port, Path catalog, String importToken, long maxRequestBytes,
+                        Duration timeout, int workers) {
+            this(host, port, catalog, importToken, maxRequestBytes, timeout, workers, IDLE_TIMEOUT);
+        }
+
         public Settings {
             Objects.requireNonNull(host, "host");
             Objects.requireNonNull(catalog, "catalog");
+            if (timeout.isNegative() || timeout.isZero() || idleTimeout.isNegative() || idleTimeout.isZero()) {
+                throw new IllegalArgumentException("timeout, idleTimeout: expected more than 0, got " + timeout
+                        + ", " + idleTimeout);
+            }
             if (port < 0 || port > 65535) {
                 throw new IllegalArgumentException("port: expected 0 to 65535, got " + port);
             }
@@ -108,11 +125,20 @@ public final class Server implements AutoCloseable {
         Server s = new Server(settings, questions);
         s.app = Javalin.create(config -> {
             config.startup.showJavalinBanner = false;
-            config.jetty.host = settings.host();
-            config.jetty.port = settings.port();
+            // One connector of our own (Javalin then adds none), closing connections idle too long.
+            config.jetty.addConnector((server, http) -> {
+                ServerConnector c = new ServerConnector(server, new HttpConnectionFactory(http));
+                c.setHost(settings.host());
+                c.setPort(settings.port());
+                c.setIdleTimeout(settings.idleTimeout().toMillis());
+                return c;
+            });
             config.http.maxRequestSize = settings.maxRequestBytes();
             config.jetty.multipartConfig.maxTotalRequestSize(settings.maxRequestBytes(), io.javalin.config.SizeUnit.BYTES);
             config.jetty.multipartConfig.maxFileSize(settings.maxRequestBytes(), io.javalin.config.SizeUnit.BYTES);
+            // Browser libraries come as WebJars from Maven Central inside the jar, served from the
+            // classpath (/webjars/NAME/VERSION/…); the pages load nothing from anywhere else.
+            config.staticFiles.enableWebjars();
             config.routes.before(s::guard);
             for (Map.Entry<String, String> p : PAGES.entrySet()) {
                 config.routes.get(p.getKey(), ctx -> s.page(ctx, p.getValue()));
@@ -131,6 +157,8 @@ public final class Server implements AutoCloseable {
                 s.answer(ctx, "show", q, List.of());
             });
             config.routes.post("/api/v1/check", ctx -> s.answer(ctx, "check", s.formParams(ctx), uploads(ctx)));
+            // replace with the stages that use the part re-checked: multipart fields stages and bom
+            config.routes.post("/api/v1/replace", ctx -> s.answer(ctx, "replace", s.formParams(ctx), uploads(ctx)));
             config.routes.post("/api/v1/import", s::importFiles);
             config.routes.exception(Exception.class, (e, ctx) -> s.internal(ctx, e));
             config.routes.error(404, ctx -> {
@@ -139,8 +167,7 @@ public final class Server implements AutoCloseable {
                             + " its description is /api/v1/openapi.json)", List.of());
                 }
             });
-            config.routes.error(413, ctx -> error(ctx, 413, "too large", "the request is larger than "
-                    + settings.maxRequestBytes() + " bytes (gatefit serve --max-request)", List.of()));
+            config.routes.error(413, s::tooLarge);
         }).start();
         return s;
     }
@@ -189,6 +216,11 @@ public final class Server implements AutoCloseable {
         if (loopback && (host == null || !loopbackName(host))) {
             error(ctx, 403, "forbidden", "this server listens on loopback and answers only requests addressed to"
                     + " localhost or 127.0.0.1 (got Host " + host + ")", List.of());
+            ctx.skipRemainingHandlers();
+            return;
+        }
+        if (ctx.req().getContentLengthLong() > settings.maxRequestBytes()) {
+            tooLarge(ctx);
             ctx.skipRemainingHandlers();
             return;
         }
@@ -314,8 +346,9 @@ public final class Server implements AutoCloseable {
             a = f.get(settings.timeout().toMillis(), TimeUnit.MILLISECONDS);
         } catch (TimeoutException e) {
             f.cancel(true);
-            error(ctx, 503, "timeout", "the question took longer than " + settings.timeout().toSeconds()
-                    + " s (gatefit serve --timeout); narrow it (--top, filters) or ask again", List.of());
+            long ms = settings.timeout().toMillis();
+            error(ctx, 503, "timeout", "the question took longer than " + (ms % 1000 == 0 ? ms / 1000 + " s" : ms
+                    + " ms") + " (gatefit serve --timeout); narrow it (--top, filters) or ask again", List.of());
             return;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
@@ -385,7 +418,26 @@ public final class Server implements AutoCloseable {
         };
     }
 
+    private void tooLarge(Context ctx) {
+        error(ctx, 413, "too large", "the request is larger than " + settings.maxRequestBytes()
+                + " bytes (gatefit serve --max-request)", List.of());
+    }
+
     private void internal(Context ctx, Throwable e) {
+        // Jetty refuses a malformed request body (a multipart form cut short, or longer than the
+        // limit while it is read, as a body sent in chunks without its length is) as a bad message.
+        for (Throwable c = e; c != null; c = c.getCause()) {
+            if (c instanceof BadMessageException bad) {
+                for (Throwable d = c; d != null; d = d.getCause()) {
+                    if (d.getMessage() != null && d.getMessage().startsWith("max length exceeded")) {
+                        tooLarge(ctx);
+                        return;
+                    }
+                }
+                error(ctx, 400, "bad request", "the request could not be read: " + bad.getReason(), List.of());
+                return;
+            }
+        }
         error(ctx, 500, "internal", "internal error: " + e + " — a bug in gatefit: please report it with the"
                 + " request", List.of());
     }

@@ -100,6 +100,45 @@ class ServeApiTest {
     }
 
     @Test
+    void explainCarriesTheGateWaveformsThePairPagePlots() throws Exception {
+        HttpResponse<String> r = get("/api/v1/explain?driver=QND-D06L&switch=QND-65G150D&freq=200&bus=375&drive=6"
+                + "&drive-neg=-3");
+        assertEquals(200, r.statusCode(), r.body());
+        JsonNode w = JSON.readTree(r.body()).get("waveforms");
+        double plateau = JSON.readTree(get("/api/v1/parts/switch/QND-65G150D").body()).get("v_plateau_v").asDouble();
+        // The gate charges from one drive level toward the other and sits at the Miller plateau in
+        // between (the three-phase picture of Mohan, Undeland, Robbins, Power Electronics, 3rd ed.).
+        for (String edge : List.of("turn_on", "turn_off")) {
+            JsonNode e = w.get(edge);
+            JsonNode t = e.get("time_s");
+            JsonNode v = e.get("v_gs_v");
+            assertEquals(t.size(), v.size(), edge);
+            assertEquals(t.size(), e.get("i_g_a").size(), edge);
+            boolean on = edge.equals("turn_on");
+            assertEquals(on ? -3 : 6, v.get(0).asDouble(), 1e-9, edge + " starts at the level it leaves");
+            assertEquals(on ? 6 : -3, v.get(v.size() - 1).asDouble(), 0.5, edge + " ends near the level it drives to");
+            double mid = (e.get("plateau_start_s").asDouble() + e.get("plateau_end_s").asDouble()) / 2;
+            int k = 0;
+            while (t.get(k).asDouble() < mid) {
+                k++;
+            }
+            assertEquals(plateau, v.get(k).asDouble(), 1e-3, edge + " on the plateau at " + mid + " s");
+        }
+    }
+
+    @Test
+    void theWebJarsArePartOfTheServer() throws Exception {
+        HttpResponse<String> js = get("/webjars/uplot/1.6.30/dist/uPlot.iife.min.js");
+        assertEquals(200, js.statusCode());
+        assertTrue(js.headers().firstValue("Content-Type").orElse("").contains("javascript"), js.headers().toString());
+        assertTrue(js.headers().firstValue("Content-Security-Policy").orElse("").startsWith("default-src 'self'"),
+                "the same headers as every answer");
+        assertEquals(200, get("/webjars/uplot/1.6.30/dist/uPlot.min.css").statusCode());
+        String page = get("/pair").body();
+        assertTrue(page.contains("src=\"/webjars/uplot/1.6.30/dist/uPlot.iife.min.js\""), "the page names the served file");
+    }
+
+    @Test
     void checkTakesTheStageSheetAndBomAsMultipartFields() throws Exception {
         Path stages = Project.file("examples/stages.csv");
         Path bom = Project.file("examples/bom.csv");
@@ -116,6 +155,21 @@ class ServeApiTest {
                 Files.readAllBytes(stages)), new Part("bom", "bom.csv", Files.readAllBytes(bom))), Map.of());
         assertEquals(200, junit.statusCode(), junit.body());
         assertTrue(junit.body().startsWith("<?xml") && junit.body().contains("<testsuite"), junit.body());
+    }
+
+    @Test
+    void replaceTakesTheStagesToRecheckAsMultipartFields() throws Exception {
+        Path stages = Project.file("examples/stages.csv");
+        Path bom = Project.file("examples/bom.csv");
+        HttpResponse<String> r = post("/api/v1/replace?part=CVL-1025TL&top=3", List.of(new Part("stages", "stages.csv",
+                Files.readAllBytes(stages)), new Part("bom", "bom.csv", Files.readAllBytes(bom))), Map.of());
+        assertEquals(200, r.statusCode(), r.body());
+        CliRun c = cliIn(stages.getParent(), "replace", "CVL-1025TL", "--stages", "stages.csv", "--bom", "bom.csv",
+                "--top", "3", "--format", "json");
+        assertEquals(0, c.exit(), c.dump());
+        JsonNode api = JSON.readTree(r.body());
+        assertEquals(JSON.readTree(c.out()), api);
+        assertTrue(api.get("stages").size() > 0, "the stages that use the part were re-checked: " + r.body());
     }
 
     /** The CLI with relative paths resolved in {@code dir}, as the server resolves the posted files. */
@@ -157,8 +211,16 @@ class ServeApiTest {
 
         HttpResponse<String> unknown = get("/api/v1/shortlist?swich=QND-65G150D&freq=200");
         assertEquals(400, unknown.statusCode());
-        assertTrue(unknown.body().contains("unknown parameter 'swich'") && unknown.body().contains("switch"),
-                unknown.body());
+        assertTrue(unknown.body().contains("unknown parameter 'swich' (did you mean 'switch'?)"), unknown.body());
+        // The nearest accepted name by edit distance: a letter dropped, doubled, swapped, or a case slip.
+        for (String[] typo : new String[][] {{"bsu", "bus"}, {"freqq", "freq"}, {"drive-ng", "drive-neg"},
+                {"Top", "top"}}) {
+            HttpResponse<String> r = get("/api/v1/shortlist?switch=QND-65G150D&freq=200&" + typo[0] + "=1");
+            assertEquals(400, r.statusCode(), r.body());
+            assertTrue(r.body().contains("(did you mean '" + typo[1] + "'?)"), typo[0] + ": " + r.body());
+        }
+        HttpResponse<String> far = get("/api/v1/shortlist?switch=QND-65G150D&freq=200&colour=red");
+        assertFalse(far.body().contains("did you mean"), "nothing near: no guess: " + far.body());
         // Options that would touch the server's files are not parameters.
         for (String p : List.of("catalog=/tmp", "output=/tmp/x.json", "verbose=true")) {
             HttpResponse<String> r = get("/api/v1/find?" + p);
@@ -222,6 +284,7 @@ class ServeApiTest {
                 "/api/v1/replace", "/api/v1/check", "/api/v1/import")) {
             assertTrue(doc.get("paths").has(p), "documents " + p);
         }
+        assertTrue(doc.get("paths").get("/api/v1/replace").has("post"), "documents POST /api/v1/replace");
     }
 
     @Test

@@ -101,9 +101,18 @@ class ServeBrowserTest {
         return new WebDriverWait(browser, Duration.ofSeconds(60));
     }
 
+    /** The result table's text ("" while there is none); the pages replace it as answers come. */
     String tableText() {
-        List<WebElement> t = browser.findElements(By.cssSelector("#out table"));
-        return t.isEmpty() ? "" : t.get(0).getText();
+        for (int attempt = 0; ; attempt++) {
+            try {
+                List<WebElement> t = browser.findElements(By.cssSelector("#out table"));
+                return t.isEmpty() ? "" : t.get(0).getText();
+            } catch (org.openqa.selenium.StaleElementReferenceException replaced) {
+                if (attempt == 10) {
+                    throw replaced;
+                }
+            }
+        }
     }
 
     /** Every resource the page loaded came from the server, and the caution is on the page. */
@@ -140,6 +149,12 @@ class ServeBrowserTest {
         browser.get(server.url() + "pair?switch=QND-65G150D&driver=QND-D06L&driver=QND-D06H&freq=200&bus=375");
         waiting().until(d -> d.findElements(By.cssSelector("#sheets iframe")).size() == 2);
         assertTrue(browser.findElement(By.id("compare")).getText().contains("drive-current"));
+        // Both drivers' gate waveforms overlaid: one uPlot per edge, each with both drivers in its legend.
+        waiting().until(d -> d.findElements(By.cssSelector("#overlay .overlay-plot .uplot canvas")).size() == 2);
+        for (WebElement plot : browser.findElements(By.cssSelector("#overlay .overlay-plot"))) {
+            String legend = plot.findElement(By.cssSelector(".u-legend")).getText();
+            assertTrue(legend.contains("QND-D06L") && legend.contains("QND-D06H"), legend);
+        }
         WebElement frame = browser.findElements(By.cssSelector("#sheets iframe")).get(0);
         browser.switchTo().frame(frame);
         waiting().until(d -> d.findElements(By.tagName("svg")).size() >= 3);
