@@ -14,6 +14,14 @@ abstract class CatalogCommand {
         this.ctx = ctx;
     }
 
+    /**
+     * The catalog to answer from: a handle on the server's view when there is one
+     * ({@link Context#view}), else the catalog in {@link #catalogDir()} opened now.
+     */
+    org.gatefit.index.Catalog openCatalog() throws java.io.IOException {
+        return ctx.view != null ? ctx.view.handle() : org.gatefit.index.Catalog.open(catalogDir());
+    }
+
     /** --catalog, else $GATEFIT_CATALOG, else the per-user data directory. */
     Path catalogDir() {
         if (top != null && top.catalog != null) {

@@ -95,7 +95,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             b = Bom.read(ctx.path(bomFile), bomFile.toString(), new SheetReader.Options(options.encoding(), 0, null,
                     null, options.notes()));
         }
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             if (c.isEmpty()) {
                 // Not a failed pair (exit 1): the environment is not set up (exit 4), so CI can tell them apart.
                 throw new NoCatalogException("the catalog in " + c.directory() + (java.nio.file.Files.isDirectory(

@@ -43,7 +43,7 @@ public final class Cli {
 
     /** The subcommands, by name, in the order help lists them. */
     private static final List<String> COMMANDS = List.of("import", "validate", "info", "find", "show", "export",
-            "shortlist", "explain", "check", "replace", "verify", "demo", "completion");
+            "shortlist", "explain", "check", "replace", "verify", "serve", "demo", "completion");
 
     private static Object command(String name, Context ctx) {
         return switch (name) {
@@ -58,6 +58,7 @@ public final class Cli {
             case "check" -> new CheckCommand(ctx);
             case "replace" -> new ReplaceCommand(ctx);
             case "verify" -> new VerifyCommand(ctx);
+            case "serve" -> new ServeCommand(ctx);
             case "demo" -> new DemoCommand(ctx);
             case "completion" -> new CompletionCommand(ctx);
             default -> throw new IllegalArgumentException("no command " + name);
@@ -83,7 +84,13 @@ public final class Cli {
     /** @param only the subcommands to build (null: all) */
     static CommandLine create(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal,
                               Path workDir, Set<String> only) {
-        Context ctx = new Context(out, err, env, clock, terminal, workDir);
+        return create(new Context(out, err, env, clock, terminal, workDir), only);
+    }
+
+    /** @param only the subcommands to build (null: all) */
+    static CommandLine create(Context ctx, Set<String> only) {
+        PrintWriter out = ctx.out;
+        PrintWriter err = ctx.err;
         GatefitCommand top = new GatefitCommand();
         CommandLine cl = new CommandLine(top);
         for (String name : COMMANDS) {

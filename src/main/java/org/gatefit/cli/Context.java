@@ -19,8 +19,19 @@ final class Context {
     final boolean terminal;
     /** Folder that relative paths are resolved against; null for the process's working directory. */
     final Path workDir;
+    /**
+     * The catalog view a long-running process answers from ({@code serve}): commands take a handle on
+     * it instead of opening the folder; null for a command line, which opens the catalog itself.
+     */
+    final org.gatefit.index.Catalog view;
 
     Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal, Path workDir) {
+        this(out, err, env, clock, terminal, workDir, null);
+    }
+
+    Context(PrintWriter out, PrintWriter err, Map<String, String> env, Clock clock, boolean terminal, Path workDir,
+            org.gatefit.index.Catalog view) {
+        this.view = view;
         this.out = out;
         this.err = err;
         this.env = Map.copyOf(env);

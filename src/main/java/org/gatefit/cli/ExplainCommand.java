@@ -46,7 +46,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         OperatingPoint.Spec spec = point.spec();
         PairResult r;
         GateDrive drive;
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);

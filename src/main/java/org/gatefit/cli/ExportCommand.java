@@ -36,7 +36,7 @@ final class ExportCommand extends CatalogCommand implements Callable<Integer> {
         if (format != Format.CSV && format != Format.JSON) {
             throw new UsageException("--format: export writes csv or json, got " + format);
         }
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             List<Row> rows = PartSearch.find(c, kind, List.of(), List.of(), null, Integer.MAX_VALUE);
             try (Writer w = OutputOptions.open(ctx, output)) {
                 if (format == Format.CSV) {

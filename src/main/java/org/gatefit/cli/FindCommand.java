@@ -56,7 +56,7 @@ final class FindCommand extends CatalogCommand implements Callable<Integer> {
         for (String w : where) {
             conds.add(PartSearch.Condition.parse(w));
         }
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             List<Row> rows = PartSearch.find(c, kind, words, conds, sort, limit == null ? Integer.MAX_VALUE : limit);
             if (c.isEmpty()) {
                 ctx.err.println("note: the catalog in " + c.directory() + " is empty; import parts with 'gatefit import FILE...'");

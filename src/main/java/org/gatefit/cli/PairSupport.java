@@ -41,17 +41,21 @@ final class PairSupport {
      * {@code explain}, {@code replace} and {@code show} word it.
      */
     static UsageException notFound(Catalog c, Kind kind, String pn) throws IOException {
+        return new PartNotFoundException(notFoundMessage(c, kind, pn));
+    }
+
+    private static String notFoundMessage(Catalog c, Kind kind, String pn) throws IOException {
         String what = kind == null ? "part" : kind.toString();
         String where = "no " + what + " '" + pn + "' in the catalog " + c.directory();
         if (c.isEmpty()) {
-            return new UsageException(where + " (it is empty: import parts with 'gatefit import FILE...')");
+            return where + " (it is empty: import parts with 'gatefit import FILE...')";
         }
         List<String> near = nearest(c, kind, pn, SUGGESTIONS);
         if (near.isEmpty()) {
-            return new UsageException(where + " (none is near it; try 'gatefit find "
-                    + pn.replaceAll("[^A-Za-z0-9]+", " ").strip() + "')");
+            return where + " (none is near it; try 'gatefit find "
+                    + pn.replaceAll("[^A-Za-z0-9]+", " ").strip() + "')";
         }
-        return new UsageException(where + "; nearest: " + String.join(", ", near));
+        return where + "; nearest: " + String.join(", ", near);
     }
 
     /**

@@ -87,7 +87,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
             }
         }
         Replacement.Result r;
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             List<Row> found = kind == null ? c.lookup(part) : c.get(kind, part).map(List::of).orElse(List.of());
             if (found.isEmpty()) {
                 throw PairSupport.notFound(c, kind, part);

@@ -76,7 +76,7 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         OperatingPoint.Spec spec = point.spec();
         Margins m = margins.margins();
         List<Prefilter.Condition> asked = filters();
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);

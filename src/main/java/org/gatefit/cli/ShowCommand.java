@@ -32,7 +32,7 @@ final class ShowCommand extends CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        try (Catalog c = Catalog.open(catalogDir())) {
+        try (Catalog c = openCatalog()) {
             List<Row> found = kind == null ? c.lookup(part) : c.get(kind, part).map(List::of).orElse(List.of());
             if (found.isEmpty()) {
                 throw PairSupport.notFound(c, kind, part);

@@ -3,7 +3,7 @@ package org.gatefit.cli;
 import org.gatefit.failure.UsageProblem;
 
 /** A command-line value that cannot be used; exits with {@link ExitCode#USAGE}. */
-final class UsageException extends UsageProblem {
+class UsageException extends UsageProblem {
     private static final long serialVersionUID = 1L;
 
     UsageException(String message) {

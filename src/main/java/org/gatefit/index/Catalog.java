@@ -66,11 +66,56 @@ public final class Catalog implements AutoCloseable {
     /** Objects built from rows ({@link RowCursor#memo}) per segment and key, when {@link #keepColumns} is on. */
     private volatile java.util.concurrent.ConcurrentHashMap<List<Object>, Object[]> memos; // (segment, type) → one object per document
 
+    /** Whether {@link #close} ran on this handle (a handle closes its share of the reader once). */
+    private final java.util.concurrent.atomic.AtomicBoolean closed = new java.util.concurrent.atomic.AtomicBoolean();
+
     private Catalog(Path dir, Directory directory, DirectoryReader reader) {
         this.dir = dir;
         this.directory = directory;
         this.reader = reader;
         this.searcher = reader == null ? null : new IndexSearcher(reader);
+    }
+
+    /**
+     * Another handle on this same point-in-time view, for a long-running process that answers
+     * several questions at once from one opened catalog (the web server): each handle is closed on
+     * its own, and the files stay open until the last handle is closed. Refused as {@link #open}
+     * refuses when nothing has been imported.
+     *
+     * @throws CatalogFormatException when this view holds no catalog
+     */
+    public Catalog handle() throws CatalogFormatException {
+        if (reader == null) {
+            throw noCatalog(dir);
+        }
+        reader.incRef();
+        Catalog c = new Catalog(dir, directory, reader);
+        c.columns = columns;
+        c.memos = memos;
+        return c;
+    }
+
+    /**
+     * Whether this view is still the catalog's last commit: false once another process's import has
+     * committed (or, for a view of an empty folder, once there is a catalog), so a long-running
+     * reader can open the new one. Reads the folder's commit point only; the view is unchanged.
+     */
+    public boolean isCurrent() throws IOException {
+        if (reader == null) {
+            try (Catalog now = openIfPresent(dir)) {
+                return now.reader == null;
+            }
+        }
+        try {
+            return reader.isCurrent();
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
+        }
+    }
+
+    private static CatalogFormatException noCatalog(Path dir) {
+        return new CatalogFormatException("there is no catalog in " + dir + " yet: import your CSV files first"
+                + " (gatefit --catalog " + dir + " import FILE...)");
     }
 
     /**
@@ -84,8 +129,7 @@ public final class Catalog implements AutoCloseable {
         Catalog c = openIfPresent(dir);
         if (c.reader == null) {
             c.close();
-            throw new CatalogFormatException("there is no catalog in " + dir + " yet: import your CSV files first"
-                    + " (gatefit --catalog " + dir + " import FILE...)");
+            throw noCatalog(dir);
         }
         return c;
     }
@@ -874,10 +918,13 @@ public final class Catalog implements AutoCloseable {
 
     @Override
     public void close() throws IOException {
-        if (reader != null) {
-            reader.close();
+        if (!closed.compareAndSet(false, true)) {
+            return;
         }
-        if (directory != null) {
+        if (reader != null) {
+            reader.decRef(); // closes the reader when the last handle ({@link #handle}) is closed
+        }
+        if (directory != null && (reader == null || reader.getRefCount() == 0)) {
             directory.close();
         }
     }

@@ -183,18 +183,31 @@ final class MatchHtml {
         return null;
     }
 
-    private static String waveforms(PairResult p, GateDrive g) {
+    /**
+     * The pair's turn-on and turn-off edges, or an empty list when the catalog lacks what they need
+     * (the HTML sheet's charts and the explain JSON's {@code waveforms} both come from here).
+     */
+    static List<GateWaveform.Edge> edges(PairResult p, GateDrive g) {
         SwitchPart s = g.switchPart();
         OperatingPoint op = p.point();
         GateWaveform.GateCurve c = curve(s, op.parallel());
         if (c == null || !(op.vDrive() > s.vPlateau()) || !(g.rOn() > 0) || !(g.rOff() > 0)) {
+            return List.of();
+        }
+        return List.of(GateWaveform.turnOn(c, op.vDrive(), op.vDriveNeg(), g.rOn()),
+                GateWaveform.turnOff(c, op.vDrive(), op.vDriveNeg(), g.rOff()));
+    }
+
+    private static String waveforms(PairResult p, GateDrive g) {
+        SwitchPart s = g.switchPart();
+        OperatingPoint op = p.point();
+        List<GateWaveform.Edge> edges = edges(p, g);
+        if (edges.isEmpty()) {
             return "<p class=\"note\">No waveform: it needs the switch's Q_gd and V_plateau with C_iss or Q_gs, driver"
                     + " output resistances, and an on level above the plateau.</p>\n";
         }
         StringBuilder sb = new StringBuilder();
-        GateWaveform.Edge on = GateWaveform.turnOn(c, op.vDrive(), op.vDriveNeg(), g.rOn());
-        GateWaveform.Edge off = GateWaveform.turnOff(c, op.vDrive(), op.vDriveNeg(), g.rOff());
-        for (GateWaveform.Edge e : List.of(on, off)) {
+        for (GateWaveform.Edge e : edges) {
             GateWaveform.Waveform w = e.sample(SAMPLES);
             double[] t = w.time();
             Scale ts = Scale.time(t[t.length - 1]);

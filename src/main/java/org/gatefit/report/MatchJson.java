@@ -2,6 +2,7 @@ package org.gatefit.report;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
+import java.util.List;
 import java.util.Map;
 import org.gatefit.match.Check;
 import org.gatefit.match.Eng;
@@ -9,6 +10,7 @@ import org.gatefit.match.Figure;
 import org.gatefit.match.Margins;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.PairResult;
+import org.gatefit.physics.GateWaveform;
 
 /** JSON pieces shared by the shortlist, explain and check reports (keys per DESIGN.md). */
 final class MatchJson {
@@ -97,6 +99,47 @@ final class MatchJson {
             g.writeNumberField(e.getKey(), e.getValue());
         }
         g.writeEndObject();
+    }
+
+    /** Points a waveform is sampled at in the JSON (the HTML charts draw more). */
+    static final int WAVEFORM_SAMPLES = 121;
+
+    /**
+     * {@code "waveforms": {"turn_on": {...}, "turn_off": {...}}}, each edge's gate voltage and
+     * current sampled from the start of the edge ({@code time_s}, {@code v_gs_v}, {@code i_g_a}, with
+     * {@code plateau_start_s} and {@code plateau_end_s}), as the HTML sheet plots them; null when
+     * the catalog lacks what the model needs (or no gate drive is known).
+     */
+    static void waveforms(JsonGenerator g, PairResult p, GateDrive drive) throws IOException {
+        List<GateWaveform.Edge> edges = drive == null ? List.of() : MatchHtml.edges(p, drive);
+        if (edges.isEmpty()) {
+            g.writeNullField("waveforms");
+            return;
+        }
+        g.writeObjectFieldStart("waveforms");
+        for (GateWaveform.Edge e : edges) {
+            GateWaveform.Waveform w = e.sample(WAVEFORM_SAMPLES);
+            g.writeObjectFieldStart(e.rising() ? "turn_on" : "turn_off");
+            number(g, "plateau_start_s", e.plateauStart());
+            number(g, "plateau_end_s", e.plateauEnd());
+            array(g, "time_s", w.time());
+            array(g, "v_gs_v", w.gateVoltage());
+            array(g, "i_g_a", w.gateCurrent());
+            g.writeEndObject();
+        }
+        g.writeEndObject();
+    }
+
+    private static void array(JsonGenerator g, String name, double[] v) throws IOException {
+        g.writeArrayFieldStart(name);
+        for (double x : v) {
+            if (Double.isFinite(x)) {
+                g.writeNumber(Double.parseDouble(String.format(java.util.Locale.ROOT, "%.5g", x)));
+            } else {
+                g.writeNull();
+            }
+        }
+        g.writeEndArray();
     }
 
     /** NaN and infinities as null (JSON has no such numbers). */

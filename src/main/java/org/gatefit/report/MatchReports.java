@@ -276,6 +276,7 @@ public final class MatchReports {
                     MatchJson.figures(g, p);
                     MatchJson.point(g, p.point());
                     MatchJson.margins(g, p.margins());
+                    MatchJson.waveforms(g, p, drive);
                     g.writeStringField("caution", Caution.TEXT);
                     g.writeEndObject();
                 }

@@ -1,0 +1,115 @@
+'use strict';
+/* Shared by every page. Catalog text only ever goes in through textContent. */
+const G = {
+  SYMBOL: { pass: '\u2714', warn: '\u25B2', fail: '\u2716', unknown: '?' },
+
+  el(tag, text, cls) {
+    const e = document.createElement(tag);
+    if (text !== undefined && text !== null) e.textContent = String(text);
+    if (cls) e.className = cls;
+    return e;
+  },
+
+  /** A link built from a path and parameters (never from markup). */
+  link(path, params, text) {
+    const u = new URL(path, location.origin);
+    for (const [k, v] of params) u.searchParams.append(k, v);
+    const a = G.el('a', text);
+    a.href = u.pathname + u.search;
+    return a;
+  },
+
+  /** The verdict as symbol and word, coloured as well. */
+  verdict(v) {
+    return G.el('span', (G.SYMBOL[v] || '') + ' ' + v, 'v-' + v);
+  },
+
+  /** Fetches an API answer; throws an Error carrying the server's message. */
+  async api(path, params, init) {
+    const u = new URL(path, location.origin);
+    for (const [k, v] of params || []) u.searchParams.append(k, v);
+    const r = await fetch(u.pathname + u.search, init);
+    const text = await r.text();
+    let json = null;
+    try { json = JSON.parse(text); } catch (e) { json = null; }
+    const warnings = (r.headers.get('Gatefit-Warning') || '').split(', ').filter(s => s)
+      .map(s => decodeURIComponent(s.replace(/\+/g, ' ')));
+    if (!r.ok) {
+      const err = new Error(json && json.message ? json.message : r.status + ' ' + text);
+      err.status = r.status;
+      throw err;
+    }
+    return { json, text, warnings, exit: r.headers.get('Gatefit-Exit-Code') };
+  },
+
+  status(msg, isError) {
+    const s = document.getElementById('status');
+    s.textContent = msg;
+    s.className = isError ? 'error' : '';
+  },
+
+  warnings(target, list) {
+    for (const w of list) target.appendChild(G.el('p', 'warning: ' + w, 'warning'));
+  },
+
+  /** A table: columns [{key, label, num, cell(row) -> Node|string}] */
+  table(columns, rows, onSort) {
+    const t = G.el('table');
+    const head = t.createTHead().insertRow();
+    for (const c of columns) {
+      const th = G.el('th', c.label || c.key);
+      if (onSort && c.sort !== false) {
+        th.className = 'sortable';
+        th.title = 'sort by ' + c.key;
+        th.addEventListener('click', () => onSort(c.key));
+      }
+      head.appendChild(th);
+    }
+    const body = t.createTBody();
+    for (const r of rows) {
+      const tr = body.insertRow();
+      for (const c of columns) {
+        const td = tr.insertCell();
+        const v = c.cell ? c.cell(r) : r[c.key];
+        if (v instanceof Node) td.appendChild(v);
+        else td.textContent = v === null || v === undefined ? '' : String(v);
+        if (c.num) td.className = 'num';
+      }
+    }
+    return t;
+  },
+
+  /** The page's query parameters. */
+  params() { return new URLSearchParams(location.search); },
+
+  /** The shortlist and explain operating-point options: name, label, unit hint. */
+  OP: [['side', 'side', 'low|high'], ['bus', 'bus', 'V'], ['freq', 'frequency', 'kHz'], ['edge', 'edge', 'ns'],
+    ['drive', 'on level', 'V'], ['drive-neg', 'off level', 'V'], ['logic', 'logic family', ''], ['v-oh', 'V_OH', 'V'],
+    ['v-ol', 'V_OL', 'V'], ['pwm', 'PWM sense', 'active-high|active-low'], ['rg', 'R_g on', '\u03A9'],
+    ['rg-off', 'R_g off', '\u03A9'], ['duty-max', 'duty max', '0..1'], ['parallel', 'parallel', 'n'],
+    ['loop', 'gate loop', 'nH'], ['v-f-boot', 'bootstrap diode', 'V'], ['r-boot', 'bootstrap R', '\u03A9'],
+    ['dvdt', 'dv/dt', 'V/ns']],
+
+  /** Fills the operating-point fieldset, values from the page's query. */
+  opForm(fieldset) {
+    const p = G.params();
+    for (const [name, label, unit] of G.OP) {
+      const l = G.el('label', label + (unit ? ' (' + unit + ') ' : ' '));
+      const i = document.createElement('input');
+      i.name = name;
+      i.id = 'op-' + name;
+      i.value = p.get(name) || '';
+      l.appendChild(i);
+      fieldset.appendChild(l);
+    }
+  },
+
+  /** Non-empty form fields as parameters (files excluded). */
+  formParams(form) {
+    const out = [];
+    for (const [k, v] of new FormData(form)) {
+      if (typeof v === 'string' && v.trim() !== '') out.push([k, v.trim()]);
+    }
+    return out;
+  }
+};

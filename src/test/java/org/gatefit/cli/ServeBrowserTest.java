@@ -1,0 +1,206 @@
+package org.gatefit.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import org.gatefit.report.Caution;
+import org.gatefit.serve.Server;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+import org.junit.jupiter.api.io.TempDir;
+import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.WebDriverWait;
+
+/**
+ * {@code gatefit serve}'s pages in a real browser: Selenium driving Debian's {@code chromium} through
+ * {@code chromium-driver} ({@code .ci/run} installs both). Without them the test fails in CI
+ * ({@code CI=true}) unless {@code GATEFIT_SKIP_BROWSER=1}, and is skipped with the install command
+ * elsewhere, as {@link HtmlBrowserTest}.
+ */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class ServeBrowserTest {
+    static final Path CHROMIUM = Path.of("/usr/bin/chromium");
+    static final Path DRIVER = Path.of("/usr/bin/chromedriver");
+    static final String HOSTILE = "<script>window.pwned=1</script><img src=x onerror=\"window.pwned=2\"> switch";
+
+    Path cat;
+    Server server;
+    WebDriver browser;
+    boolean present;
+
+    @BeforeAll
+    void start(@TempDir Path tmp) throws Exception {
+        present = Files.isExecutable(CHROMIUM) && Files.isExecutable(DRIVER);
+        if (!present) {
+            return;
+        }
+        cat = CliRun.examples(tmp.resolve("cat"));
+        Path hostile = tmp.resolve("hostile.csv");
+        Files.writeString(hostile, "part_number,maker,technology,channel,v_block_v,v_gs_max_v,v_gs_min_v,q_g_nc,description\n"
+                + "XSS-1,Test <b>Maker</b>,si-mosfet,n,100,20,-20,30,\"" + HOSTILE.replace("\"", "\"\"") + "\"\n");
+        assertEquals(ExitCode.OK, CliRun.on(cat, "import", "--kind", "switch", hostile.toString()).exit());
+        server = Server.start(new Server.Settings("127.0.0.1", 0, cat, null, 1 << 20, Duration.ofSeconds(60), 4),
+                new Answers(cat, CliRun.CLOCK));
+    }
+
+    @BeforeEach
+    void needsBrowser() {
+        if (!present) {
+            String hint = "Chromium and its driver not found (" + CHROMIUM + ", " + DRIVER + "): install them with"
+                    + " 'apt-get update && apt-get install -y chromium chromium-driver' (.ci/run does)";
+            if ("true".equalsIgnoreCase(System.getenv("CI")) && !"1".equals(System.getenv(HtmlBrowserTest.SKIP))) {
+                fail(hint + ", or set " + HtmlBrowserTest.SKIP + "=1 to skip this test");
+            }
+            Assumptions.abort(hint + "; browser test skipped outside CI");
+        }
+        ChromeOptions o = new ChromeOptions();
+        o.setBinary(CHROMIUM.toFile());
+        o.addArguments("--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
+                "--disable-background-networking", "--no-first-run", "--disable-component-update", "--disable-sync",
+                "--window-size=1400,1600");
+        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(DRIVER.toFile())
+                .usingAnyFreePort().build();
+        browser = new ChromeDriver(service, o);
+    }
+
+    @AfterEach
+    void quit() {
+        if (browser != null) {
+            browser.quit();
+        }
+    }
+
+    @AfterAll
+    void stop() throws Exception {
+        if (server != null) {
+            server.close();
+        }
+    }
+
+    WebDriverWait waiting() {
+        return new WebDriverWait(browser, Duration.ofSeconds(60));
+    }
+
+    /** The result table's text ("" while there is none); the pages replace it as answers come. */
+    String tableText() {
+        for (int attempt = 0; ; attempt++) {
+            try {
+                List<WebElement> t = browser.findElements(By.cssSelector("#out table"));
+                return t.isEmpty() ? "" : t.get(0).getText();
+            } catch (org.openqa.selenium.StaleElementReferenceException replaced) {
+                if (attempt == 10) {
+                    throw replaced;
+                }
+            }
+        }
+    }
+
+    /** Every resource the page loaded came from the server, and the caution is on the page. */
+    void onlyOwnOrigin() {
+        String origin = server.url().replaceFirst("/$", "");
+        @SuppressWarnings("unchecked")
+        List<String> loaded = (List<String>) ((JavascriptExecutor) browser).executeScript(
+                "return performance.getEntriesByType('resource').map(e => e.name)"
+                        + ".concat(performance.getEntriesByType('navigation').map(e => e.name));");
+        assertFalse(loaded.isEmpty());
+        for (String u : loaded) {
+            assertTrue(u.startsWith(origin + "/"), "requested outside the server: " + u);
+        }
+        assertTrue(browser.findElement(By.cssSelector(".caution")).getText().contains(Caution.TEXT.substring(0, 60)));
+    }
+
+    @Test
+    void switchPageReranksWhenTheBusVoltageChanges() {
+        browser.get(server.url() + "switch?switch=CVL-1025TL&side=high&freq=20&bus=30&all=true");
+        browser.findElement(By.name("all")).click(); // show the failing drivers too
+        waiting().until(d -> tableText().contains("fail"));
+        String before = tableText();
+        WebElement bus = browser.findElement(By.id("op-bus"));
+        bus.clear();
+        bus.sendKeys("95");
+        waiting().until(d -> !tableText().isEmpty() && !tableText().equals(before));
+        assertFalse(tableText().equals(before), "the ranking follows the bus voltage");
+        assertTrue(tableText().contains("\u2716 fail"), "verdicts as symbol and word: " + tableText());
+        onlyOwnOrigin();
+    }
+
+    @Test
+    void pairPageShowsTheSheetWithItsPlots() {
+        browser.get(server.url() + "pair?switch=QND-65G150D&driver=QND-D06L&driver=QND-D06H&freq=200&bus=375");
+        waiting().until(d -> d.findElements(By.cssSelector("#sheets iframe")).size() == 2);
+        assertTrue(browser.findElement(By.id("compare")).getText().contains("drive-current"));
+        // Both drivers' gate waveforms overlaid: one uPlot per edge, each with both drivers in its legend.
+        waiting().until(d -> d.findElements(By.cssSelector("#overlay .overlay-plot .uplot canvas")).size() == 2);
+        for (WebElement plot : browser.findElements(By.cssSelector("#overlay .overlay-plot"))) {
+            String legend = plot.findElement(By.cssSelector(".u-legend")).getText();
+            assertTrue(legend.contains("QND-D06L") && legend.contains("QND-D06H"), legend);
+        }
+        WebElement frame = browser.findElements(By.cssSelector("#sheets iframe")).get(0);
+        browser.switchTo().frame(frame);
+        waiting().until(d -> d.findElements(By.tagName("svg")).size() >= 3);
+        assertTrue(browser.findElements(By.tagName("svg")).size() >= 3, "gate waveforms, step response, margins");
+        browser.switchTo().defaultContent();
+        onlyOwnOrigin();
+    }
+
+    @Test
+    void designPageShowsTheFailingStage() throws Exception {
+        Path stages = Project.file("examples/stages.csv");
+        Path bom = Project.file("examples/bom.csv");
+        CliRun c = CliRun.on(cat, "check", stages.toString(), "--bom", bom.toString(), "--format", "json");
+        JsonNode report = new ObjectMapper().readTree(c.out());
+        List<String> failing = new ArrayList<>();
+        for (JsonNode s : report.get("results")) {
+            if (s.get("verdict").asText().equals("fail")) {
+                failing.add(s.get("stage").asText());
+            }
+        }
+        assertFalse(failing.isEmpty(), "the example design has a failing stage");
+        browser.get(server.url() + "design");
+        browser.findElement(By.name("stages")).sendKeys(stages.toAbsolutePath().toString());
+        browser.findElement(By.name("bom")).sendKeys(bom.toAbsolutePath().toString());
+        browser.findElement(By.cssSelector("#q button")).click();
+        waiting().until(d -> !tableText().isEmpty());
+        for (WebElement row : browser.findElements(By.cssSelector("#out tbody tr"))) {
+            String stage = row.findElements(By.tagName("td")).get(0).getText();
+            assertEquals(failing.contains(stage), row.getText().contains("\u2716 fail"), stage + ": " + row.getText());
+        }
+        assertEquals(3, browser.findElements(By.cssSelector("#downloads button")).size(), "JSON, JUnit XML, HTML");
+        onlyOwnOrigin();
+    }
+
+    @Test
+    void catalogTextWithMarkupShowsAsText() {
+        browser.get(server.url() + "part?kind=switch&part=XSS-1");
+        waiting().until(d -> tableText().contains("XSS-1"));
+        assertTrue(tableText().contains(HOSTILE), "the description shows as typed: " + tableText());
+        assertTrue(tableText().contains("Test <b>Maker</b>"));
+        Object pwned = ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;");
+        assertEquals(Boolean.TRUE, pwned, "no catalog text ran as script");
+        browser.get(server.url() + "?words=XSS");
+        waiting().until(d -> tableText().contains("XSS-1"));
+        assertTrue(tableText().contains(HOSTILE));
+        assertEquals(Boolean.TRUE, ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;"));
+        onlyOwnOrigin();
+    }
+}
