@@ -54,6 +54,10 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--include-obsolete", description = "Also consider obsolete parts.")
     boolean includeObsolete;
 
+    @Option(names = "--all", description = "Compare every part of the kind and list each one not offered with the"
+            + " reason.")
+    boolean all;
+
     @Mixin
     MarginOptions margins;
 
@@ -94,7 +98,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");
             }
             Row original = found.get(0);
-            r = Replacement.search(new CatalogParts(c), original, top, includeObsolete,
+            r = Replacement.search(new CatalogParts(c), original, top, includeObsolete, all,
                     stages == null ? "" : stages.toString(), stageRows, b, m);
         }
         try (Writer w = output.open(ctx)) {
