@@ -32,6 +32,9 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
     OperatingPointOptions point;
 
     @Mixin
+    StageRowOptions saved;
+
+    @Mixin
     MarginOptions margins;
 
     @Mixin
@@ -43,7 +46,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        OperatingPoint.Spec spec = point.spec();
+        OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         PairResult r;
         GateDrive drive;
         try (Catalog c = Catalog.open(catalogDir())) {
