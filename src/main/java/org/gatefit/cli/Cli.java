@@ -98,6 +98,7 @@ public final class Cli {
                 cl.addSubcommand(name, command(name, ctx));
             }
         }
+        offerOnlyFormatsMade(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -184,6 +185,25 @@ public final class Cli {
                 last = last.subcommand();
             }
             throw new CommandLine.ExecutionException(last.commandSpec().commandLine(), e.getMessage(), e);
+        }
+    }
+
+    /**
+     * A command without an HTML report offers (in its help and in completion) only the formats it
+     * makes: its {@code --format} option is rebuilt with those candidates, bound to the same field.
+     */
+    private static void offerOnlyFormatsMade(CommandLine cl) {
+        List<String> made = java.util.Arrays.stream(Format.values()).filter(f -> f != Format.HTML)
+                .map(f -> f.name().toLowerCase(java.util.Locale.ROOT)).toList();
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            CommandLine.Model.CommandSpec spec = sub.getCommandSpec();
+            CommandLine.Model.OptionSpec format = spec.findOption("--format");
+            if (format == null || Format.HTML_COMMANDS.contains(spec.name())) {
+                continue;
+            }
+            spec.remove(format);
+            spec.addOption(CommandLine.Model.OptionSpec.builder(format).completionCandidates(made)
+                    .description("Output format: " + String.join(", ", made) + " (default: ${DEFAULT-VALUE}).").build());
         }
     }
 

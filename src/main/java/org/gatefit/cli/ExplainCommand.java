@@ -1,6 +1,8 @@
 package org.gatefit.cli;
 
 import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
@@ -10,6 +12,7 @@ import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
+import org.gatefit.report.CompareReports;
 import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
 import picocli.CommandLine.Command;
@@ -20,16 +23,26 @@ import picocli.CommandLine.Option;
         header = "Show the full calculation sheet of one driver–switch pair.",
         description = {"Every rule with the figures and limits it compared and what would fix it; every computed"
             + " figure with its unit and formula; the recommended gate-resistor range and E24 value, the bootstrap"
-            + " capacitor for a high side, driver losses and switching-time estimates. Exit 1 when the pair fails."})
+            + " capacitor for a high side, driver losses and switching-time estimates. Exit 1 when the pair fails.",
+            "",
+            "With --driver given two to four times, the drivers are compared with the switch side by side (checks and"
+            + " figures in columns, in HTML the gate waveforms overlaid); exit 1 when any of the pairs fails."})
 final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
-    @Option(names = "--driver", required = true, paramLabel = "PART", description = "The gate driver.")
-    String driverPn;
+    /** How many drivers one report compares side by side. */
+    static final int MAX_COMPARED = 4;
+
+    @Option(names = "--driver", required = true, paramLabel = "PART",
+            description = "The gate driver; give it up to four times to compare drivers side by side.")
+    List<String> driverPns;
 
     @Option(names = "--switch", required = true, paramLabel = "PART", description = "The switch.")
     String switchPn;
 
     @Mixin
     OperatingPointOptions point;
+
+    @Mixin
+    StageRowOptions saved;
 
     @Mixin
     MarginOptions margins;
@@ -43,20 +56,38 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        OperatingPoint.Spec spec = point.spec();
-        PairResult r;
-        GateDrive drive;
+        if (driverPns.size() > MAX_COMPARED) {
+            throw new UsageException("--driver: at most " + MAX_COMPARED + " drivers compared at once, got "
+                    + driverPns.size());
+        }
+        OperatingPoint.Spec spec = point.spec(saved.row(ctx));
+        List<PairResult> rs = new ArrayList<>();
+        List<GateDrive> drives = new ArrayList<>();
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
-            DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, driverPn));
+            List<DriverPart> drs = new ArrayList<>();
+            for (String pn : driverPns) {
+                DriverPart dr = DriverPart.of(PairSupport.part(c, Kind.DRIVER, pn));
+                if (drs.stream().anyMatch(d -> d.partNumber().equalsIgnoreCase(dr.partNumber()))) {
+                    throw new UsageException("--driver " + pn + " is named twice");
+                }
+                drs.add(dr);
+            }
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);
-            r = Rules.evaluate(dr, sw, op, margins.margins());
-            drive = GateDrive.of(sw, r);
+            for (DriverPart dr : drs) {
+                PairResult r = Rules.evaluate(dr, sw, op, margins.margins());
+                rs.add(r);
+                drives.add(GateDrive.of(sw, r));
+            }
         }
         try (Writer w = output.open(ctx)) {
-            MatchReports.explain(r, drive, output.format, output.colour(ctx), w);
+            if (rs.size() == 1) {
+                MatchReports.explain(rs.get(0), drives.get(0), output.format, output.colour(ctx), w);
+            } else {
+                CompareReports.render(rs, drives, output.format, w);
+            }
         }
-        return r.verdict() == Verdict.FAIL ? ExitCode.FAILED : ExitCode.OK;
+        return rs.stream().anyMatch(r -> r.verdict() == Verdict.FAIL) ? ExitCode.FAILED : ExitCode.OK;
     }
 }

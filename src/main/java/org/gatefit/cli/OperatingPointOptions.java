@@ -24,7 +24,8 @@ final class OperatingPointOptions {
     @Option(names = "--bus", paramLabel = "V", description = "DC bus voltage, V (no default: high-side and dv/dt checks need it).")
     String bus;
 
-    @Option(names = "--freq", paramLabel = "kHz", required = true, description = "Switching frequency; a bare number is kHz.")
+    @Option(names = "--freq", paramLabel = "kHz",
+            description = "Switching frequency; a bare number is kHz (required unless a --stage row gives it).")
     String freq;
 
     @Option(names = "--edge", paramLabel = "ns",
@@ -93,7 +94,15 @@ final class OperatingPointOptions {
     }
 
     /** The options as a stage-sheet row, parsed exactly as a stage sheet's cells would be. */
-    OperatingPoint.Spec spec() throws BadValueException {
+    OperatingPoint.Spec spec() throws BadValueException, UsageException {
+        return spec(null);
+    }
+
+    /**
+     * The operating point of a stage-sheet row (null for none) with the options given here over its
+     * cells, parsed exactly as a stage sheet's cells would be.
+     */
+    OperatingPoint.Spec spec(Row stage) throws BadValueException, UsageException {
         // Option, stage-sheet column, value as typed: one row each, so errors name the option.
         String[][] cells = {
             {"--side", "side", side}, {"--bus", "bus_v", bus}, {"--freq", "f_sw_khz", freq},
@@ -102,13 +111,21 @@ final class OperatingPointOptions {
             {"--pwm", "pwm_sense", pwm}, {"--rg", "r_g_ohm", rg}, {"--rg-off", "r_g_off_ohm", rgOff},
             {"--duty-max", "duty_max", dutyMax}, {"--parallel", "parallel", parallel}, {"--loop", "loop_nh", loop},
             {"--v-f-boot", "v_f_boot_v", vfBoot}, {"--r-boot", "r_boot_ohm", rBoot}};
-        Schema stage = Schema.of(Kind.STAGE);
+        Schema sheet = Schema.of(Kind.STAGE);
         Map<String, Object> values = new LinkedHashMap<>();
+        if (stage != null) {
+            for (String[] cell : cells) {
+                Object v = stage.values().get(cell[1]);
+                if (v != null) {
+                    values.put(cell[1], v);
+                }
+            }
+        }
         for (String[] cell : cells) {
             if (cell[2] == null) {
                 continue;
             }
-            Column c = stage.column(cell[1]).orElseThrow();
+            Column c = sheet.column(cell[1]).orElseThrow();
             if (cell[2].matches(".*\\d,\\d.*")) {
                 // Refused rather than read: "1,000" may be a thousands separator as well as a decimal comma.
                 throw new BadValueException(cell[0] + ": '" + cell[2] + "' has a comma; on the command line write a"
@@ -123,6 +140,11 @@ final class OperatingPointOptions {
             } catch (BadValueException ex) {
                 throw new BadValueException(cell[0] + ": " + ex.getMessage());
             }
+        }
+        if (!values.containsKey("f_sw_khz")) {
+            throw new UsageException(stage == null ? "Missing required option: '--freq=kHz' (or take the operating"
+                    + " point from a stage-sheet row: --stages FILE --stage ID)" : "--stage " + stage.key() + ": the row"
+                    + " has no f_sw_khz; give --freq");
         }
         OperatingPoint.Spec s = OperatingPoint.Spec.fromStage(new Row(Kind.STAGE, "command line", "", 0, values, Map.of()));
         if (dvdt != null) {

@@ -45,6 +45,10 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--stages", paramLabel = "STAGES.csv", description = "Re-check the stages that use PART.")
     Path stages;
 
+    @Option(names = "--stage", paramLabel = "ID",
+            description = "Re-check only this stage-sheet row (it must use PART).")
+    String stage;
+
     @Option(names = "--bom", paramLabel = "BOM.csv", description = "BOM to resolve the stage sheet's designators.")
     Path bom;
 
@@ -53,6 +57,10 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
 
     @Option(names = "--include-obsolete", description = "Also consider obsolete parts.")
     boolean includeObsolete;
+
+    @Option(names = "--all", description = "Compare every part of the kind and list each one not offered with the"
+            + " reason.")
+    boolean all;
 
     @Mixin
     MarginOptions margins;
@@ -72,12 +80,18 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         if (bom != null && stages == null) {
             throw new UsageException("--bom needs --stages (the BOM resolves the stage sheet's designators)");
         }
+        if (stage != null && stages == null) {
+            throw new UsageException("--stage " + stage + " needs --stages FILE, the stage sheet it is a row of");
+        }
         Margins m = margins.margins();
         List<Row> stageRows = List.of();
         Bom b = null;
         if (stages != null) {
             stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString(),
                     new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println));
+            if (stage != null) {
+                stageRows = List.of(StageRowOptions.find(stageRows, stages.toString(), stage));
+            }
             if (bom != null) {
                 if (!Files.isRegularFile(ctx.path(bom))) {
                     throw new NoSuchFileException(bom.toString());
@@ -96,8 +110,12 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");
             }
             Row original = found.get(0);
-            r = Replacement.search(new CatalogParts(c), original, top, includeObsolete,
+            r = Replacement.search(new CatalogParts(c), original, top, includeObsolete, all,
                     stages == null ? "" : stages.toString(), stageRows, b, m);
+            if (stage != null && r.stagesUsing().isEmpty()) {
+                throw new UsageException("--stage " + stage + ": that row of " + stages + " does not use " + part
+                        + "; name a stage it sits in");
+            }
         }
         try (Writer w = output.open(ctx)) {
             ReplaceReports.render(r, output.format, w);

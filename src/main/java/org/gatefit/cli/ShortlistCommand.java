@@ -59,6 +59,9 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
     OperatingPointOptions point;
 
     @Mixin
+    StageRowOptions saved;
+
+    @Mixin
     MarginOptions margins;
 
     @Mixin
@@ -73,7 +76,7 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         if (top < 1) {
             throw new UsageException("--top: expected at least 1, got " + top);
         }
-        OperatingPoint.Spec spec = point.spec();
+        OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         Margins m = margins.margins();
         List<Prefilter.Condition> asked = filters();
         try (Catalog c = openCatalog()) {

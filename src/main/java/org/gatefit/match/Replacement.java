@@ -34,6 +34,11 @@ import org.gatefit.catalog.Schema;
  * obsolete, and (with stages) no pairing fails or gets a worse verdict on any rule; pin-compatible
  * = same pinout otherwise; functional = other pinout, no worse rating and no failing pairing (parts
  * with another pinout and a worse rating are not offered).
+ *
+ * <p>An essential numeric rating worse than the original's by no more than {@link #RATING_TOLERANCE}
+ * is not a reason to drop the part: it is assessed {@code re-verify} (the design may not need the
+ * original's full rating) and so offered as pin-compatible at best, never drop-in or functional.
+ * Every part compared and not offered can be listed with the reason ({@link NotOffered}).
  */
 public final class Replacement {
 
@@ -54,6 +59,12 @@ public final class Replacement {
     public static final double CHARGE_WINDOW = 0.20;
     /** Window for threshold, plateau, recommended drive and UVLO levels, in volts (common practice, no source). */
     public static final double LEVEL_WINDOW = 0.5;
+    /**
+     * How far an essential numeric rating (blocking voltage, V_GS limits, offset and isolation
+     * ratings) may fall short of the original's, as a fraction of it, and still be offered with a
+     * re-verify note rather than dropped (common practice, no source).
+     */
+    public static final double RATING_TOLERANCE = 0.10;
 
     static final List<Param> SWITCH = List.of(
             new Param("technology", "technology", Sense.SAME, true, 0),
@@ -143,14 +154,49 @@ public final class Replacement {
     public record StageNote(String stage, String rule, Verdict verdict, Verdict was, String message) {
     }
 
-    /** A ranked substitute. */
+    /** How a stage's result with a candidate in place compares with the original's. */
+    public enum Change {
+        UNCHANGED("unchanged"), BETTER("better"), WORSE("worse");
+
+        private final String id;
+
+        Change(String id) {
+            this.id = id;
+        }
+
+        public String id() {
+            return id;
+        }
+    }
+
+    /**
+     * One stage re-checked with a candidate in place, against the original: worse when any rule's
+     * verdict got worse, better when some got better and none worse, unchanged otherwise.
+     *
+     * @param stage   stage id
+     * @param verdict the stage's verdict with the candidate
+     * @param was     with the original
+     * @param change  unchanged / better / worse
+     */
+    public record StageOutcome(String stage, Verdict verdict, Verdict was, Change change) {
+    }
+
+    /** A part compared and not offered, with the reason in words. */
+    public record NotOffered(String partNumber, String reason) {
+    }
+
+    /**
+     * A ranked substitute; {@code checks} holds only the stage checks whose verdict differs from the
+     * original's (what stays the same is said once, {@link Result#standing}).
+     */
     public record Candidate(String partNumber, String maker, String pinout, String lifecycle, long stock, double price,
                             Grade grade, double score, List<Difference> differences, List<StageNote> checks,
-                            List<String> reasons) {
+                            List<String> reasons, List<StageOutcome> stages) {
         public Candidate {
             differences = List.copyOf(differences);
             checks = List.copyOf(checks);
             reasons = List.copyOf(reasons);
+            stages = List.copyOf(stages);
         }
     }
 
@@ -163,12 +209,19 @@ public final class Replacement {
      * @param notOffered  of those, how many are not offered (worse essential rating, obsolete, or
      *                    another pinout with a worse rating or a failing pairing)
      * @param stagesUsing stage ids the part sits in (empty without --stages)
+     * @param standing    the checks that do not pass in those stages with the original in place, said
+     *                    once (a candidate's {@code checks} hold only what it changes)
+     * @param listed      whether {@code notOfferedParts} lists every part not offered (asked for)
+     * @param notOfferedParts each part not offered with the reason, by part number (when listed)
      */
     public record Result(String part, Kind kind, Row original, List<Candidate> candidates, int considered,
-                         int notOffered, List<String> stagesUsing, Margins margins) {
+                         int notOffered, List<String> stagesUsing, Margins margins, List<StageNote> standing,
+                         boolean listed, List<NotOffered> notOfferedParts) {
         public Result {
             candidates = List.copyOf(candidates);
             stagesUsing = List.copyOf(stagesUsing);
+            standing = List.copyOf(standing);
+            notOfferedParts = List.copyOf(notOfferedParts);
         }
     }
 
@@ -189,9 +242,9 @@ public final class Replacement {
         Prefilter.Builder b = new Prefilter.Builder();
         if (original.kind() == Kind.SWITCH) {
             b.require(Prefilter.Condition.is("technology", Op.EQ, original.text("technology")));
-            b.require(Prefilter.Condition.of("v_block_v", Op.GE, original.number("v_block_v")));
-            b.require(Prefilter.Condition.of("v_gs_max_v", Op.GE, original.number("v_gs_max_v")));
-            b.require(Prefilter.Condition.of("v_gs_min_v", Op.LE, original.number("v_gs_min_v")));
+            b.require(Prefilter.Condition.of("v_block_v", Op.GE, tolerated(Sense.HIGHER, original.number("v_block_v"))));
+            b.require(Prefilter.Condition.of("v_gs_max_v", Op.GE, tolerated(Sense.HIGHER, original.number("v_gs_max_v"))));
+            b.require(Prefilter.Condition.of("v_gs_min_v", Op.LE, tolerated(Sense.LOWER, original.number("v_gs_min_v"))));
         } else {
             b.require(Prefilter.Condition.is("topology", Op.EQ, original.text("topology")));
             b.require(Prefilter.Condition.is("input_polarity", Op.EQ, original.text("input_polarity")));
@@ -208,9 +261,20 @@ public final class Replacement {
      */
     public static Result search(PartSource parts, Row original, int top, boolean includeObsolete, String stageFile,
                                 List<Row> stages, Bom bom, Margins m) throws java.io.IOException {
+        return search(parts, original, top, includeObsolete, false, stageFile, stages, bom, m);
+    }
+
+    /**
+     * As {@link #search(PartSource, Row, int, boolean, String, List, Bom, Margins)}; with
+     * {@code listAll} every part of the kind is compared (no prefilter) and each one not offered is
+     * listed with the reason.
+     */
+    public static Result search(PartSource parts, Row original, int top, boolean includeObsolete, boolean listAll,
+                                String stageFile, List<Row> stages, Bom bom, Margins m) throws java.io.IOException {
         Search search = new Search(original, top, includeObsolete, stageFile, stages, bom,
-                pn -> lookup(parts, Kind.DRIVER, pn), pn -> lookup(parts, Kind.SWITCH, pn), m);
-        parts.scan(original.kind(), prefilter(original, includeObsolete), search);
+                pn -> lookup(parts, Kind.DRIVER, pn), pn -> lookup(parts, Kind.SWITCH, pn), m, listAll);
+        parts.scan(original.kind(), listAll ? Prefilter.NONE : prefilter(original, includeObsolete),
+                search);
         return search.result(parts.count(original.kind()));
     }
 
@@ -254,6 +318,7 @@ public final class Replacement {
         private final Row original;
         private final int top;
         private final boolean includeObsolete;
+        private final boolean listAll;
         private final String stageFile;
         private final Bom bom;
         private final Function<String, Optional<Row>> drivers;
@@ -263,15 +328,25 @@ public final class Replacement {
         private final String pn;
         private final List<Row> using = new ArrayList<>();
         private final List<StageCheck.StageResult> baseline = new ArrayList<>();
+        private final List<StageNote> standing = new ArrayList<>();
+        private final List<NotOffered> left = new ArrayList<>();
         private final java.util.PriorityQueue<Kept> best;
         private int offered;
 
         /** See {@link #run} for the parameters; the stages the original sits in are checked here, once. */
         public Search(Row original, int top, boolean includeObsolete, String stageFile, List<Row> stages, Bom bom,
                       Function<String, Optional<Row>> drivers, Function<String, Optional<Row>> switches, Margins m) {
+            this(original, top, includeObsolete, stageFile, stages, bom, drivers, switches, m, false);
+        }
+
+        /** As above; with {@code listAll} every part not offered is kept with the reason. */
+        public Search(Row original, int top, boolean includeObsolete, String stageFile, List<Row> stages, Bom bom,
+                      Function<String, Optional<Row>> drivers, Function<String, Optional<Row>> switches, Margins m,
+                      boolean listAll) {
             this.original = original;
             this.top = top;
             this.includeObsolete = includeObsolete;
+            this.listAll = listAll;
             this.stageFile = stageFile;
             this.bom = bom;
             this.drivers = drivers;
@@ -291,6 +366,12 @@ public final class Replacement {
                     if (used != null && used.equalsIgnoreCase(pn)) {
                         using.add(stages.get(i));
                         baseline.add(r);
+                        for (Check c : r.checks()) {
+                            if (c.verdict() != Verdict.PASS) {
+                                standing.add(new StageNote(r.stage(), c.rule().id(), c.verdict(), c.verdict(),
+                                        c.message()));
+                            }
+                        }
                     }
                 }
             }
@@ -298,20 +379,29 @@ public final class Replacement {
 
         @Override
         public void accept(Row cand) {
-            if (cand.key().equalsIgnoreCase(pn) || (!includeObsolete && Lifecycle.of(cand.text("lifecycle")) == Lifecycle.OBSOLETE)) {
+            if (cand.key().equalsIgnoreCase(pn)) {
                 return;
             }
-            Optional<Candidate> q = evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m,
-                    false);
-            if (q.isEmpty()) {
+            if (!includeObsolete && Lifecycle.of(cand.text("lifecycle")) == Lifecycle.OBSOLETE) {
+                if (listAll) {
+                    left.add(new NotOffered(cand.key(), "obsolete (--include-obsolete considers it)"));
+                }
+                return;
+            }
+            Evaluation q = evaluate(original, cand, params, using, baseline, stageFile, bom, drivers, switches, m,
+                    false, listAll);
+            if (q.candidate() == null) {
+                if (listAll) {
+                    left.add(new NotOffered(cand.key(), q.rejected()));
+                }
                 return;
             }
             offered++;
             if (best.size() < top) {
-                best.add(new Kept(q.get(), cand));
-            } else if (top > 0 && RANKING.compare(q.get(), best.peek().quick()) < 0) {
+                best.add(new Kept(q.candidate(), cand));
+            } else if (top > 0 && RANKING.compare(q.candidate(), best.peek().quick()) < 0) {
                 best.poll();
-                best.add(new Kept(q.get(), cand));
+                best.add(new Kept(q.candidate(), cand));
             }
         }
 
@@ -323,25 +413,37 @@ public final class Replacement {
         public Result result(int ofKind) {
             List<Candidate> out = new ArrayList<>(best.size());
             for (Kept k : best) {
-                out.add(evaluate(original, k.row(), params, using, baseline, stageFile, bom, drivers, switches, m, true)
-                        .orElseThrow());
+                out.add(java.util.Objects.requireNonNull(evaluate(original, k.row(), params, using, baseline, stageFile,
+                        bom, drivers, switches, m, true, false).candidate()));
             }
             int considered = Math.max(0, ofKind - 1);
             int notOffered = Math.max(0, considered - offered);
             out.sort(RANKING);
             List<String> ids = using.stream().map(Row::key).toList();
-            return new Result(pn, original.kind(), original, out, considered, notOffered, ids, m);
+            List<NotOffered> listed = new ArrayList<>(left);
+            listed.sort(Comparator.comparing(NotOffered::partNumber));
+            return new Result(pn, original.kind(), original, out, considered, notOffered, ids, m, standing, listAll,
+                    listed);
         }
     }
 
-    private static Optional<Candidate> evaluate(Row orig, Row cand, List<Param> params, List<Row> using,
-                                                List<StageCheck.StageResult> baseline, String stageFile, Bom bom,
-                                                Function<String, Optional<Row>> drivers,
-                                                Function<String, Optional<Row>> switches, Margins m,
-                                                boolean describe) {
+    /** A candidate offered, or the reason it is not (worded only when asked for). */
+    private record Evaluation(Candidate candidate, String rejected) {
+        static Evaluation no(boolean word, java.util.function.Supplier<String> why) {
+            return new Evaluation(null, word ? why.get() : "");
+        }
+    }
+
+    private static Evaluation evaluate(Row orig, Row cand, List<Param> params, List<Row> using,
+                                       List<StageCheck.StageResult> baseline, String stageFile, Bom bom,
+                                       Function<String, Optional<Row>> drivers,
+                                       Function<String, Optional<Row>> switches, Margins m,
+                                       boolean describe, boolean wordRejection) {
         Schema schema = Schema.of(orig.kind());
         List<Difference> diffs = new ArrayList<>();
         List<String> reasons = new ArrayList<>();
+        List<String> shortOf = new ArrayList<>();
+        String firstWorse = null;
         int worse = 0;
         int reverify = 0;
         for (Param p : params) {
@@ -352,17 +454,30 @@ public final class Replacement {
                 continue;
             }
             String assessment = assess(p, a, b);
+            String unit = col.unitSymbol();
             if (p.essential() && assessment.equals("worse")) {
-                return Optional.empty();
+                return Evaluation.no(wordRejection, () -> p.sense() == Sense.SAME
+                        ? p.label() + " " + show(b) + ", not " + show(a) + " (must be equal)"
+                        : p.label() + " " + show(b) + suffix(unit) + " against " + show(a) + suffix(unit)
+                        + ": short by more than the " + Eng.pct(RATING_TOLERANCE) + " tolerance (must be equal or "
+                        + (p.sense() == Sense.HIGHER ? "higher" : "lower") + ")");
+            }
+            if (p.essential() && assessment.equals("re-verify") && b != null) {
+                shortOf.add(p.label() + " " + show(a) + " → " + show(b) + suffix(unit));
             }
             switch (assessment) {
-                case "worse" -> worse++;
+                case "worse" -> {
+                    worse++;
+                    if (firstWorse == null) {
+                        firstWorse = p.label() + " " + show(a) + " → " + show(b) + suffix(unit);
+                    }
+                }
                 case "re-verify" -> reverify++;
                 default -> {
                 }
             }
             if (describe) {
-                diffs.add(new Difference(p.column(), p.label(), show(a), b == null ? "unknown" : show(b), col.unitSymbol(),
+                diffs.add(new Difference(p.column(), p.label(), show(a), b == null ? "unknown" : show(b), unit,
                         assessment));
             }
         }
@@ -372,7 +487,8 @@ public final class Replacement {
                 String.valueOf(cand.text("pinout")), "", samePinout ? "equal" : "re-verify"));
         // Re-check every stage the original sits in, with the candidate in its place.
         List<StageNote> notes = new ArrayList<>();
-        boolean stageFail = false;
+        List<StageOutcome> outcomes = new ArrayList<>();
+        String failedStage = null;
         boolean stageWorse = false;
         double stageScore = 1;
         if (!using.isEmpty()) {
@@ -387,21 +503,31 @@ public final class Replacement {
                 StageCheck.StageResult now = rep.results().get(i);
                 StageCheck.StageResult was = baseline.get(i);
                 sum += now.score();
+                boolean anyWorse = false;
+                boolean anyBetter = false;
                 for (Check c : now.checks()) {
                     Verdict before = was.checks().stream().filter(x -> x.rule() == c.rule()).map(Check::verdict)
                             .findFirst().orElse(Verdict.UNKNOWN);
                     boolean got = c.verdict().ordinal() > before.ordinal() && c.rule() != Rule.LIFECYCLE;
-                    if (c.verdict() == Verdict.FAIL && before != Verdict.FAIL) {
-                        stageFail = true; // a failure the original did not have
+                    if (c.verdict() == Verdict.FAIL && before != Verdict.FAIL && failedStage == null) {
+                        failedStage = now.stage(); // a failure the original did not have
                     }
                     stageWorse |= got;
-                    if (c.verdict() != Verdict.PASS || got) {
+                    anyWorse |= c.verdict().ordinal() > before.ordinal();
+                    anyBetter |= c.verdict().ordinal() < before.ordinal();
+                    // What changes, said per candidate; a lifecycle check that got better is the candidate's
+                    // own status, which its row shows.
+                    if (c.verdict().ordinal() > before.ordinal()
+                            || (c.verdict().ordinal() < before.ordinal() && c.rule() != Rule.LIFECYCLE)) {
                         notes.add(new StageNote(now.stage(), c.rule().id(), c.verdict(), before, c.message()));
                     }
                 }
+                outcomes.add(new StageOutcome(now.stage(), now.verdict(), was.verdict(),
+                        anyWorse ? Change.WORSE : anyBetter ? Change.BETTER : Change.UNCHANGED));
             }
             stageScore = sum / rep.results().size();
         }
+        boolean stageFail = failedStage != null;
         boolean obsolete = Lifecycle.of(cand.text("lifecycle")) == Lifecycle.OBSOLETE;
         Grade grade;
         if (samePinout && worse == 0 && reverify == 0 && !stageFail && !stageWorse && !obsolete) {
@@ -411,8 +537,13 @@ public final class Replacement {
             if (worse > 0) {
                 reasons.add(worse + " rating" + (worse == 1 ? " is" : "s are") + " worse than the original's");
             }
-            if (reverify > 0) {
-                reasons.add(reverify + " parameter" + (reverify == 1 ? "" : "s") + " outside the re-verify window");
+            for (String r : shortOf) {
+                reasons.add(r + " falls short of the original's rating by less than the "
+                        + Eng.pct(RATING_TOLERANCE) + " tolerance: re-verify that the design does not need it");
+            }
+            int outside = reverify - shortOf.size();
+            if (outside > 0) {
+                reasons.add(outside + " parameter" + (outside == 1 ? "" : "s") + " outside the re-verify window");
             }
             if (stageFail) {
                 reasons.add("a stage fails with it in place");
@@ -423,9 +554,16 @@ public final class Replacement {
                 reasons.add("it is obsolete");
             }
         } else {
-            // Functional means electrically fit: no worse rating and no failing pairing.
-            if (stageFail || worse > 0 || obsolete) {
-                return Optional.empty();
+            // Functional means electrically fit: no worse rating, no rating short of the original's and
+            // no failing pairing.
+            if (stageFail || worse > 0 || !shortOf.isEmpty() || obsolete) {
+                String pinout = String.valueOf(cand.text("pinout"));
+                String fw = firstWorse;
+                String sf = failedStage;
+                return Evaluation.no(wordRejection, () -> "other pinout (" + pinout + ") and "
+                        + (fw != null ? "a worse rating: " + fw
+                        : !shortOf.isEmpty() ? "a rating short of the original's: " + shortOf.get(0)
+                        : sf != null ? "stage " + sf + " fails with it in place" : "obsolete"));
             }
             grade = Grade.FUNCTIONAL;
             reasons.add("other pinout (" + cand.text("pinout") + "): new footprint or layout");
@@ -434,8 +572,23 @@ public final class Replacement {
         Lifecycle life = Lifecycle.of(cand.text("lifecycle"));
         double score = life.availability(stock) * Math.max(0.2, 1 - 0.05 * reverify - 0.1 * worse)
                 * Math.max(0, Math.min(1, stageScore));
-        return Optional.of(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life.id(), stock,
-                cand.number("unit_price"), grade, Math.max(0, Math.min(1, score)), diffs, notes, reasons));
+        return new Evaluation(new Candidate(cand.key(), cand.text("maker"), cand.text("pinout"), life.id(), stock,
+                cand.number("unit_price"), grade, Math.max(0, Math.min(1, score)), diffs, notes, reasons, outcomes),
+                null);
+    }
+
+    private static String suffix(String unit) {
+        return unit.isEmpty() ? "" : " " + unit;
+    }
+
+    /**
+     * The least an essential rating may be (HIGHER) or the most (LOWER) and still be offered: the
+     * original's value less {@link #RATING_TOLERANCE} of its magnitude. The prefilter and
+     * {@link #assess} use this one expression, so they agree at the edge.
+     */
+    static double tolerated(Sense sense, double original) {
+        double slack = RATING_TOLERANCE * Math.abs(original);
+        return sense == Sense.HIGHER ? original - slack : original + slack;
     }
 
     /**
@@ -471,8 +624,8 @@ public final class Replacement {
             return "equal";
         }
         return switch (p.sense()) {
-            case HIGHER -> y > x ? "better" : "worse";
-            case LOWER -> y < x ? "better" : "worse";
+            case HIGHER -> y > x ? "better" : p.essential() && y >= tolerated(Sense.HIGHER, x) ? "re-verify" : "worse";
+            case LOWER -> y < x ? "better" : p.essential() && y <= tolerated(Sense.LOWER, x) ? "re-verify" : "worse";
             case WINDOW_REL -> Math.abs(y - x) <= p.window() * Math.abs(x) ? "within-window" : "re-verify";
             case WINDOW_ABS -> Math.abs(y - x) <= p.window() ? "within-window" : "re-verify";
             case SAME, YES -> throw new IllegalStateException();

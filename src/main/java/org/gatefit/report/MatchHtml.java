@@ -146,6 +146,98 @@ final class MatchHtml {
         Html.end(out);
     }
 
+    // ------------------------------------------------------------------ explain with several drivers
+
+    /** Two to four drivers with one switch: checks and figures side by side, the gate waveforms overlaid. */
+    static void compare(List<PairResult> pairs, List<GateDrive> drives, Writer out) throws IOException {
+        String title = CompareReports.title(pairs);
+        Html.begin(out, title);
+        out.write("<h1>" + Html.esc(title) + "</h1>\n");
+        out.write(Html.context(context(pairs.get(0).point(), pairs.get(0).margins(), null)));
+        StringBuilder head = new StringBuilder("<thead><tr><th></th>");
+        for (PairResult p : pairs) {
+            head.append("<th>").append(Html.esc(p.driver())).append("</th>");
+        }
+        head.append("</tr></thead>\n");
+        out.write("<h2>Checks</h2>\n<table class=\"compare\">\n" + head + "<tbody>\n<tr><td>verdict</td>");
+        for (PairResult p : pairs) {
+            out.write("<td>" + Html.verdict(p.verdict()) + " " + Eng.num(p.score()) + "</td>");
+        }
+        out.write("</tr>\n");
+        for (Rule r : CompareReports.rules(pairs)) {
+            out.write("<tr><td>" + Html.esc(r.id()) + "</td>");
+            for (PairResult p : pairs) {
+                String cell = p.checks().stream().filter(c -> c.rule() == r).findFirst()
+                        .map(c -> Html.verdict(c.verdict()) + "<br><span class=\"muted\">" + Html.esc(c.message())
+                                + "</span>").orElse("");
+                out.write("<td>" + cell + "</td>");
+            }
+            out.write("</tr>\n");
+        }
+        out.write("</tbody>\n</table>\n");
+        out.write("<h2>Gate waveforms</h2>\n" + overlaid(pairs, drives));
+        out.write("<h2>Calculation</h2>\n<table class=\"compare figures\">\n" + head + "<tbody>\n");
+        for (String f : CompareReports.figures(pairs)) {
+            out.write("<tr><td>" + Html.esc(f) + "</td>");
+            for (PairResult p : pairs) {
+                out.write("<td class=\"num\">" + Html.esc(CompareReports.value(p, f)) + "</td>");
+            }
+            out.write("</tr>\n");
+        }
+        out.write("</tbody>\n</table>\n");
+        Html.end(out);
+    }
+
+    /** V_GS of turn-on and of turn-off, one line per driver in one chart each. */
+    private static String overlaid(List<PairResult> pairs, List<GateDrive> drives) {
+        StringBuilder sb = new StringBuilder();
+        SwitchPart s = drives.get(0).switchPart();
+        OperatingPoint op = pairs.get(0).point();
+        GateWaveform.GateCurve c = curve(s, op.parallel());
+        if (c == null || !(op.vDrive() > s.vPlateau())) {
+            return "<p class=\"note\">No waveform: it needs the switch's Q_gd and V_plateau with C_iss or Q_gs, and an"
+                    + " on level above the plateau.</p>\n";
+        }
+        for (boolean rising : new boolean[] {true, false}) {
+            List<GateWaveform.Waveform> ws = new ArrayList<>();
+            List<String> names = new ArrayList<>();
+            double longest = 0;
+            for (int k = 0; k < pairs.size(); k++) {
+                GateDrive g = drives.get(k);
+                double r = rising ? g.rOn() : g.rOff();
+                if (!(r > 0)) {
+                    continue;
+                }
+                GateWaveform.Edge e = rising ? GateWaveform.turnOn(c, op.vDrive(), op.vDriveNeg(), r)
+                        : GateWaveform.turnOff(c, op.vDrive(), op.vDriveNeg(), r);
+                GateWaveform.Waveform w = e.sample(SAMPLES);
+                ws.add(w);
+                names.add(pairs.get(k).driver() + " (" + Eng.of(r, "Ω") + ")");
+                longest = Math.max(longest, w.time()[w.time().length - 1]);
+            }
+            if (ws.isEmpty()) {
+                sb.append("<p class=\"note\">No ").append(rising ? "turn-on" : "turn-off")
+                        .append(" waveform: no driver's output resistance is known.</p>\n");
+                continue;
+            }
+            Scale ts = Scale.time(longest);
+            List<Charts.Line> lines = new ArrayList<>();
+            for (int k = 0; k < ws.size(); k++) {
+                lines.add(new Charts.Line(names.get(k), ts.apply(ws.get(k).time()), ws.get(k).gateVoltage(), false));
+            }
+            List<Charts.Level> levels = new ArrayList<>();
+            levels.add(new Charts.Level("plateau " + Eng.of(s.vPlateau(), "V"), s.vPlateau(), new Color(0xB35900)));
+            if (!Double.isNaN(s.vThMin())) {
+                levels.add(new Charts.Level("V_th,min " + Eng.of(s.vThMin(), "V"), s.vThMin(), new Color(0xC62828)));
+            }
+            String what = rising ? "Turn-on" : "Turn-off";
+            sb.append(Html.figure(Charts.lines(what + ": V_GS with each driver", "time (" + ts.unit() + ")", "V_GS (V)",
+                    lines, levels), what + " (estimate), one line per driver through its total loop resistance (in"
+                    + " brackets); dashed lines the plateau and threshold levels. Loop inductance is ignored."));
+        }
+        return sb.toString();
+    }
+
     /** Time axis scale: the unit and its factor for the longest time shown. */
     private record Scale(String unit, double factor) {
         static Scale time(double seconds) {

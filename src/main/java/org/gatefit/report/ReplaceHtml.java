@@ -47,8 +47,19 @@ final class ReplaceHtml {
                 : "re-checked in stages " + String.join(", ", r.stagesUsing())});
         ctx.add(new String[] {"Margins", MatchJson.marginsLine(r.margins())});
         out.write(Html.context(ctx));
+        if (!r.standing().isEmpty()) {
+            out.write("<h2>With " + Html.esc(r.part()) + " in place</h2>\n<p>Said once: each candidate below lists"
+                    + " only what it changes.</p>\n<table class=\"stage-notes\">\n<thead><tr><th>stages</th>"
+                    + "<th>check</th></tr></thead>\n<tbody>\n");
+            for (java.util.Map.Entry<String, List<String>> e : ReplaceReports.standing(r).entrySet()) {
+                out.write("<tr><td>" + Html.esc(String.join(", ", e.getValue())) + "</td><td>" + Html.esc(e.getKey())
+                        + "</td></tr>\n");
+            }
+            out.write("</tbody>\n</table>\n");
+        }
         if (r.candidates().isEmpty()) {
             out.write("<p>No substitute in the catalog meets the essential ratings.</p>\n");
+            notOffered(r, out);
             Html.end(out);
             return;
         }
@@ -58,8 +69,8 @@ final class ReplaceHtml {
         int i = 1;
         for (Replacement.Candidate c : r.candidates()) {
             Verdict worst = Verdict.PASS;
-            for (Replacement.StageNote n : c.checks()) {
-                worst = worst.and(n.verdict());
+            for (Replacement.StageOutcome o : c.stages()) {
+                worst = worst.and(o.verdict());
             }
             out.write("<tr><td class=\"num\">" + i + "</td><td><a href=\"#cand-" + i + "\">" + Html.esc(c.partNumber())
                     + "</a></td><td><span class=\"v v-grade\">" + Html.esc(c.grade().id()) + "</span></td><td class=\"num\">"
@@ -67,8 +78,8 @@ final class ReplaceHtml {
                     + "</td><td>" + Html.esc(c.lifecycle()) + "</td><td class=\"num\">" + (c.stock() < 0 ? ""
                     : c.stock()) + "</td><td class=\"num\">" + (Double.isNaN(c.price()) ? "" : Eng.num(c.price()))
                     + "</td><td class=\"num\">" + ReplaceReports.count(c, "worse") + " / "
-                    + ReplaceReports.count(c, "re-verify") + "</td><td>" + (c.checks().isEmpty() ? "<span class=\"muted\">"
-                    + "not re-checked</span>" : Html.verdict(worst)) + "</td></tr>\n");
+                    + ReplaceReports.count(c, "re-verify") + "</td><td>" + (r.stagesUsing().isEmpty() ? "<span class=\"muted\">"
+                    + "not re-checked</span>" : Html.verdict(worst) + " " + changes(c)) + "</td></tr>\n");
             i++;
         }
         out.write("</tbody>\n</table>\n");
@@ -106,6 +117,15 @@ final class ReplaceHtml {
                         + assessment(d.assessment()) + "</td></tr>\n");
             }
             out.write("</tbody>\n</table>\n");
+            if (!c.stages().isEmpty()) {
+                out.write("<table class=\"stage-results\">\n<thead><tr><th>stage</th><th>with " + Html.esc(c.partNumber())
+                        + "</th><th>with " + Html.esc(r.part()) + "</th><th>against the original</th></tr></thead>\n<tbody>\n");
+                for (Replacement.StageOutcome o : c.stages()) {
+                    out.write("<tr><td>" + Html.esc(o.stage()) + "</td><td>" + Html.verdict(o.verdict()) + "</td><td>"
+                            + Html.verdict(o.was()) + "</td><td>" + change(o.change()) + "</td></tr>\n");
+                }
+                out.write("</tbody>\n</table>\n");
+            }
             if (!c.checks().isEmpty()) {
                 out.write("<table class=\"stage-notes\">\n<thead><tr><th>stage</th><th>rule</th><th>verdict</th>"
                         + "<th>was</th><th>why</th></tr></thead>\n<tbody>\n");
@@ -126,6 +146,45 @@ final class ReplaceHtml {
             out.write("</section>\n");
             i++;
         }
+        notOffered(r, out);
         Html.end(out);
+    }
+
+    /** A stage's change as a symbol and word. */
+    static String change(Replacement.Change ch) {
+        return Html.esc(switch (ch) {
+            case BETTER -> "▲ better";
+            case WORSE -> "▼ worse";
+            case UNCHANGED -> "= unchanged";
+        });
+    }
+
+    /** How many of the candidate's stages got better, stayed, got worse. */
+    private static String changes(Replacement.Candidate c) {
+        List<String> parts = new ArrayList<>();
+        for (Replacement.Change ch : Replacement.Change.values()) {
+            long n = ReplaceReports.changes(c, ch);
+            if (n > 0) {
+                parts.add(n + " " + ch.id());
+            }
+        }
+        return "<span class=\"muted\">(" + Html.esc(String.join(", ", parts)) + ")</span>";
+    }
+
+    private static void notOffered(Replacement.Result r, Writer out) throws IOException {
+        if (r.notOffered() == 0) {
+            return;
+        }
+        if (!r.listed()) {
+            out.write("<p class=\"muted\">" + r.notOffered() + " not offered; <code>--all</code> lists each with the"
+                    + " reason.</p>\n");
+            return;
+        }
+        out.write("<h2>Not offered</h2>\n<table class=\"not-offered\">\n<thead><tr><th>part</th><th>reason</th></tr>"
+                + "</thead>\n<tbody>\n");
+        for (Replacement.NotOffered n : r.notOfferedParts()) {
+            out.write("<tr><td>" + Html.esc(n.partNumber()) + "</td><td>" + Html.esc(n.reason()) + "</td></tr>\n");
+        }
+        out.write("</tbody>\n</table>\n");
     }
 }

@@ -39,6 +39,16 @@ public final class ReplaceReports {
         String stages = r.stagesUsing().isEmpty() ? "no stage sheet given: pairings not re-checked (use --stages)"
                 : "re-checked in stages " + String.join(", ", r.stagesUsing());
         out.write(md ? "- " + Markdown.escape(stages) + "\n\n" : stages + "\n\n");
+        if (!r.standing().isEmpty()) {
+            String said = "With " + r.part() + " in place (said once; each candidate below lists only what it changes):";
+            out.write(md ? Markdown.escape(said) + "\n\n" : Wrap.wrap(said, WIDTH, 2) + "\n");
+            for (java.util.Map.Entry<String, List<String>> e : standing(r).entrySet()) {
+                List<String> ids = e.getValue();
+                String l = (ids.size() == 1 ? "stage " : "stages ") + String.join(", ", ids) + " " + e.getKey();
+                out.write(md ? "- " + Markdown.escape(l) + "\n" : "  " + Wrap.wrap(l, WIDTH, 6, 2) + "\n");
+            }
+            out.write("\n");
+        }
         if (r.candidates().isEmpty()) {
             out.write("No substitute in the catalog meets the essential ratings.\n");
         } else {
@@ -66,6 +76,9 @@ public final class ReplaceReports {
                     lines.add("stage " + n.stage() + " " + n.rule() + " " + n.verdict().id()
                             + (n.verdict() != n.was() ? " (was " + n.was().id() + ")" : "") + ": " + n.message());
                 }
+                if (!c.stages().isEmpty()) {
+                    lines.add(stagesLine(c));
+                }
                 for (String reason : c.reasons()) {
                     lines.add("why " + c.grade().id() + ": " + reason);
                 }
@@ -80,7 +93,60 @@ public final class ReplaceReports {
                 i++;
             }
         }
+        notOffered(r, out, md);
         out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
+    }
+
+    /**
+     * The original's standing checks, the same sentence said once for every stage it applies to:
+     * "rule verdict: message" → stage ids, in the order first met.
+     */
+    static java.util.Map<String, List<String>> standing(Replacement.Result r) {
+        java.util.Map<String, List<String>> out = new java.util.LinkedHashMap<>();
+        for (Replacement.StageNote n : r.standing()) {
+            out.computeIfAbsent(n.rule() + " " + n.verdict().id() + ": " + n.message(), k -> new ArrayList<>())
+                    .add(n.stage());
+        }
+        return out;
+    }
+
+    /** Each stage's result with the candidate against the original's, grouped: "stages: better A, B; unchanged C". */
+    static String stagesLine(Replacement.Candidate c) {
+        StringBuilder sb = new StringBuilder("stages against ");
+        sb.append("the original:");
+        String sep = " ";
+        for (Replacement.Change ch : Replacement.Change.values()) {
+            List<String> ids = new ArrayList<>();
+            for (Replacement.StageOutcome o : c.stages()) {
+                if (o.change() == ch) {
+                    ids.add(o.stage() + (o.verdict() != o.was() ? " (" + o.was().id() + " → " + o.verdict().id() + ")"
+                            : ""));
+                }
+            }
+            if (!ids.isEmpty()) {
+                sb.append(sep).append(ch.id()).append(' ').append(String.join(", ", ids));
+                sep = "; ";
+            }
+        }
+        return sb.toString();
+    }
+
+    /** The parts compared and not offered: each with the reason (--all), or how to list them. */
+    private static void notOffered(Replacement.Result r, Writer out, boolean md) throws IOException {
+        if (r.notOffered() == 0) {
+            return;
+        }
+        if (!r.listed()) {
+            String hint = "--all lists the " + r.notOffered() + " part" + (r.notOffered() == 1 ? "" : "s")
+                    + " not offered, each with the reason.";
+            out.write("\n" + (md ? Markdown.escape(hint) : hint) + "\n");
+            return;
+        }
+        out.write(md ? "\n### Not offered\n\n" : "\nNot offered (" + r.notOfferedParts().size() + "):\n");
+        for (Replacement.NotOffered n : r.notOfferedParts()) {
+            out.write(md ? "- **" + Markdown.escape(n.partNumber()) + "**: " + Markdown.escape(n.reason()) + "\n"
+                    : "  " + Wrap.wrap(n.partNumber() + ": " + n.reason(), WIDTH, 6, 2) + "\n");
+        }
     }
 
     static int count(Replacement.Candidate c, String assessment) {
@@ -93,10 +159,30 @@ public final class ReplaceReports {
             g.writeStringField("part", r.part());
             g.writeStringField("kind", r.kind().id());
             g.writeNumberField("considered", r.considered());
-            g.writeNumberField("not_offered", r.notOffered());
+            g.writeNumberField("not_offered_count", r.notOffered());
+            if (r.listed()) {
+                g.writeArrayFieldStart("not_offered");
+                for (Replacement.NotOffered n : r.notOfferedParts()) {
+                    g.writeStartObject();
+                    g.writeStringField("part_number", n.partNumber());
+                    g.writeStringField("reason", n.reason());
+                    g.writeEndObject();
+                }
+                g.writeEndArray();
+            }
             g.writeArrayFieldStart("stages");
             for (String s : r.stagesUsing()) {
                 g.writeString(s);
+            }
+            g.writeEndArray();
+            g.writeArrayFieldStart("standing");
+            for (Replacement.StageNote n : r.standing()) {
+                g.writeStartObject();
+                g.writeStringField("stage", n.stage());
+                g.writeStringField("rule", n.rule());
+                g.writeStringField("verdict", n.verdict().id());
+                g.writeStringField("message", n.message());
+                g.writeEndObject();
             }
             g.writeEndArray();
             MatchJson.margins(g, r.margins());
@@ -135,6 +221,16 @@ public final class ReplaceReports {
                     g.writeEndObject();
                 }
                 g.writeEndArray();
+                g.writeArrayFieldStart("stage_results");
+                for (Replacement.StageOutcome o : c.stages()) {
+                    g.writeStartObject();
+                    g.writeStringField("stage", o.stage());
+                    g.writeStringField("verdict", o.verdict().id());
+                    g.writeStringField("was", o.was().id());
+                    g.writeStringField("change", o.change().id());
+                    g.writeEndObject();
+                }
+                g.writeEndArray();
                 g.writeArrayFieldStart("reasons");
                 for (String s : c.reasons()) {
                     g.writeString(s);
@@ -149,15 +245,20 @@ public final class ReplaceReports {
         out.write('\n');
     }
 
+    static long changes(Replacement.Candidate c, Replacement.Change ch) {
+        return c.stages().stream().filter(o -> o.change() == ch).count();
+    }
+
     private static void csv(Replacement.Result r, Writer out) throws IOException {
-        out.write("rank,part_number,grade,score,pinout,lifecycle,stock,unit_price,worse,re_verify,stage_failures\n");
+        out.write("rank,part_number,grade,score,pinout,lifecycle,stock,unit_price,worse,re_verify,stage_failures,stages_worse,stages_better\n");
         int i = 1;
         for (Replacement.Candidate c : r.candidates()) {
             long fails = c.checks().stream().filter(n -> n.verdict() == Verdict.FAIL).count();
             out.write(Csv.line(Integer.toString(i++), c.partNumber(), c.grade().id(), Double.toString(MatchJson.round(c.score())),
                     String.valueOf(c.pinout()), c.lifecycle(), c.stock() < 0 ? "" : Long.toString(c.stock()),
                     Double.isNaN(c.price()) ? "" : Double.toString(c.price()), Integer.toString(count(c, "worse")),
-                    Integer.toString(count(c, "re-verify")), Long.toString(fails)));
+                    Integer.toString(count(c, "re-verify")), Long.toString(fails), Long.toString(changes(c,
+                    Replacement.Change.WORSE)), Long.toString(changes(c, Replacement.Change.BETTER))));
         }
     }
 }
