@@ -112,22 +112,6 @@ final class CommonsCsvRecords implements CsvRecords {
         return record.get(i);
     }
 
-    /** None: every cell is read by {@link #get}. */
-    @Override
-    public char[] chars() {
-        return null;
-    }
-
-    @Override
-    public int from(int i) {
-        return -1;
-    }
-
-    @Override
-    public int to(int i) {
-        return -1;
-    }
-
     @Override
     public long startLine() {
         return start;

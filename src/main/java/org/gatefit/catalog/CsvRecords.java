@@ -41,12 +41,21 @@ interface CsvRecords {
     /**
      * The characters of the current record, valid until the next {@link #next}: cell {@code i} is
      * {@code chars()[from(i)..to(i))} unless {@link #from} is negative (then read it by {@link #get}).
+     * By default none: a reader whose cells are read only by {@link #get} keeps these defaults.
      */
-    char[] chars();
+    default char[] chars() {
+        return null;
+    }
 
-    int from(int i);
+    /** Where cell {@code i} starts in {@link #chars}, or -1 when it is read by {@link #get}. */
+    default int from(int i) {
+        return -1;
+    }
 
-    int to(int i);
+    /** Where cell {@code i} ends in {@link #chars}, or -1 when it is read by {@link #get}. */
+    default int to(int i) {
+        return -1;
+    }
 
     /** Physical line the current record starts on. */
     long startLine();

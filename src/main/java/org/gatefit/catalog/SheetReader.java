@@ -466,21 +466,6 @@ public final class SheetReader {
         }
 
         @Override
-        public char[] chars() {
-            return null;
-        }
-
-        @Override
-        public int from(int i) {
-            return -1;
-        }
-
-        @Override
-        public int to(int i) {
-            return -1;
-        }
-
-        @Override
         public long startLine() {
             return line;
         }

@@ -281,21 +281,6 @@ final class XlsxRecords implements CsvRecords, AutoCloseable {
     }
 
     @Override
-    public char[] chars() {
-        return null;
-    }
-
-    @Override
-    public int from(int i) {
-        return -1;
-    }
-
-    @Override
-    public int to(int i) {
-        return -1;
-    }
-
-    @Override
     public long startLine() {
         return row;
     }
