@@ -89,14 +89,14 @@ final class PairFigures {
         // needs it stays unknown (NaN) and the rules that use them say unknown.
         boolean qKnown = !Double.isNaN(qTotal);
 
-        boolean edges = q.plateau && rOnTot > 0 && rOffTot > 0;
+        boolean edges = edges(q, rOnTot, rOffTot);
         double plateauOn = edges ? SwitchingTimes.plateauOn(n * s.qGd(), rOnTot, op.vDrive(), s.vPlateau()) : Double.NaN;
         double plateauOff = edges ? SwitchingTimes.plateauOff(n * s.qGd(), rOffTot, s.vPlateau(), op.vDriveNeg())
                 : Double.NaN;
 
         // Only the driver's share is ruled on (driver-power); the split's other shares are shown figures.
         // Per package: each channel that switches at this point adds its share, quiescent and level-shift loss.
-        double pDriver = qKnown && rOnTot > 0 && rOffTot > 0
+        double pDriver = gatePowerKnown(q, rOnTot, rOffTot)
                 ? channelsUsed(d, op) * (GatePower.driverShare(qTotal, swing, op.fSw(), rSrc, rSnk, op.rG() / n,
                         op.rGOff() / n, rInt / n) + highSideQuiescent(d, op) + channelExtras(d, op)) : Double.NaN;
 
@@ -175,6 +175,16 @@ final class PairFigures {
         this.slew = sl;
         this.rOffPath = rOffPath;
         this.vInduced = vi;
+    }
+
+    /** Whether the edges' plateau times are computed: a plateau to cross and positive resistances on and off. */
+    static boolean edges(Question q, double rOnTot, double rOffTot) {
+        return q.plateau && rOnTot > 0 && rOffTot > 0;
+    }
+
+    /** Whether the gate power is computed: a known gate charge and positive resistances on and off. */
+    static boolean gatePowerKnown(Question q, double rOnTot, double rOffTot) {
+        return !Double.isNaN(q.qTotal) && rOnTot > 0 && rOffTot > 0;
     }
 
     /** The high side's quiescent draw from the bootstrap, W (0 where there is none or it is unknown). */

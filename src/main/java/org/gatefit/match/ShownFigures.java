@@ -41,13 +41,13 @@ final class ShownFigures {
         SwitchPart s = f.s();
         int n = q.n;
         boolean cIss = !Double.isNaN(s.cIss());
-        boolean edges = q.plateau && f.rOnTot() > 0 && f.rOffTot() > 0 && cIss; // as PairFigures' plateau times
+        boolean edges = PairFigures.edges(q, f.rOnTot(), f.rOffTot()) && cIss;
         delayOn = edges ? shown(() -> SwitchingTimes.delayOn(f.rOnTot(), n * s.cIss(), op.vDrive(), s.vPlateau(),
                 op.vDriveNeg())) : Double.NaN;
         delayOff = edges ? shown(() -> SwitchingTimes.delayOff(f.rOffTot(), n * s.cIss(), op.vDrive(), s.vPlateau(),
                 op.vDriveNeg())) : Double.NaN;
 
-        boolean power = !Double.isNaN(q.qTotal) && f.rOnTot() > 0 && f.rOffTot() > 0; // as PairFigures' driver power
+        boolean power = PairFigures.gatePowerKnown(q, f.rOnTot(), f.rOffTot());
         pGate = power ? shown(() -> GatePower.total(q.qTotal, op.swing(), op.fSw())) : Double.NaN;
         GatePower.Split split = null;
         if (power) {
