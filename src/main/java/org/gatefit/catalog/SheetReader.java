@@ -16,10 +16,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.DigestInputStream;
 import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -173,12 +171,12 @@ public final class SheetReader {
 
     /** Reads {@code path} with {@code options}: a workbook ({@code .xlsx}) or text. */
     public static Summary read(Path path, String displayName, Kind forced, Sink sink, Options options) throws IOException {
-        MessageDigest sha = sha256();
+        MessageDigest sha = Sha256.digest();
         if (isWorkbook(path)) {
             try (InputStream in = new DigestInputStream(Files.newInputStream(path), sha)) {
                 in.transferTo(OutputStreamSink.INSTANCE);
             }
-            String hex = HexFormat.of().formatHex(sha.digest());
+            String hex = Sha256.hex(sha);
             XlsxRecords x;
             try {
                 x = XlsxRecords.open(path, options.sheet());
@@ -205,21 +203,13 @@ public final class SheetReader {
              DigestInputStream in = new DigestInputStream(raw, sha)) {
             Summary s = r.read(in, sink);
             in.transferTo(OutputStreamSink.INSTANCE);
-            return withSha(s, HexFormat.of().formatHex(sha.digest()));
+            return withSha(s, Sha256.hex(sha));
         }
     }
 
     private static Summary withSha(Summary s, String sha) {
         return new Summary(s.file(), s.kind(), sha, s.rows(), s.rejected(), s.header(), s.unknownColumns(),
                 s.delimiter(), s.problems(), s.problemCount(), s.fatal(), s.headings(), s.missing(), s.notes());
-    }
-
-    private static MessageDigest sha256() {
-        try {
-            return MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 missing from the JVM", e);
-        }
     }
 
     static final Charset WINDOWS_1252 = Charset.forName("windows-1252");

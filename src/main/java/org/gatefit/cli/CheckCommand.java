@@ -56,6 +56,9 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     @Mixin
     SheetOptions sheet;
 
+    /** The report header, made by {@link #run} while the catalog is open. */
+    private org.gatefit.report.ReportHeader header;
+
     CheckCommand(Context ctx) {
         super(ctx);
     }
@@ -68,7 +71,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
             ctx.err.println("warning: " + n);
         }
         try (Writer w = output.open(ctx)) {
-            CheckReports.render(report, output.format, output.colour(ctx), w);
+            CheckReports.render(report, output.rendering(ctx, header), w);
         }
         if (junit != null) {
             try (Writer w = OutputOptions.open(ctx, junit)) {
@@ -108,6 +111,9 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
                 report = StageCheck.run(stagesFile.toString(), rows, b, new CatalogParts(c), m, bar::update);
             }
             warnImplausible(stagesFile.toString(), rows, report, c);
+            header = header("check", c, input(org.gatefit.report.ReportHeader.Role.STAGES, stagesFile),
+                    input(org.gatefit.report.ReportHeader.Role.BOM, bomFile),
+                    input(org.gatefit.report.ReportHeader.Role.MAP_FILE, sheet == null ? null : sheet.mapFile));
             return report;
         }
     }

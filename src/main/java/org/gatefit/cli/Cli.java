@@ -152,7 +152,8 @@ public final class Cli {
         PrintWriter out = StdoutWriter.of(new java.io.FileOutputStream(java.io.FileDescriptor.out));
         PrintWriter err = new PrintWriter(System.err, true);
         // System.console() is non-null only when standard input and output are a terminal.
-        return run(out, err, System.getenv(), Clock.systemUTC(), System.console() != null, args);
+        // The local zone: report headers give the local time with its offset; imports record instants.
+        return run(out, err, System.getenv(), Clock.systemDefaultZone(), System.console() != null, args);
     }
 
     /**

@@ -15,6 +15,8 @@ import org.gatefit.match.Verdict;
 import org.gatefit.report.CompareReports;
 import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
+import org.gatefit.report.Rendering;
+import org.gatefit.report.ReportHeader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -63,6 +65,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
+        ReportHeader header;
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             List<DriverPart> drs = new ArrayList<>();
@@ -80,12 +83,14 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 rs.add(r);
                 drives.add(GateDrive.of(sw, r));
             }
+            header = header("explain", c, input(ReportHeader.Role.STAGES, saved.stages));
         }
+        Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
             if (rs.size() == 1) {
-                MatchReports.explain(rs.get(0), drives.get(0), output.format, output.colour(ctx), w);
+                MatchReports.explain(rs.get(0), drives.get(0), how, w);
             } else {
-                CompareReports.render(rs, drives, output.format, w);
+                CompareReports.render(rs, drives, how, w);
             }
         }
         return rs.stream().anyMatch(r -> r.verdict() == Verdict.FAIL) ? ExitCode.FAILED : ExitCode.OK;

@@ -24,6 +24,9 @@ final class ExportCommand extends CatalogCommand implements Callable<Integer> {
             description = "csv or json (default: ${DEFAULT-VALUE}).")
     Format format;
 
+    @Option(names = "--csv-style", paramLabel = "STYLE", defaultValue = "comma", description = OutputOptions.CSV_STYLE)
+    org.gatefit.report.CsvStyle csvStyle;
+
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE instead of standard output.")
     java.nio.file.Path output;
 
@@ -36,11 +39,12 @@ final class ExportCommand extends CatalogCommand implements Callable<Integer> {
         if (format != Format.CSV && format != Format.JSON) {
             throw new UsageException("--format: export writes csv or json, got " + format);
         }
+        OutputOptions.checkCsvStyle(format, csvStyle);
         try (Catalog c = openCatalog()) {
             List<Row> rows = PartSearch.find(c, kind, List.of(), List.of(), null, Integer.MAX_VALUE);
             try (Writer w = OutputOptions.open(ctx, output)) {
                 if (format == Format.CSV) {
-                    PartsReport.csv(kind, rows, w, false);
+                    PartsReport.csv(kind, rows, csvStyle, w);
                 } else {
                     PartsReport.json(rows, w);
                 }

@@ -62,7 +62,7 @@ final class FindCommand extends CatalogCommand implements Callable<Integer> {
                 ctx.err.println("note: the catalog in " + c.directory() + " is empty; import parts with 'gatefit import FILE...'");
             }
             try (Writer w = output.open(ctx)) {
-                PartsReport.list(rows, output.format, w);
+                PartsReport.list(rows, output.rendering(ctx, null), w);
             }
         }
         return ExitCode.OK;

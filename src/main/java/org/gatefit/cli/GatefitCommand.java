@@ -36,13 +36,17 @@ final class GatefitCommand implements java.util.concurrent.Callable<Integer> {
         return ExitCode.USAGE;
     }
 
+    /** gatefit's version from the jar manifest (Maven's project version), or "(development build)" outside the jar. */
+    static String version() {
+        String v = GatefitCommand.class.getPackage().getImplementationVersion();
+        return v == null ? "(development build)" : v;
+    }
+
     /** Version from the jar manifest. */
     static final class Version implements IVersionProvider {
         @Override
         public String[] getVersion() {
-            String v = GatefitCommand.class.getPackage().getImplementationVersion();
-            return new String[] {"gatefit " + (v == null ? "(development build)" : v),
-                "Java " + System.getProperty("java.version")};
+            return new String[] {"gatefit " + version(), "Java " + System.getProperty("java.version")};
         }
     }
 }

@@ -22,7 +22,7 @@ final class InfoCommand extends CatalogCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         try (Catalog c = Catalog.openIfPresent(catalogDir()); Writer w = output.open(ctx)) {
-            CatalogReports.info(c.directory(), c.counts(), c.history(), output.format, w);
+            CatalogReports.info(c.directory(), c.contentSha256(), c.counts(), c.history(), output.rendering(ctx, null), w);
         }
         return ExitCode.OK;
     }

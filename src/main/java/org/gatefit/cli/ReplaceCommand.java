@@ -17,7 +17,9 @@ import org.gatefit.index.Catalog;
 import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
 import org.gatefit.match.Replacement;
+import org.gatefit.report.Rendering;
 import org.gatefit.report.ReplaceReports;
+import org.gatefit.report.ReportHeader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -101,6 +103,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
             }
         }
         Replacement.Result r;
+        ReportHeader header;
         try (Catalog c = openCatalog()) {
             List<Row> found = kind == null ? c.lookup(part) : c.get(kind, part).map(List::of).orElse(List.of());
             if (found.isEmpty()) {
@@ -116,9 +119,11 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("--stage " + stage + ": that row of " + stages + " does not use " + part
                         + "; name a stage it sits in");
             }
+            header = header("replace", c, input(ReportHeader.Role.STAGES, stages), input(ReportHeader.Role.BOM, bom));
         }
+        Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
-            ReplaceReports.render(r, output.format, w);
+            ReplaceReports.render(r, how, w);
         }
         return ExitCode.OK;
     }

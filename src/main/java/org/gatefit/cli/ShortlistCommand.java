@@ -17,6 +17,8 @@ import org.gatefit.match.Topology;
 import org.gatefit.match.Shortlist;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.report.MatchReports;
+import org.gatefit.report.Rendering;
+import org.gatefit.report.ReportHeader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -85,8 +87,9 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
             PairSupport.warnImplausible(ctx, spec, sw);
             Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,
                     Runtime.getRuntime().availableProcessors(), asked);
+            Rendering how = output.rendering(ctx, header("shortlist", c, input(ReportHeader.Role.STAGES, saved.stages)));
             try (Writer w = output.open(ctx)) {
-                MatchReports.shortlist(r, output.format, output.colour(ctx), w);
+                MatchReports.shortlist(r, how, w);
             }
         }
         return ExitCode.OK;

@@ -41,7 +41,7 @@ final class ShowCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("'" + part + "' is both a switch and a driver; add --kind switch or --kind driver");
             }
             try (Writer w = output.open(ctx)) {
-                PartsReport.sheet(found.get(0), output.format, w);
+                PartsReport.sheet(found.get(0), output.rendering(ctx, null), w);
             }
         }
         return ExitCode.OK;

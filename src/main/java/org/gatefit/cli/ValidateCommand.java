@@ -84,7 +84,7 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
             return ExitCode.OK;
         }
         try (Writer w = output.open(ctx)) {
-            CatalogReports.validation(results, output.format, w);
+            CatalogReports.validation(results, output.rendering(ctx, null), w);
         }
         return results.stream().allMatch(SheetReader.Summary::clean) ? ExitCode.OK : ExitCode.BAD_DATA;
     }

@@ -332,6 +332,42 @@ public final class Catalog implements AutoCloseable {
         return dir;
     }
 
+    /**
+     * A SHA-256 that names the content of this view, the catalog's commit it reads: over the files
+     * of that commit in name order, each as one line {@code name TAB size TAB crc32} (lower-case
+     * hex), where crc32 is the CRC-32 of the file's every byte that Lucene keeps in the file's own
+     * footer. Only the footers are read, so it costs the same on a catalog of any size. Each import
+     * gives a new value (an import of the same files into another folder too: Lucene names every
+     * segment with a random id); an unchanged catalog keeps its value. Whether the bytes still match
+     * their CRCs is {@link #verify}'s job. Null when nothing has been imported.
+     *
+     * @throws CatalogStorageException when a file of the commit cannot be read or has no footer
+     */
+    public String contentSha256() throws IOException {
+        if (reader == null) {
+            return null;
+        }
+        List<String> files;
+        try {
+            files = new ArrayList<>(reader.getIndexCommit().getFileNames());
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
+        }
+        java.util.Collections.sort(files);
+        java.security.MessageDigest sha = org.gatefit.catalog.Sha256.digest();
+        for (String f : files) {
+            try (org.apache.lucene.store.IndexInput in = directory.openInput(f,
+                    org.apache.lucene.store.IOContext.READONCE)) {
+                long crc = org.apache.lucene.codecs.CodecUtil.retrieveChecksum(in);
+                sha.update((f + "\t" + in.length() + "\t" + Long.toHexString(crc) + "\n")
+                        .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            } catch (IOException e) {
+                throw CatalogStorageException.reading(dir, e);
+            }
+        }
+        return org.gatefit.catalog.Sha256.hex(sha);
+    }
+
     /** Whether nothing has been imported. */
     public boolean isEmpty() {
         return reader == null || reader.numDocs() == 0;

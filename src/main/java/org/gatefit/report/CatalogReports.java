@@ -18,8 +18,8 @@ public final class CatalogReports {
     }
 
     /** Files checked by validate, with their problems. */
-    public static void validation(List<SheetReader.Summary> files, Format format, Writer out) throws IOException {
-        switch (format) {
+    public static void validation(List<SheetReader.Summary> files, Rendering how, Writer out) throws IOException {
+        switch (how.format()) {
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
@@ -50,14 +50,16 @@ public final class CatalogReports {
                 out.write('\n');
             }
             case CSV -> {
-                out.write("file,line,column,column_number,text,message\n");
+                Csv csv = how.csv(out);
+                csv.row("file", "line", "column", "column_number", "text", "message");
                 for (SheetReader.Summary s : files) {
                     for (Problem p : s.problems()) {
-                        out.write(Csv.line(p.file(), Long.toString(p.line()), p.column() == null ? "" : p.column(),
-                                p.columnNumber() == 0 ? "" : Integer.toString(p.columnNumber()),
-                                p.text() == null ? "" : p.text(), p.message()));
+                        csv.row(p.file(), p.line(), p.column() == null ? "" : p.column(),
+                                p.columnNumber() == 0 ? "" : (Object) p.columnNumber(), p.text() == null ? "" : p.text(),
+                                p.message());
                     }
                 }
+                csv.flush();
             }
             case HTML -> throw Format.noHtml("validate");
             case TEXT, MARKDOWN -> {
@@ -101,14 +103,19 @@ public final class CatalogReports {
         g.writeEndObject();
     }
 
-    /** What the catalog holds and where it came from. */
-    public static void info(Path dir, Map<Kind, Integer> counts, List<ImportRecord> history, Format format, Writer out)
-            throws IOException {
+    /**
+     * What the catalog holds and where it came from, with its content hash ({@code contentSha256},
+     * null when empty: the value report headers name it by).
+     */
+    public static void info(Path dir, String contentSha256, Map<Kind, Integer> counts, List<ImportRecord> history,
+                            Rendering how, Writer out) throws IOException {
+        Format format = how.format();
         switch (format) {
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
                     g.writeStringField("catalog", dir.toString());
+                    g.writeStringField("content_sha256", contentSha256);
                     g.writeObjectFieldStart("counts");
                     for (Map.Entry<Kind, Integer> e : counts.entrySet()) {
                         g.writeNumberField(e.getKey().id(), e.getValue());
@@ -131,10 +138,12 @@ public final class CatalogReports {
                 out.write('\n');
             }
             case CSV -> {
-                out.write("time,file,kind,rows,mode,sha256\n");
+                Csv csv = how.csv(out);
+                csv.row("time", "file", "kind", "rows", "mode", "sha256");
                 for (ImportRecord r : history) {
-                    out.write(Csv.line(r.time().toString(), r.file(), r.kind(), Long.toString(r.rows()), r.mode(), r.sha256()));
+                    csv.row(r.time().toString(), r.file(), r.kind(), r.rows(), r.mode(), r.sha256());
                 }
+                csv.flush();
             }
             case HTML -> throw Format.noHtml("info");
             case TEXT, MARKDOWN -> {
@@ -142,7 +151,12 @@ public final class CatalogReports {
                 out.write((md ? "**Catalog:** " : "catalog:  ") + (md ? Markdown.escape(dir.toString()) : dir) + "\n");
                 List<String> parts = new ArrayList<>();
                 counts.forEach((k, v) -> parts.add(v + (k == Kind.SWITCH ? " switches" : " drivers")));
-                out.write((md ? "**Holds:** " : "holds:    ") + String.join(", ", parts) + "\n\n");
+                out.write((md ? "**Holds:** " : "holds:    ") + String.join(", ", parts) + "\n");
+                if (contentSha256 != null) {
+                    out.write((md ? "**Content SHA-256:** `" + contentSha256 + "`" : "content:  SHA-256 " + contentSha256)
+                            + "\n");
+                }
+                out.write("\n");
                 if (history.isEmpty()) {
                     out.write("Nothing imported yet: run 'gatefit import FILE...'.\n");
                     return;

@@ -19,8 +19,8 @@ final class CheckHtml {
         return "stage-" + (index + 1);
     }
 
-    static void render(StageCheck.Report r, Writer out) throws IOException {
-        Html.begin(out, "gatefit check: " + r.file());
+    static void render(StageCheck.Report r, ReportHeader header, Writer out) throws IOException {
+        Html.begin(out, "gatefit check: " + r.file(), header);
         out.write("<h1>Design check: " + Html.esc(r.file()) + "</h1>\n");
         out.write("<p class=\"summary\">" + r.results().size() + " stages: " + Html.verdict(Verdict.FAIL) + " "
                 + r.count(Verdict.FAIL) + " failed, " + Html.verdict(Verdict.WARN) + " " + r.count(Verdict.WARN)

@@ -18,18 +18,14 @@ public final class CheckReports {
     private CheckReports() {
     }
 
-    public static void render(StageCheck.Report r, Format format, Writer out) throws IOException {
-        render(r, format, false, out);
-    }
-
-    /** As {@link #render(StageCheck.Report, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
-    public static void render(StageCheck.Report r, Format format, boolean colour, Writer out) throws IOException {
-        switch (format) {
-            case JSON -> json(r, out);
-            case CSV -> csv(r, out);
-            case TEXT -> text(r, out, false, colour);
-            case MARKDOWN -> text(r, out, true, false);
-            case HTML -> CheckHtml.render(r, out);
+    /** The stage check's result, rendered as {@code how} asks. */
+    public static void render(StageCheck.Report r, Rendering how, Writer out) throws IOException {
+        switch (how.format()) {
+            case JSON -> json(r, how, out);
+            case CSV -> csv(r, how.csv(out));
+            case TEXT -> text(r, how, out, false, how.colour());
+            case MARKDOWN -> text(r, how, out, true, false);
+            case HTML -> CheckHtml.render(r, how.header(), out);
         }
     }
 
@@ -38,7 +34,9 @@ public final class CheckReports {
                 + r.count(Verdict.WARN) + " warned, " + r.count(Verdict.PASS) + " passed";
     }
 
-    private static void text(StageCheck.Report r, Writer out, boolean md, boolean colour) throws IOException {
+    private static void text(StageCheck.Report r, Rendering how, Writer out, boolean md, boolean colour)
+            throws IOException {
+        how.head(out, md);
         out.write(md ? "## " + Markdown.escape(summary(r)) + "\n\n" : summary(r) + "\n");
         out.write((md ? "- **Margins:** " + Markdown.escape(MatchJson.marginsLine(r.margins()))
                 : Wrap.wrap("Margins: " + MatchJson.marginsLine(r.margins()), WIDTH, 4)) + "\n");
@@ -109,9 +107,10 @@ public final class CheckReports {
         return ref.equalsIgnoreCase(pn) ? pn : ref + " " + pn;
     }
 
-    private static void json(StageCheck.Report r, Writer out) throws IOException {
+    private static void json(StageCheck.Report r, Rendering how, Writer out) throws IOException {
         try (JsonGenerator g = PartsReport.generator(out)) {
             g.writeStartObject();
+            how.head(g);
             g.writeStringField("file", r.file());
             g.writeObjectFieldStart("summary");
             g.writeNumberField("stages", r.results().size());
@@ -163,15 +162,16 @@ public final class CheckReports {
         out.write('\n');
     }
 
-    private static void csv(StageCheck.Report r, Writer out) throws IOException {
-        out.write("stage,line,driver,switch,stage_verdict,score,rule,verdict,message\n");
+    private static void csv(StageCheck.Report r, Csv out) throws IOException {
+        out.row("stage", "line", "driver", "switch", "stage_verdict", "score", "rule", "verdict", "message");
         for (StageCheck.StageResult s : r.results()) {
             for (Check c : s.checks()) {
-                out.write(Csv.line(s.stage(), Long.toString(s.line()), s.driver() == null ? s.driverRef() : s.driver(),
+                out.row(s.stage(), s.line(), s.driver() == null ? s.driverRef() : s.driver(),
                         s.switchPart() == null ? s.switchRef() : s.switchPart(), s.verdict().id(),
-                        Double.toString(MatchJson.round(s.score())), c.rule().id(), c.verdict().id(), c.message()));
+                        MatchJson.round(s.score()), c.rule().id(), c.verdict().id(), c.message());
             }
         }
+        out.flush();
     }
 
     /**

@@ -27,14 +27,14 @@ public final class CompareReports {
      * @param pairs  one per driver, in the order given, all for the same switch and operating point
      * @param drives the matching gate drives (for the HTML waveforms)
      */
-    public static void render(List<PairResult> pairs, List<GateDrive> drives, Format format, Writer out)
+    public static void render(List<PairResult> pairs, List<GateDrive> drives, Rendering how, Writer out)
             throws IOException {
-        switch (format) {
-            case TEXT -> text(pairs, out, false);
-            case MARKDOWN -> text(pairs, out, true);
-            case JSON -> json(pairs, out);
-            case CSV -> csv(pairs, out);
-            case HTML -> MatchHtml.compare(pairs, drives, out);
+        switch (how.format()) {
+            case TEXT -> text(pairs, how, out, false);
+            case MARKDOWN -> text(pairs, how, out, true);
+            case JSON -> json(pairs, how, out);
+            case CSV -> csv(pairs, how.csv(out));
+            case HTML -> MatchHtml.compare(pairs, drives, how.header(), out);
         }
     }
 
@@ -75,7 +75,8 @@ public final class CompareReports {
         return p.figure(figure).map(f -> Eng.of(f.value(), f.unit().equals("1") ? "" : f.unit())).orElse("");
     }
 
-    private static void text(List<PairResult> pairs, Writer out, boolean md) throws IOException {
+    private static void text(List<PairResult> pairs, Rendering how, Writer out, boolean md) throws IOException {
+        how.head(out, md);
         out.write(md ? "## " + Markdown.escape(title(pairs)) + "\n\n" : Wrap.wrap(title(pairs), WIDTH, 2) + "\n");
         for (String[] l : MatchHtml.context(pairs.get(0).point(), pairs.get(0).margins(), null)) {
             out.write(md ? "- **" + l[0] + ":** " + Markdown.escape(l[1]) + "\n" : Wrap.wrap(l[0] + ": " + l[1], WIDTH, 4)
@@ -124,9 +125,10 @@ public final class CompareReports {
         out.write("\n" + (md ? "> " + Caution.TEXT : Wrap.wrap(Caution.TEXT, WIDTH, 0)) + "\n");
     }
 
-    private static void json(List<PairResult> pairs, Writer out) throws IOException {
+    private static void json(List<PairResult> pairs, Rendering how, Writer out) throws IOException {
         try (JsonGenerator g = PartsReport.generator(out)) {
             g.writeStartObject();
+            how.head(g);
             g.writeStringField("switch", pairs.get(0).switchPart());
             g.writeArrayFieldStart("pairs");
             for (PairResult p : pairs) {
@@ -147,19 +149,20 @@ public final class CompareReports {
         out.write('\n');
     }
 
-    private static void csv(List<PairResult> pairs, Writer out) throws IOException {
-        List<String> head = new ArrayList<>(List.of("section", "name"));
+    private static void csv(List<PairResult> pairs, Csv out) throws IOException {
+        List<Object> head = new ArrayList<>(List.of("section", "name"));
         pairs.forEach(p -> head.add(p.driver()));
-        out.write(Csv.line(head.toArray(String[]::new)));
+        out.row(head);
         for (Rule r : rules(pairs)) {
-            List<String> l = new ArrayList<>(List.of("check", r.id()));
+            List<Object> l = new ArrayList<>(List.of("check", r.id()));
             pairs.forEach(p -> l.add(verdict(p, r)));
-            out.write(Csv.line(l.toArray(String[]::new)));
+            out.row(l);
         }
         for (String f : figures(pairs)) {
-            List<String> l = new ArrayList<>(List.of("figure", f));
-            pairs.forEach(p -> l.add(p.figure(f).map(x -> Double.toString(x.value())).orElse("")));
-            out.write(Csv.line(l.toArray(String[]::new)));
+            List<Object> l = new ArrayList<>(List.of("figure", f));
+            pairs.forEach(p -> l.add(p.figure(f).map(x -> (Object) x.value()).orElse("")));
+            out.row(l);
         }
+        out.flush();
     }
 }

@@ -33,8 +33,11 @@ final class Html {
             .v-pass { color: #1a7f37; background: #e9f7ee; } .v-warn { color: #8a4500; background: #fff3e0; }
             .v-unknown { color: #555; background: #f0f0f0; } .v-fail { color: #b71c1c; background: #fdecea; }
             .v-grade { color: #1f4e9a; background: #eaf1fb; }
-            dl.ctx { display: grid; grid-template-columns: max-content 1fr; gap: .15rem 1rem; font-size: .9rem; }
-            dl.ctx dt { font-weight: 600; } dl.ctx dd { margin: 0; }
+            dl.ctx { display: grid; grid-template-columns: max-content minmax(0, 1fr); gap: .15rem 1rem; font-size: .9rem; }
+            dl.ctx dt { font-weight: 600; } dl.ctx dd { margin: 0; overflow-wrap: anywhere; }
+            header.report-head { color: #444; border-bottom: 1px solid #ccc; padding-bottom: .3rem; margin-bottom: 1rem; }
+            header.report-head dl.ctx { font-size: .8rem; margin: 0; }
+            code.hash { font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: .95em; overflow-wrap: anywhere; }
             figure { margin: 1rem 0; } figure svg { width: 100%; height: auto; display: block; }
             figcaption { font-size: .85rem; color: #444; margin-top: .25rem; }
             .est { color: #8a4500; font-size: .8rem; } .note { color: #444; font-size: .9rem; }
@@ -109,13 +112,14 @@ final class Html {
         return i;
     }
 
-    /** The document head and the start of the body. */
-    static void begin(Writer out, String title) throws IOException {
+    /** The document head and the start of the body, with the report header when there is one. */
+    static void begin(Writer out, String title, ReportHeader header) throws IOException {
         out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
                 + "<meta http-equiv=\"Content-Security-Policy\" content=\"" + CSP + "\">\n"
                 + "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n"
                 + "<meta name=\"generator\" content=\"gatefit\">\n"
-                + "<title>" + esc(title) + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n");
+                + "<title>" + esc(title) + "</title>\n<style>\n" + CSS + "</style>\n</head>\n<body>\n"
+                + (header == null ? "" : header.html()));
     }
 
     /** The caution and the end of the document. */

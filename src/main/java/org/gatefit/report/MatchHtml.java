@@ -42,9 +42,9 @@ final class MatchHtml {
 
     // ------------------------------------------------------------------ shortlist
 
-    static void shortlist(Shortlist.Result r, Writer out) throws IOException {
+    static void shortlist(Shortlist.Result r, ReportHeader header, Writer out) throws IOException {
         SwitchPart s = r.switchPart();
-        Html.begin(out, "Drivers for " + s.partNumber());
+        Html.begin(out, "Drivers for " + s.partNumber(), header);
         out.write("<h1>Drivers for " + Html.esc(s.partNumber()) + "</h1>\n");
         out.write("<p class=\"summary\">" + Html.esc(MatchReports.switchLine(s)) + (s.maker() == null ? ""
                 : " by " + Html.esc(s.maker())) + ": " + r.evaluated() + " evaluated, " + Html.verdict(Verdict.PASS) + " "
@@ -124,8 +124,8 @@ final class MatchHtml {
 
     // ------------------------------------------------------------------ explain
 
-    static void explain(PairResult p, GateDrive g, Writer out) throws IOException {
-        Html.begin(out, "Driver " + p.driver() + " with switch " + p.switchPart());
+    static void explain(PairResult p, GateDrive g, ReportHeader header, Writer out) throws IOException {
+        Html.begin(out, "Driver " + p.driver() + " with switch " + p.switchPart(), header);
         out.write("<h1>Driver " + Html.esc(p.driver()) + " with switch " + Html.esc(p.switchPart()) + "</h1>\n");
         out.write("<p class=\"summary\">Verdict " + Html.verdict(p.verdict()) + ", score " + Eng.num(p.score())
                 + (g == null ? "" : " · " + Html.esc(MatchReports.switchLine(g.switchPart()))
@@ -149,9 +149,10 @@ final class MatchHtml {
     // ------------------------------------------------------------------ explain with several drivers
 
     /** Two to four drivers with one switch: checks and figures side by side, the gate waveforms overlaid. */
-    static void compare(List<PairResult> pairs, List<GateDrive> drives, Writer out) throws IOException {
+    static void compare(List<PairResult> pairs, List<GateDrive> drives, ReportHeader header, Writer out)
+            throws IOException {
         String title = CompareReports.title(pairs);
-        Html.begin(out, title);
+        Html.begin(out, title, header);
         out.write("<h1>" + Html.esc(title) + "</h1>\n");
         out.write(Html.context(context(pairs.get(0).point(), pairs.get(0).margins(), null)));
         StringBuilder head = new StringBuilder("<thead><tr><th></th>");

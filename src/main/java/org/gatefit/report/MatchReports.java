@@ -23,18 +23,14 @@ public final class MatchReports {
 
     // ------------------------------------------------------------------ shortlist
 
-    public static void shortlist(Shortlist.Result r, Format format, Writer out) throws IOException {
-        shortlist(r, format, false, out);
-    }
-
-    /** As {@link #shortlist(Shortlist.Result, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
-    public static void shortlist(Shortlist.Result r, Format format, boolean colour, Writer out) throws IOException {
-        switch (format) {
-            case JSON -> shortlistJson(r, out);
-            case CSV -> shortlistCsv(r, out);
-            case TEXT -> shortlistText(r, out, false, colour);
-            case MARKDOWN -> shortlistText(r, out, true, false);
-            case HTML -> MatchHtml.shortlist(r, out);
+    /** The ranked drivers for a switch, rendered as {@code how} asks. */
+    public static void shortlist(Shortlist.Result r, Rendering how, Writer out) throws IOException {
+        switch (how.format()) {
+            case JSON -> shortlistJson(r, how, out);
+            case CSV -> shortlistCsv(r, how.csv(out));
+            case TEXT -> shortlistText(r, how, out, false, how.colour());
+            case MARKDOWN -> shortlistText(r, how, out, true, false);
+            case HTML -> MatchHtml.shortlist(r, how.header(), out);
         }
     }
 
@@ -44,7 +40,9 @@ public final class MatchReports {
                 + " to " + Eng.of(s.vGsMax(), "V") + ")";
     }
 
-    private static void shortlistText(Shortlist.Result r, Writer out, boolean md, boolean colour) throws IOException {
+    private static void shortlistText(Shortlist.Result r, Rendering how, Writer out, boolean md, boolean colour)
+            throws IOException {
+        how.head(out, md);
         String head = "Drivers for " + switchLine(r.switchPart()) + ": " + r.evaluated() + " evaluated, " + r.passing()
                 + " pass, " + r.warning() + " warn, " + r.failing() + " fail"
                 + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain to fail)" : "");
@@ -179,9 +177,10 @@ public final class MatchReports {
         return c == null || c.verdict() == Verdict.PASS ? "" : c.rule().id() + " " + c.verdict().id();
     }
 
-    private static void shortlistJson(Shortlist.Result r, Writer out) throws IOException {
+    private static void shortlistJson(Shortlist.Result r, Rendering how, Writer out) throws IOException {
         try (JsonGenerator g = PartsReport.generator(out)) {
             g.writeStartObject();
+            how.head(g);
             g.writeStringField("switch", r.switchPart().partNumber());
             g.writeNumberField("evaluated", r.evaluated());
             g.writeNumberField("passing", r.passing());
@@ -224,9 +223,9 @@ public final class MatchReports {
         out.write('\n');
     }
 
-    private static void shortlistCsv(Shortlist.Result r, Writer out) throws IOException {
-        out.write("rank,driver,switch,verdict,score,drive_current_ratio,noise_margin_min_v,driver_power_w,unit_price,"
-                + "deciding_rule,deciding_verdict,deciding_message\n");
+    private static void shortlistCsv(Shortlist.Result r, Csv out) throws IOException {
+        out.row("rank", "driver", "switch", "verdict", "score", "drive_current_ratio", "noise_margin_min_v",
+                "driver_power_w", "unit_price", "deciding_rule", "deciding_verdict", "deciding_message");
         int rank = 1;
         for (PairResult p : r.candidates()) {
             Check c = decidingCheck(p);
@@ -235,39 +234,27 @@ public final class MatchReports {
                     p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN));
             double nm = Math.min(p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN),
                     p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN));
-            out.write(Csv.line(Integer.toString(rank++), p.driver(), p.switchPart(), p.verdict().id(),
-                    num(MatchJson.round(p.score())), num(pk / req), num(nm),
-                    num(p.figure("driver-power").map(Figure::value).orElse(Double.NaN)), num(p.priceTieBreak()),
-                    c == null ? "" : c.rule().id(), c == null ? "" : c.verdict().id(), c == null ? "" : c.message()));
+            out.row(rank++, p.driver(), p.switchPart(), p.verdict().id(), MatchJson.round(p.score()), pk / req, nm,
+                    p.figure("driver-power").map(Figure::value).orElse(Double.NaN), p.priceTieBreak(),
+                    c == null ? "" : c.rule().id(), c == null ? "" : c.verdict().id(), c == null ? "" : c.message());
         }
-    }
-
-    private static String num(double v) {
-        return Double.isFinite(v) ? Double.toString(v) : "";
+        out.flush();
     }
 
     // ------------------------------------------------------------------ explain
 
-    public static void explain(PairResult p, Format format, Writer out) throws IOException {
-        explain(p, null, format, out);
-    }
-
     /**
-     * The calculation sheet; {@code drive} (switch and loop resistances) lets the HTML page plot
-     * the gate waveforms and the gate-loop step response, and may be null.
+     * The calculation sheet, rendered as {@code how} asks; {@code drive} (switch and loop
+     * resistances) lets the HTML page plot the gate waveforms and the gate-loop step response, and
+     * may be null.
      */
-    public static void explain(PairResult p, GateDrive drive, Format format, Writer out) throws IOException {
-        explain(p, drive, format, false, out);
-    }
-
-    /** As {@link #explain(PairResult, GateDrive, Format, Writer)}; {@code colour} adds ANSI colour to text verdicts. */
-    public static void explain(PairResult p, GateDrive drive, Format format, boolean colour, Writer out)
-            throws IOException {
-        switch (format) {
-            case HTML -> MatchHtml.explain(p, drive, out);
+    public static void explain(PairResult p, GateDrive drive, Rendering how, Writer out) throws IOException {
+        switch (how.format()) {
+            case HTML -> MatchHtml.explain(p, drive, how.header(), out);
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
+                    how.head(g);
                     g.writeStringField("driver", p.driver());
                     g.writeStringField("switch", p.switchPart());
                     g.writeStringField("verdict", p.verdict().id());
@@ -283,17 +270,24 @@ public final class MatchReports {
                 out.write('\n');
             }
             case CSV -> {
-                out.write("section,name,verdict_or_value,unit,detail\n");
+                Csv csv = how.csv(out);
+                csv.row("section", "name", "verdict_or_value", "unit", "detail");
                 for (Check c : p.checks()) {
-                    out.write(Csv.line("check", c.rule().id(), c.verdict().id(), "", c.message()));
+                    csv.row("check", c.rule().id(), c.verdict().id(), "", c.message());
                 }
                 for (Figure f : p.figures()) {
-                    out.write(Csv.line("figure", f.name(), Double.toString(f.value()), f.unit(),
-                            f.label() + (f.estimated() ? " (estimate)" : "")));
+                    csv.row("figure", f.name(), f.value(), f.unit(), f.label() + (f.estimated() ? " (estimate)" : ""));
                 }
+                csv.flush();
             }
-            case TEXT -> explainText(p, out, colour);
-            case MARKDOWN -> explainMarkdown(p, out);
+            case TEXT -> {
+                how.head(out, false);
+                explainText(p, out, how.colour());
+            }
+            case MARKDOWN -> {
+                how.head(out, true);
+                explainMarkdown(p, out);
+            }
         }
     }
 

@@ -9,9 +9,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
-import org.gatefit.catalog.Cells;
 import org.gatefit.catalog.Column;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Numbers;
@@ -34,7 +31,8 @@ public final class PartsReport {
     }
 
     /** A list of parts: {@code {"parts":[...]}} in JSON, one table per kind in text and Markdown. */
-    public static void list(List<Row> parts, Format format, Writer out) throws IOException {
+    public static void list(List<Row> parts, Rendering how, Writer out) throws IOException {
+        Format format = how.format();
         switch (format) {
             case JSON -> {
                 try (JsonGenerator g = generator(out)) {
@@ -54,17 +52,19 @@ public final class PartsReport {
                 }
                 Kind k = parts.get(0).kind();
                 boolean mixed = parts.stream().anyMatch(r -> r.kind() != k);
+                Csv csv = how.csv(out);
                 if (mixed) {
                     for (Kind kind : List.of(Kind.SWITCH, Kind.DRIVER)) {
                         List<Row> some = parts.stream().filter(r -> r.kind() == kind).toList();
                         if (!some.isEmpty()) {
-                            csv(kind, some, out, true);
-                            out.write('\n');
+                            csv(kind, some, csv, true);
+                            csv.blankLine();
                         }
                     }
                 } else {
-                    csv(k, parts, out, false);
+                    csv(k, parts, csv, false);
                 }
+                csv.flush();
             }
             case HTML -> throw Format.noHtml("find");
             case TEXT, MARKDOWN -> {
@@ -99,7 +99,8 @@ public final class PartsReport {
     }
 
     /** One part with every column, its unit and meaning. */
-    public static void sheet(Row r, Format format, Writer out) throws IOException {
+    public static void sheet(Row r, Rendering how, Writer out) throws IOException {
+        Format format = how.format();
         switch (format) {
             case JSON -> {
                 try (JsonGenerator g = generator(out)) {
@@ -107,7 +108,11 @@ public final class PartsReport {
                 }
                 out.write('\n');
             }
-            case CSV -> csv(r.kind(), List.of(r), out, false);
+            case CSV -> {
+                Csv csv = how.csv(out);
+                csv(r.kind(), List.of(r), csv, false);
+                csv.flush();
+            }
             case HTML -> throw Format.noHtml("show");
             case TEXT, MARKDOWN -> {
                 Schema s = Schema.of(r.kind());
@@ -130,11 +135,17 @@ public final class PartsReport {
     }
 
     /**
-     * All parts of a kind as an importable CSV: every schema column, then extra columns; text a
-     * spreadsheet would run as a formula is neutralised with a leading apostrophe (OWASP), which
-     * import removes again.
+     * All parts of a kind as an importable CSV in {@code style} (import reads either style back):
+     * every schema column, then extra columns; text a spreadsheet would run as a formula is
+     * neutralised with a leading apostrophe (OWASP), which import removes again.
      */
-    public static void csv(Kind kind, List<Row> parts, Writer out, boolean withKind) throws IOException {
+    public static void csv(Kind kind, List<Row> parts, CsvStyle style, Writer out) throws IOException {
+        Csv csv = Csv.start(out, style);
+        csv(kind, parts, csv, false);
+        csv.flush();
+    }
+
+    private static void csv(Kind kind, List<Row> parts, Csv out, boolean withKind) throws IOException {
         Schema s = Schema.of(kind);
         Set<String> extras = new LinkedHashSet<>();
         for (Row r : parts) {
@@ -146,10 +157,9 @@ public final class PartsReport {
         }
         header.addAll(s.names());
         header.addAll(extras);
-        CSVPrinter p = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get());
-        p.printRecord(header.stream().map(Cells::neutraliseText).toList()); // extra columns' names are outside text
+        out.row(header); // neutralised: extra columns' names are outside text
         for (Row r : parts) {
-            List<String> rec = new ArrayList<>(header.size());
+            List<Object> rec = new ArrayList<>(header.size());
             if (withKind) {
                 rec.add(kind.id());
             }
@@ -158,29 +168,26 @@ public final class PartsReport {
             }
             for (String x : extras) {
                 String v = r.extras().get(x);
-                rec.add(v == null ? "" : Cells.neutraliseText(v));
+                rec.add(v == null ? "" : v);
             }
-            p.printRecord(rec);
+            out.row(rec);
         }
-        p.flush();
     }
 
     /** Export as JSON: {@code {"parts":[...]}} (same as find). */
     public static void json(List<Row> parts, Writer out) throws IOException {
-        list(parts, Format.JSON, out);
+        list(parts, Rendering.of(Format.JSON), out);
     }
 
-    private static String cell(Object v) {
+    /** A column's value for {@link Csv#row}: numbers shortest and plain, as the export has always written them. */
+    private static Object cell(Object v) {
         if (v == null) {
             return "";
         }
         if (v instanceof Double d) {
-            return Numbers.format(d);
+            return new Csv.Plain(d);
         }
-        if (v instanceof Long l) {
-            return Long.toString(l);
-        }
-        return Cells.neutraliseText(v.toString());
+        return v;
     }
 
     /** A value for people: numbers formatted shortest, unknown empty. */

@@ -30,8 +30,8 @@ final class ReplaceHtml {
         return Html.esc(sym + a);
     }
 
-    static void render(Replacement.Result r, Writer out) throws IOException {
-        Html.begin(out, "Substitutes for " + r.part());
+    static void render(Replacement.Result r, ReportHeader header, Writer out) throws IOException {
+        Html.begin(out, "Substitutes for " + r.part(), header);
         out.write("<h1>Substitutes for " + Html.esc(r.kind().id()) + " " + Html.esc(r.part()) + "</h1>\n");
         out.write("<p class=\"summary\">" + Html.esc(ReplaceReports.head(r)) + "</p>\n");
         List<String[]> ctx = new ArrayList<>();

@@ -16,13 +16,14 @@ public final class ReplaceReports {
     private ReplaceReports() {
     }
 
-    public static void render(Replacement.Result r, Format format, Writer out) throws IOException {
-        switch (format) {
-            case JSON -> json(r, out);
-            case CSV -> csv(r, out);
-            case TEXT -> text(r, out, false);
-            case MARKDOWN -> text(r, out, true);
-            case HTML -> ReplaceHtml.render(r, out);
+    /** The substitutes for a part, rendered as {@code how} asks. */
+    public static void render(Replacement.Result r, Rendering how, Writer out) throws IOException {
+        switch (how.format()) {
+            case JSON -> json(r, how, out);
+            case CSV -> csv(r, how.csv(out));
+            case TEXT -> text(r, how, out, false);
+            case MARKDOWN -> text(r, how, out, true);
+            case HTML -> ReplaceHtml.render(r, how.header(), out);
         }
     }
 
@@ -34,7 +35,8 @@ public final class ReplaceReports {
                 + r.notOffered() + " not offered, " + r.candidates().size() + " listed";
     }
 
-    private static void text(Replacement.Result r, Writer out, boolean md) throws IOException {
+    private static void text(Replacement.Result r, Rendering how, Writer out, boolean md) throws IOException {
+        how.head(out, md);
         out.write(md ? "## " + Markdown.escape(head(r)) + "\n\n" : Wrap.wrap(head(r), WIDTH, 2) + "\n");
         String stages = r.stagesUsing().isEmpty() ? "no stage sheet given: pairings not re-checked (use --stages)"
                 : "re-checked in stages " + String.join(", ", r.stagesUsing());
@@ -153,9 +155,10 @@ public final class ReplaceReports {
         return (int) c.differences().stream().filter(d -> d.assessment().equals(assessment)).count();
     }
 
-    private static void json(Replacement.Result r, Writer out) throws IOException {
+    private static void json(Replacement.Result r, Rendering how, Writer out) throws IOException {
         try (JsonGenerator g = PartsReport.generator(out)) {
             g.writeStartObject();
+            how.head(g);
             g.writeStringField("part", r.part());
             g.writeStringField("kind", r.kind().id());
             g.writeNumberField("considered", r.considered());
@@ -249,16 +252,17 @@ public final class ReplaceReports {
         return c.stages().stream().filter(o -> o.change() == ch).count();
     }
 
-    private static void csv(Replacement.Result r, Writer out) throws IOException {
-        out.write("rank,part_number,grade,score,pinout,lifecycle,stock,unit_price,worse,re_verify,stage_failures,stages_worse,stages_better\n");
+    private static void csv(Replacement.Result r, Csv out) throws IOException {
+        out.row("rank", "part_number", "grade", "score", "pinout", "lifecycle", "stock", "unit_price", "worse",
+                "re_verify", "stage_failures", "stages_worse", "stages_better");
         int i = 1;
         for (Replacement.Candidate c : r.candidates()) {
             long fails = c.checks().stream().filter(n -> n.verdict() == Verdict.FAIL).count();
-            out.write(Csv.line(Integer.toString(i++), c.partNumber(), c.grade().id(), Double.toString(MatchJson.round(c.score())),
-                    String.valueOf(c.pinout()), c.lifecycle(), c.stock() < 0 ? "" : Long.toString(c.stock()),
-                    Double.isNaN(c.price()) ? "" : Double.toString(c.price()), Integer.toString(count(c, "worse")),
-                    Integer.toString(count(c, "re-verify")), Long.toString(fails), Long.toString(changes(c,
-                    Replacement.Change.WORSE)), Long.toString(changes(c, Replacement.Change.BETTER))));
+            out.row(i++, c.partNumber(), c.grade().id(), MatchJson.round(c.score()), String.valueOf(c.pinout()),
+                    c.lifecycle(), c.stock() < 0 ? "" : (Object) c.stock(), c.price(), count(c, "worse"),
+                    count(c, "re-verify"), fails, changes(c, Replacement.Change.WORSE),
+                    changes(c, Replacement.Change.BETTER));
         }
+        out.flush();
     }
 }
