@@ -36,7 +36,7 @@ public record ReportHeader(String command, OffsetDateTime time, String gatefit, 
     public static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("uuuu-MM-dd'T'HH:mm:ssxxx", Locale.ROOT);
 
     /** How many hex digits of the catalog's hash the one-line header shows. */
-    static final int SHORT_HASH = 16;
+    static final int SHORT_HASH = 12;
 
     /** What an input file is to the command. */
     public enum Role {
@@ -107,51 +107,56 @@ public record ReportHeader(String command, OffsetDateTime time, String gatefit, 
         return TIME.format(time);
     }
 
-    private String catalogText(boolean shortHash) {
-        if (catalogSha256 == null) {
-            return catalog + " (empty)";
-        }
-        return catalog + ", content SHA-256 " + (shortHash ? catalogSha256.substring(0, SHORT_HASH) + "…" : catalogSha256);
+    /**
+     * One line of the header: a label, what it names, and a hash of it (null for none; the catalog's
+     * is null when it is empty).
+     */
+    private record Line(String label, String text, String hashLabel, String hash) {
     }
 
-    /** The header's lines as (label, text). */
-    List<String[]> lines() {
-        List<String[]> out = new ArrayList<>();
-        out.add(new String[] {"Report", command + ", " + timeText() + ", gatefit " + gatefit});
-        out.add(new String[] {"Catalog", catalogText(false)});
+    private List<Line> lines() {
+        List<Line> out = new ArrayList<>();
+        out.add(new Line("Report", command + ", " + timeText() + ", gatefit " + gatefit, null, null));
+        out.add(new Line("Catalog", catalogSha256 == null ? catalog + " (empty)" : catalog, "content SHA-256",
+                catalogSha256));
         for (Input i : inputs) {
-            out.add(new String[] {i.role().label(), i.file() + ", SHA-256 " + i.sha256()});
+            out.add(new Line(i.role().label(), i.file(), "SHA-256", i.sha256()));
         }
         return out;
     }
 
-    /** The one line text on standard output begins with (the catalog's hash shortened). */
+    /** The one line text on standard output begins with: the catalog's hash shortened, no inputs. */
     String line() {
-        return command + ", " + timeText() + ", gatefit " + gatefit + "; catalog " + catalogText(true);
+        return command + ", " + timeText() + ", gatefit " + gatefit + "; catalog " + catalog + (catalogSha256 == null
+                ? " (empty)" : " " + catalogSha256.substring(0, SHORT_HASH) + "…");
     }
 
-    /** Text: every line (labels aligned) and a blank line, or only {@link #line()} when {@code brief}. */
+    /**
+     * Text: every line, labels aligned, each hash whole on a line of its own under what it names
+     * (so the block fits 100 columns), then a blank line; or only {@link #line()} (wrapped at 100
+     * columns) when {@code brief}.
+     */
     void text(Writer out, boolean brief) throws IOException {
         if (brief) {
-            out.write(line() + "\n");
+            out.write(Wrap.wrap(line(), 100, 2) + "\n");
             return;
         }
-        List<String[]> lines = lines();
-        int w = lines.stream().mapToInt(l -> l[0].length()).max().orElse(0) + 2;
-        for (String[] l : lines) {
-            out.write(l[0] + ":" + " ".repeat(w - l[0].length() - 1) + l[1] + "\n");
+        List<Line> lines = lines();
+        int w = lines.stream().mapToInt(l -> l.label().length()).max().orElse(0) + 3;
+        for (Line l : lines) {
+            out.write(l.label() + ":" + " ".repeat(w - l.label().length() - 1) + l.text() + "\n");
+            if (l.hash() != null) {
+                out.write(" ".repeat(w) + l.hashLabel() + " " + l.hash() + "\n");
+            }
         }
         out.write("\n");
     }
 
     /** Markdown: a list, hashes as code, then a blank line. */
     void markdown(Writer out) throws IOException {
-        out.write("- **Report:** " + Markdown.escape(command) + ", " + timeText() + ", gatefit "
-                + Markdown.escape(gatefit) + "\n");
-        out.write("- **Catalog:** " + Markdown.escape(catalog) + (catalogSha256 == null ? " (empty)"
-                : ", content SHA-256 `" + catalogSha256 + "`") + "\n");
-        for (Input i : inputs) {
-            out.write("- **" + i.role().label() + ":** " + Markdown.escape(i.file()) + ", SHA-256 `" + i.sha256() + "`\n");
+        for (Line l : lines()) {
+            out.write("- **" + l.label() + ":** " + Markdown.escape(l.text()) + (l.hash() == null ? ""
+                    : ", " + l.hashLabel() + " `" + l.hash() + "`") + "\n");
         }
         out.write("\n");
     }
@@ -161,11 +166,12 @@ public record ReportHeader(String command, OffsetDateTime time, String gatefit, 
         StringBuilder sb = new StringBuilder("<header class=\"report-head\" id=\"report-head\">\n<dl class=\"ctx\">\n");
         sb.append("<dt>Report</dt><dd>").append(Html.esc(command)).append(", <time datetime=\"").append(timeText())
                 .append("\">").append(timeText()).append("</time>, gatefit ").append(Html.esc(gatefit)).append("</dd>\n");
-        sb.append("<dt>Catalog</dt><dd>").append(Html.esc(catalog)).append(catalogSha256 == null ? " (empty)"
-                : ", content SHA-256 <code class=\"hash\">" + catalogSha256 + "</code>").append("</dd>\n");
-        for (Input i : inputs) {
-            sb.append("<dt>").append(Html.esc(i.role().label())).append("</dt><dd>").append(Html.esc(i.file()))
-                    .append(", SHA-256 <code class=\"hash\">").append(i.sha256()).append("</code></dd>\n");
+        for (Line l : lines().subList(1, lines().size())) {
+            sb.append("<dt>").append(Html.esc(l.label())).append("</dt><dd>").append(Html.esc(l.text()));
+            if (l.hash() != null) {
+                sb.append(", ").append(l.hashLabel()).append(" <code class=\"hash\">").append(l.hash()).append("</code>");
+            }
+            sb.append("</dd>\n");
         }
         return sb.append("</dl>\n</header>\n").toString();
     }

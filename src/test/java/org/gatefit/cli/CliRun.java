@@ -60,6 +60,15 @@ record CliRun(int exit, String out, String err) {
         return catalog;
     }
 
+    /**
+     * {@code printed} with the catalog's content hash of every report header as {@code CONTENT-HASH}:
+     * for comparing what two catalogs of the same parts answer (each import names its own content).
+     */
+    static String sameContentHash(String printed) {
+        return printed.replaceAll("(\"content_sha256\" : \"|content SHA-256[ `]+|catalog\\s+\\S+\\s+)[0-9a-f]{12,64}…?",
+                "$1CONTENT-HASH");
+    }
+
     /** A readable dump for assertion messages. */
     String dump() {
         return "exit " + exit + "\n--- stdout\n" + out + "\n--- stderr\n" + err;
