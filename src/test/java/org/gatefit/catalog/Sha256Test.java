@@ -7,7 +7,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
+import org.gatefit.testsupport.Sha256Sum;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -47,22 +47,8 @@ class Sha256Test {
         Files.write(f, b);
         String ours = Sha256.of(f);
         assertTrue(ours.matches("[0-9a-f]{64}"), ours);
-        String ref = sha256sum(f);
+        String ref = Sha256Sum.of(f);
         Assumptions.assumeTrue(ref != null, "sha256sum (GNU coreutils) not on this machine");
         assertEquals(ref, ours, "sha256sum " + f);
-    }
-
-    /** What {@code sha256sum FILE} prints as the hash, or null when the tool is not there. */
-    static String sha256sum(Path file) throws IOException, InterruptedException {
-        Process p;
-        try {
-            p = new ProcessBuilder("sha256sum", file.toString()).redirectErrorStream(true).start();
-        } catch (IOException notThere) {
-            return null;
-        }
-        String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS), "sha256sum finished");
-        assertEquals(0, p.exitValue(), out);
-        return out.substring(0, out.indexOf(' '));
     }
 }
