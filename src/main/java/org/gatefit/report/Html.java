@@ -45,6 +45,9 @@ final class Html {
               font-weight: 600; }
             .summary { font-size: 1.05rem; } .muted { color: #666; }
             a { color: #1f4e9a; }
+            @media screen and (max-width: 1000px) {
+              table { font-size: .8rem; } th, td { padding: .25rem .3rem; }
+            }
             @page { margin: 14mm 12mm; }
             @media print {
               body { margin: 0; max-width: none; font-size: 10pt; }

@@ -11,7 +11,7 @@ import java.util.Map;
 
 /**
  * A small invented catalog (maker Testmaker, parts TST-…) whose descriptions, makers and stage ids
- * carry hostile text, and the four HTML reports rendered from it through {@link Cli#create}.
+ * carry hostile text, and the HTML reports rendered from it through {@link Cli#create}.
  */
 final class HtmlFixture {
     /** Text that would run or break markup if it reached the page unescaped. */
@@ -40,7 +40,7 @@ final class HtmlFixture {
     final Path dir;
     final Path catalog;
     final Path stages;
-    /** Report name (explain, shortlist, check, replace) to its HTML file. */
+    /** Report name (explain, shortlist, check, replace, compare: explain with three drivers) to its HTML file. */
     final Map<String, Path> reports = new LinkedHashMap<>();
 
     HtmlFixture(Path dir) throws IOException {
@@ -76,16 +76,19 @@ final class HtmlFixture {
         render("shortlist", 0, "shortlist", "--switch", "TST-G650A", "--all");
         render("check", 1, "check", stages.toString());
         render("replace", 0, "replace", "TST-G650A", "--stages", stages.toString());
+        render("compare", 1, "explain", "--driver", "TST-D06A", "--driver", "TST-D06B", "--driver", "TST-D06C",
+                "--switch", "TST-G650A");
     }
 
     private void render(String name, int exit, String... args) throws IOException {
         Path file = dir.resolve(name + ".html");
-        String[] all = new String[args.length + 4 + (name.equals("explain") || name.equals("shortlist") ? POINT.length : 0)];
+        boolean point = name.equals("explain") || name.equals("shortlist") || name.equals("compare");
+        String[] all = new String[args.length + 4 + (point ? POINT.length : 0)];
         int k = 0;
         for (String a : args) {
             all[k++] = a;
         }
-        if (name.equals("explain") || name.equals("shortlist")) {
+        if (point) {
             for (String a : POINT) {
                 all[k++] = a;
             }

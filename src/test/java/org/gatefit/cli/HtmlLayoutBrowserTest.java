@@ -1,0 +1,156 @@
+package org.gatefit.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.TestInstance;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.openqa.selenium.By;
+import org.openqa.selenium.Dimension;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.Rectangle;
+import org.openqa.selenium.TakesScreenshot;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+
+/**
+ * The HTML reports laid out by a real browser (Selenium driving headless Chromium, as
+ * {@link ServeBrowserTest}): the report header is on the page, visible without scrolling, and names
+ * the catalog's content hash and each input's; and nothing is wider than the page's content column
+ * (the page never scrolls sideways, no element sticks out of the body), at a desktop width and at a
+ * narrow one. Screenshots go to {@code target/browser-screenshots/}. Without Chromium it fails in CI
+ * and is skipped elsewhere, as {@link HtmlBrowserTest}.
+ */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class HtmlLayoutBrowserTest {
+    HtmlFixture fx;
+    WebDriver browser;
+    boolean present;
+
+    /**
+     * Elements whose border box passes the body's content box (1 px of rounding allowed); inside an
+     * SVG chart only the {@code <svg>} itself counts (it is scaled to the column). Each as tag, class and
+     * how far it sticks out.
+     */
+    private static final String OVERFLOWING = """
+            const body = document.body;
+            const cs = getComputedStyle(body);
+            const box = body.getBoundingClientRect();
+            const left = box.left + parseFloat(cs.paddingLeft), right = box.right - parseFloat(cs.paddingRight);
+            const out = [];
+            for (const el of body.querySelectorAll('*')) {
+              const svg = el.closest('svg');
+              if (svg && svg !== el) continue;
+              const r = el.getBoundingClientRect();
+              if (r.width === 0 && r.height === 0) continue;
+              if (r.right > right + 1 || r.left < left - 1) {
+                out.push(el.tagName.toLowerCase() + '.' + el.className + ' "' + (el.textContent || '').slice(0, 40)
+                    + '" ' + Math.round(r.left) + '..' + Math.round(r.right) + ' outside ' + Math.round(left) + '..'
+                    + Math.round(right));
+              }
+            }
+            return out;""";
+
+    @BeforeAll
+    void start(@TempDir Path dir) throws Exception {
+        present = Files.isExecutable(ServeBrowserTest.CHROMIUM) && Files.isExecutable(ServeBrowserTest.DRIVER);
+        if (!present) {
+            return;
+        }
+        fx = new HtmlFixture(dir.resolve("reports"));
+        ChromeOptions o = new ChromeOptions();
+        o.setBinary(ServeBrowserTest.CHROMIUM.toFile());
+        o.addArguments("--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
+                "--disable-background-networking", "--no-first-run", "--disable-component-update", "--disable-sync",
+                "--hide-scrollbars", "--window-size=1200,1600");
+        ChromeDriverService service = new ChromeDriverService.Builder()
+                .usingDriverExecutable(ServeBrowserTest.DRIVER.toFile()).usingAnyFreePort().build();
+        browser = new ChromeDriver(service, o);
+    }
+
+    @BeforeEach
+    void needsBrowser() {
+        if (!present) {
+            String hint = "Chromium and its driver not found (" + ServeBrowserTest.CHROMIUM + ", "
+                    + ServeBrowserTest.DRIVER + "): install them with 'apt-get update && apt-get install -y chromium"
+                    + " chromium-driver' (.ci/run does)";
+            if ("true".equalsIgnoreCase(System.getenv("CI")) && !"1".equals(System.getenv(HtmlBrowserTest.SKIP))) {
+                fail(hint + ", or set " + HtmlBrowserTest.SKIP + "=1 to skip this test");
+            }
+            Assumptions.abort(hint + "; browser test skipped outside CI");
+        }
+    }
+
+    @AfterAll
+    void quit() {
+        if (browser != null) {
+            browser.quit();
+        }
+    }
+
+    @ParameterizedTest
+    @CsvSource({"compare, 1200", "compare, 800", "replace, 1200", "replace, 800", "explain, 1200", "check, 1200",
+        "shortlist, 1200"})
+    void theHeaderIsVisibleAndNothingIsWiderThanThePage(String report, int width) throws Exception {
+        browser.manage().window().setSize(new Dimension(width, 1600));
+        browser.get(fx.reports.get(report).toUri().toString());
+        String source = fx.html(report);
+
+        WebElement head = browser.findElement(By.id("report-head"));
+        assertTrue(head.isDisplayed(), report + ": the header is displayed");
+        Rectangle r = head.getRect();
+        assertTrue(r.getWidth() > 200 && r.getHeight() > 20, report + ": the header has a size, " + r);
+        long viewport = ((Number) js("return window.innerHeight;")).longValue();
+        assertTrue(r.getY() + r.getHeight() <= viewport, report + ": the header is seen without scrolling, " + r);
+        String text = head.getText();
+        for (String want : List.of("Report", "Catalog", "content SHA-256", "gatefit")) {
+            assertTrue(text.contains(want), report + ": the header says " + want + ":\n" + text);
+        }
+        java.util.regex.Matcher hash = java.util.regex.Pattern.compile("<code class=\"hash\">([0-9a-f]{64})</code>")
+                .matcher(source);
+        assertTrue(hash.find(), report + ": the catalog hash in the source");
+        for (WebElement code : head.findElements(By.cssSelector("code.hash"))) {
+            assertTrue(code.isDisplayed(), report + ": hash shown");
+            assertTrue(code.getText().replaceAll("\\s", "").matches("[0-9a-f]{64}"), report + ": " + code.getText());
+        }
+        if (report.equals("replace")) {
+            assertTrue(text.contains("Stage sheet") && text.contains(fx.stages.getFileName().toString()),
+                    report + ": the stage sheet in the header:\n" + text);
+            assertEquals(2, head.findElements(By.cssSelector("code.hash")).size(), report + ": catalog and stage sheet");
+        }
+
+        List<?> out = (List<?>) js(OVERFLOWING);
+        assertTrue(out.isEmpty(), report + " at " + width + " px: wider than the content column:\n"
+                + String.join("\n", out.stream().map(Object::toString).toList()));
+
+        Map<?, ?> widths = (Map<?, ?>) js("return {page: document.documentElement.scrollWidth, view:"
+                + " document.documentElement.clientWidth, body: document.body.scrollWidth, bodyBox:"
+                + " document.body.clientWidth};");
+        assertTrue(((Number) widths.get("page")).longValue() <= ((Number) widths.get("view")).longValue(),
+                report + " at " + width + " px: the page scrolls sideways " + widths);
+        assertTrue(((Number) widths.get("body")).longValue() <= ((Number) widths.get("bodyBox")).longValue(),
+                report + " at " + width + " px: the content is wider than its column " + widths);
+        Path keep = Path.of("target", "browser-screenshots");
+        Files.createDirectories(keep);
+        Files.write(keep.resolve(report + "-" + width + ".png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
+    }
+
+    private Object js(String script) {
+        return ((JavascriptExecutor) browser).executeScript(script);
+    }
+}
