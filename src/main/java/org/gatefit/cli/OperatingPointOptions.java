@@ -76,6 +76,16 @@ final class OperatingPointOptions {
             description = "Switch-node slew rate to check, V/ns (default: estimated as bus / turn-on plateau time).")
     String dvdt;
 
+    @Option(names = "--bridge", paramLabel = "yes|no",
+            description = "Whether another switch turns on against this one (half-bridge, totem pole, synchronous"
+                    + " rectifier) — its edge is what the dv-dt rule judges (default: yes, printed).")
+    String bridge;
+
+    @Option(names = "--tj", paramLabel = "°C",
+            description = "Junction temperature of the hot corner, °C (default 125): the threshold falls and the driver's"
+                    + " output resistance rises with it; rules that depend on them judge at 25 °C and here, the worse decides.")
+    String tj;
+
     @Option(names = "--channels-used", paramLabel = "N",
             description = "Channels of the driver's package that switch at this point; their dissipation adds up in the"
                     + " package (default: all of the driver's channels).")
@@ -110,7 +120,8 @@ final class OperatingPointOptions {
             {"--logic", "logic", logic}, {"--v-oh", "v_oh_v", vOh}, {"--v-ol", "v_ol_v", vOl},
             {"--pwm", "pwm_sense", pwm}, {"--rg", "r_g_ohm", rg}, {"--rg-off", "r_g_off_ohm", rgOff},
             {"--duty-max", "duty_max", dutyMax}, {"--parallel", "parallel", parallel}, {"--loop", "loop_nh", loop},
-            {"--v-f-boot", "v_f_boot_v", vfBoot}, {"--r-boot", "r_boot_ohm", rBoot}};
+            {"--v-f-boot", "v_f_boot_v", vfBoot}, {"--r-boot", "r_boot_ohm", rBoot}, {"--tj", "t_j_c", tj},
+            {"--bridge", "bridge", bridge}};
         Schema sheet = Schema.of(Kind.STAGE);
         Map<String, Object> values = new LinkedHashMap<>();
         if (stage != null) {

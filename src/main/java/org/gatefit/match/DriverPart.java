@@ -106,6 +106,7 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
         static final int tDesat = S.position("t_desat_ns");
         static final int softOff = S.position("soft_off");
         static final int bootClamp = S.position("boot_clamp_v");
+        static final int tPropMax = S.position("t_prop_max_ns");
     }
 
     /** Input senses as listed, e.g. {@code non-inverting;inverting}; the few distinct lists are decoded once. */
@@ -143,7 +144,7 @@ public record DriverPart(String partNumber, String maker, String pinout, String 
                 new DriverRatings(r.si(C.vIorm), r.number(C.cmti) * DriverRatings.KV_PER_US,
                         DriverRatings.uvloTotal(r.text(C.uvloMonitors)), r.si(C.iQOut), r.si(C.qLs),
                         yesNo(r.text(C.desat)), r.si(C.tDesat), yesNo(r.text(C.softOff)),
-                        r.si(C.bootClamp)));
+                        r.si(C.bootClamp), r.si(C.tPropMax)));
     }
 
     private static Boolean yesNo(String s) {

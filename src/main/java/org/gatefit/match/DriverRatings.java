@@ -16,13 +16,14 @@ package org.gatefit.match;
  * @param tDesat    fault detection time, s ({@code t_desat_ns})
  * @param softOff   soft turn-off after a fault ({@code soft_off})
  * @param bootClamp highest level the built-in bootstrap clamp lets the high-side supply reach, V ({@code boot_clamp_v})
+ * @param tPropMax  maximum propagation delay over temperature and parts, s ({@code t_prop_max_ns})
  */
 public record DriverRatings(double vIorm, double cmti, Boolean uvloTotal, double iQOut, double qLs, Boolean desat,
-                            double tDesat, Boolean softOff, double bootClamp) {
+                            double tDesat, Boolean softOff, double bootClamp, double tPropMax) {
 
     /** Nothing known. */
     public static final DriverRatings UNKNOWN = new DriverRatings(Double.NaN, Double.NaN, null, Double.NaN, Double.NaN,
-            null, Double.NaN, null, Double.NaN);
+            null, Double.NaN, null, Double.NaN, Double.NaN);
 
     /** kV/µs in V/s: 1e3 V / 1e-6 s. */
     static final double KV_PER_US = 1e9;

@@ -22,6 +22,9 @@ public final class Eng {
         if (unit.isEmpty() || unit.equals("1")) {
             return num(v);
         }
+        if (unit.equals("V/ns")) {
+            return num(v) + " V/ns"; // the trade's unit as it is, never mV/ns or kV/ns
+        }
         if (unit.equals("%")) {
             return num(v * 100) + " %";
         }
@@ -38,6 +41,14 @@ public final class Eng {
             digits = num(v / Math.pow(10, 3 * e3));
         }
         return digits + " " + PREFIX[e3 + 5] + unit;
+    }
+
+    /**
+     * A slew rate given in V/s written in the trade's unit, V/ns (1 V/ns = 1 kV/µs), three
+     * significant digits: dv/dt and CMTI are said this way everywhere.
+     */
+    public static String slew(double voltsPerSecond) {
+        return num(voltsPerSecond * 1e-9) + " V/ns";
     }
 
     /** Three significant digits, trailing zeros dropped; "unknown" for NaN, ∞ for an unbounded value. */

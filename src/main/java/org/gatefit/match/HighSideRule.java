@@ -108,7 +108,7 @@ final class HighSideRule implements PairRule {
      * when it is worse (a failure always, a warning or unknown only over a pass).
      */
     private static void cmti(PairFigures f, Outcome out) {
-        double slew = f.slew();
+        double slew = f.slewMax();
         if (out.verdict() == Verdict.FAIL || !(slew > 0)) {
             return;
         }
@@ -135,7 +135,7 @@ final class HighSideRule implements PairRule {
         double rating = d.vOffsetMax();
         double need = stress(f);
         double cmti = d.ratings().cmti();
-        double slew = f.slew();
+        double slew = f.slewMax();
         List<Comparison> cmp = new ArrayList<>();
         if (d.topology() == Topology.ISOLATED) {
             if (!Double.isNaN(iorm)) {
@@ -147,10 +147,10 @@ final class HighSideRule implements PairRule {
             cmp.add(new Comparison("floating offset rating", rating, "≥", need, "V"));
         }
         if (!Double.isNaN(cmti) && slew > 0) {
-            cmp.add(new Comparison("CMTI", cmti, "≥", slew * f.m().cmti(), "V/s"));
+            cmp.add(new Comparison("CMTI", cmti * 1e-9, "≥", slew * f.m().cmti() * 1e-9, "V/ns"));
         }
-        String dvdt = slew > 0 ? Eng.of(slew, "V/s") + (Double.isNaN(f.op().dvdt()) ? " (estimated)" : "") : "";
-        String cmtiOk = !Double.isNaN(cmti) && slew > 0 ? "; CMTI " + Eng.of(cmti, "V/s") + " against the " + dvdt
+        String dvdt = slew > 0 ? Eng.slew(slew) + (Double.isNaN(f.op().dvdt()) ? " (estimated, fastest edge and corner)" : "") : "";
+        String cmtiOk = !Double.isNaN(cmti) && slew > 0 ? "; CMTI " + Eng.slew(cmti) + " against the " + dvdt
                 + " switch node" : "";
         String overshoot = "the " + Eng.of(bus, "V") + " bus with " + Eng.pct(f.m().offset()) + " for overshoot";
         return switch ((Why) why) {
@@ -191,13 +191,13 @@ final class HighSideRule implements PairRule {
             case OFFSET_OK -> new Worded("offset rating " + Eng.of(rating, "V") + " covers the "
                     + Eng.of(bus, "V") + " bus with " + Eng.pct(rating / bus - 1) + " to spare" + cmtiOk, cmp);
             case CMTI_BELOW -> new Worded("the switch node slews at " + dvdt + ", faster than this driver's CMTI "
-                    + Eng.of(cmti, "V/s") + ", so the floating output may glitch (false turn-on, shoot-through) — pick a"
-                    + " driver with CMTI ≥ " + Eng.of(slew * f.m().cmti(), "V/s") + " or slow the edge (larger R_g)", cmp);
-            case CMTI_THIN -> new Worded("CMTI " + Eng.of(cmti, "V/s") + " is less than " + Eng.num(f.m().cmti())
+                    + Eng.slew(cmti) + ", so the floating output may glitch (false turn-on, shoot-through) — pick a"
+                    + " driver with CMTI ≥ " + Eng.slew(slew * f.m().cmti()) + " or slow the edge (larger R_g)", cmp);
+            case CMTI_THIN -> new Worded("CMTI " + Eng.slew(cmti) + " is less than " + Eng.num(f.m().cmti())
                     + "× the " + dvdt + " switch-node slew (the estimate is an average; the peak is steeper) — pick a"
-                    + " driver with CMTI ≥ " + Eng.of(slew * f.m().cmti(), "V/s") + " or measure the slew", cmp);
+                    + " driver with CMTI ≥ " + Eng.slew(slew * f.m().cmti()) + " or measure the slew", cmp);
             case NO_CMTI -> new Worded("isolation is adequate, but this isolated driver's CMTI (cmti_kv_us) is unknown"
-                    + " against the " + dvdt + " switch node — look it up; it must be ≥ " + Eng.of(slew * f.m().cmti(), "V/s"),
+                    + " against the " + dvdt + " switch node — look it up; it must be ≥ " + Eng.slew(slew * f.m().cmti()),
                     cmp);
         };
     }

@@ -39,13 +39,16 @@ import java.util.Map;
  * @param protectionBus    bus voltage above which an IGBT or SiC stage is expected to have
  *                         desaturation or over-current detection (default 100 V; common practice,
  *                         no source)
+ * @param deadTime         a half-bridge's configured dead time must exceed its minimum by this
+ *                         fraction to pass (default 0.25: temperature, supply and part spread beyond
+ *                         the model; common practice, no source)
  */
 public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadroom, double logicNoise, double offset,
                       double isolation, double driverPower, double dvdt, double cmti, double uvloPlateau,
-                      double bootCapBias, double protectionBus) {
+                      double bootCapBias, double protectionBus, double deadTime) {
 
     /** The defaults documented above. */
-    public static final Margins DEFAULT = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100);
+    public static final Margins DEFAULT = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100, 0.25);
 
     public Margins {
         check("drive-current", driveCurrent, 1, 100);
@@ -60,13 +63,15 @@ public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadr
         check("uvlo-plateau", uvloPlateau, 0, 1);
         check("boot-cap-bias", bootCapBias, 0.05, 1);
         check("protection-bus", protectionBus, 0, 10000);
+        check("dead-time", deadTime, 0, 10);
     }
 
     /** The margins of a map in {@link #asMap}'s order and names. */
     private static Margins of(Map<String, Double> v) {
         return new Margins(v.get("drive-current"), v.get("gate-headroom"), v.get("uvlo-headroom"), v.get("logic-noise"),
                 v.get("offset"), v.get("isolation"), v.get("driver-power"), v.get("dv-dt"), v.get("cmti"),
-                v.get("uvlo-plateau"), v.get("boot-cap-bias"), v.get("protection-bus"));
+                v.get("uvlo-plateau"), v.get("boot-cap-bias"), v.get("protection-bus"),
+                v.get("dead-time"));
     }
 
     private static void check(String name, double v, double lo, double hi) {
@@ -91,6 +96,7 @@ public record Margins(double driveCurrent, double gateHeadroom, double uvloHeadr
         m.put("uvlo-plateau", uvloPlateau);
         m.put("boot-cap-bias", bootCapBias);
         m.put("protection-bus", protectionBus);
+        m.put("dead-time", deadTime);
         return m;
     }
 

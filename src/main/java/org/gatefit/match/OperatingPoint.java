@@ -2,6 +2,7 @@ package org.gatefit.match;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.gatefit.physics.JunctionTemperature;
 import org.gatefit.physics.LogicFamily;
 
 /**
@@ -31,11 +32,15 @@ import org.gatefit.physics.LogicFamily;
  * @param assumed    what was assumed, one line each
  * @param channelsUsed how many channels of the driver's package switch at this point (their
  *                   dissipation adds up in the package); 0: all of the driver's channels
+ * @param bridge     whether another switch turns on against this one (half-bridge, totem pole,
+ *                   synchronous rectifier): its edge is what can turn this switch on through C_gd
+ * @param tj         junction temperature of the hot corner, °C: the rules that depend on temperature
+ *                   judge at 25 °C (where datasheets specify) and here, and the worse decides
  */
 public record OperatingPoint(boolean highSide, double bus, double fSw, double edge, double vDrive, double vDriveNeg,
                              LogicFamily logic, double vOh, double vOl, double vOhMax, boolean activeHigh, double rG,
                              double rGOff, double dutyMax, int parallel, double loop, double diodeDrop, double rBoot,
-                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed) {
+                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed, boolean bridge, double tj) {
 
     /** Gate-loop inductance assumed when none is given (REFERENCES.md §3: 10–20 nH leaded, from memory). */
     public static final double DEFAULT_LOOP = 10e-9;
@@ -45,6 +50,11 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
     public static final double DEFAULT_R_BOOT = 2.2;
     /** Controller family assumed when none is given: 3.3 V LVCMOS, the usual microcontroller output. */
     public static final LogicFamily DEFAULT_LOGIC = LogicFamily.LVCMOS_3V3;
+    /**
+     * Junction temperature of the hot corner when none is given, °C: a usual design maximum for
+     * silicon and SiC power stages (common practice, no source; give the design's own).
+     */
+    public static final double DEFAULT_TJ = 125;
 
     public OperatingPoint {
         assumed = List.copyOf(assumed);
@@ -62,6 +72,10 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         }
         if (channelsUsed < 0) {
             throw new IllegalArgumentException("expected at least 1 channel used (0: all), got " + channelsUsed);
+        }
+        if (!(tj >= JunctionTemperature.MIN_C && tj <= JunctionTemperature.MAX_C)) {
+            throw new IllegalArgumentException("expected a junction temperature from " + (int) JunctionTemperature.MIN_C
+                    + " to " + (int) JunctionTemperature.MAX_C + " °C, got " + tj + " °C");
         }
         if (!(rG >= 0) || !(rGOff >= 0)) {
             throw new IllegalArgumentException("expected gate resistors ≥ 0 Ω, got " + rG + " / " + rGOff);
@@ -104,6 +118,10 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         public Double dvdt;
         /** Channels of the driver's package that switch (null: all). */
         public Integer channelsUsed;
+        /** Junction temperature of the hot corner, °C (null: {@link #DEFAULT_TJ}). */
+        public Double tj;
+        /** Whether another switch turns on against this one (null: assumed yes, printed). */
+        public Boolean bridge;
 
         /**
          * What a stage-sheet row (or the same columns typed on the command line) gives; empty
@@ -135,6 +153,10 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.loop = si(r, "loop_nh");
             s.diodeDrop = si(r, "v_f_boot_v");
             s.rBoot = si(r, "r_boot_ohm");
+            s.tj = si(r, "t_j_c");
+            if (r.text("bridge") != null) {
+                s.bridge = r.text("bridge").equals("yes");
+            }
             return s;
         }
 
@@ -165,6 +187,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.rBoot = rBoot;
             s.dvdt = dvdt;
             s.channelsUsed = channelsUsed;
+            s.tj = tj;
+            s.bridge = bridge;
             return s;
         }
 
@@ -238,13 +262,21 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             }
             double vf = diodeDrop != null ? diodeDrop : DEFAULT_DIODE_DROP;
             double rb = rBoot != null ? rBoot : DEFAULT_R_BOOT;
+            double t = tj != null ? tj : DEFAULT_TJ;
+            if (tj == null) {
+                a.add("hot corner: junction " + Eng.num(t) + " °C assumed (give --tj or t_j_c)");
+            }
+            if (bridge == null) {
+                a.add("bridge: another switch assumed to turn on against this one (dv-dt; give --bridge no or bridge = no"
+                        + " for a single-switch stage)");
+            }
             if (sw.rGInt() != sw.rGInt()) {
                 a.add("internal gate resistance of " + sw.partNumber() + " unknown: 0 Ω used (currents are upper bounds)");
             }
             return new OperatingPoint(hs, bus == null ? Double.NaN : bus, fSw, e, on, off, fam, oh, ol, ohMax,
                     activeHigh == null || activeHigh, rg, rgOff, dutyMax == null ? Double.NaN : dutyMax,
                     parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt,
-                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed);
+                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed, bridge == null || bridge, t);
         }
     }
 }

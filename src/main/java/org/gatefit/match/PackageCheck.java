@@ -60,7 +60,7 @@ final class PackageCheck {
     }
 
     /** The stage with these checks: verdict and score as {@code Rules.evaluate} forms them. */
-    private static StageResult rescored(StageResult r, List<Check> checks, DriverPart d, SwitchPart s) {
+    static StageResult rescored(StageResult r, List<Check> checks, DriverPart d, SwitchPart s) {
         Verdict v = Verdict.PASS;
         double sum = 0;
         int w = 0;

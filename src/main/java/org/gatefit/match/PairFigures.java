@@ -3,7 +3,9 @@ package org.gatefit.match;
 import org.gatefit.physics.Bootstrap;
 import org.gatefit.physics.DriveCurrent;
 import org.gatefit.physics.DvDt;
+import org.gatefit.physics.GateLoop;
 import org.gatefit.physics.GatePower;
+import org.gatefit.physics.JunctionTemperature;
 import org.gatefit.physics.SwitchingTimes;
 
 /**
@@ -50,9 +52,21 @@ final class PairFigures {
     private double bootDutyMax;
     private double nmHigh;
     private double nmLow;
+    private double kHot;
+    private double iPlOn;
+    private double iPlOff;
+    private double driveCornerC;
     private double slew;
+    private double slewMax;
     private double rOffPath;
     private double vInduced;
+    private double vThSeen;
+    private double dvdtCornerC;
+    private double ringPeak;
+    private double ringTrough;
+    private double ringZetaOn;
+    private double ringZetaOff;
+    private double ringCornerC;
 
     private PairFigures() {
     }
@@ -89,10 +103,77 @@ final class PairFigures {
         // needs it stays unknown (NaN) and the rules that use them say unknown.
         boolean qKnown = !Double.isNaN(qTotal);
 
-        boolean edges = edges(q, rOnTot, rOffTot);
-        double plateauOn = edges ? SwitchingTimes.plateauOn(n * s.qGd(), rOnTot, op.vDrive(), s.vPlateau()) : Double.NaN;
-        double plateauOff = edges ? SwitchingTimes.plateauOff(n * s.qGd(), rOffTot, s.vPlateau(), op.vDriveNeg())
-                : Double.NaN;
+        // Two corners: 25 °C, where datasheets specify, and the junction temperature asked for. The
+        // driver's output resistance scales by kHot there (JunctionTemperature); the slow corner has
+        // the larger resistance, the fast corner the smaller.
+        double tHot = op.tj();
+        double kHot = JunctionTemperature.driverResistanceFactor(tHot);
+        double kSlow = Math.max(1, kHot);
+        double kFast = Math.min(1, kHot);
+        double slowC = kHot >= 1 ? tHot : JunctionTemperature.DATASHEET_C;
+        double fastC = kHot >= 1 ? JunctionTemperature.DATASHEET_C : tHot;
+
+        // The drain-voltage edge is the Miller plateau; the gate current on it sets the edge
+        // (REFERENCES.md §8), judged at the slow corner.
+        boolean edges = q.plateau;
+        double iPlOn = edges ? plateauCurrentOn(q, d, kSlow * rSrc, op.rG()) : Double.NaN;
+        double iPlOff = edges ? DriveCurrent.plateau(s.vPlateau() - op.vDriveNeg(), kSlow * rSnk + (op.rGOff() + rInt) / n,
+                d.iSink()) : Double.NaN;
+        double plateauOn = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOn) : Double.NaN;
+        double plateauOff = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOff) : Double.NaN;
+
+        // Miller turn-on of the switch that stays off while its twin (the same pair) turns on, at
+        // both corners; the corner nearer to (or further past) V_th,min decides.
+        double sl = Double.NaN;
+        double vi = Double.NaN;
+        double vThSeen = Double.NaN;
+        double hold = Double.NaN;
+        double dvdtC = Double.NaN;
+        double worst = Double.NEGATIVE_INFINITY;
+        double slMax = Double.NaN;
+        for (int c = 0; c < 2; c++) {
+            double k = c == 0 ? 1 : kHot;
+            double t = c == 0 ? JunctionTemperature.DATASHEET_C : tHot;
+            double slewC = slewAt(q, d, k * rSrc, op.rG());
+            if (Double.isNaN(slewC)) {
+                continue;
+            }
+            double offEdge = edges && Double.isNaN(op.dvdt()) ? op.bus() * DriveCurrent.plateau(s.vPlateau()
+                    - op.vDriveNeg(), k * rSnk + (op.rGOff() + rInt) / n, d.iSink()) / (n * s.qGd()) : slewC;
+            slMax = Double.isNaN(slMax) ? Math.max(slewC, offEdge) : Math.max(slMax, Math.max(slewC, offEdge));
+            double holdC = holdPath(q, d, k * rSnk);
+            double viC = millerKnown(q) && (op.bridge() || !Double.isNaN(op.dvdt())) ? DvDt.millerInjected(s.qGd(), op.bus(), slewC, holdC, s.cIss(), s.cRss())
+                    : Double.NaN;
+            double th = thresholdAt(s, t);
+            double badness = Double.isNaN(viC) || Double.isNaN(th) ? Double.NaN
+                    : th <= 0 ? Double.POSITIVE_INFINITY : (viC + op.vDriveNeg()) / th;
+            if (Double.isNaN(dvdtC) || badness > worst) {
+                worst = Double.isNaN(badness) ? worst : badness;
+                sl = slewC;
+                vi = viC;
+                vThSeen = th;
+                hold = holdC;
+                dvdtC = t;
+            }
+            if (tHot == JunctionTemperature.DATASHEET_C) {
+                break;
+            }
+        }
+
+        // Gate ringing: the series R-L-C step at the fast corner (least damping).
+        double zOn = Double.NaN;
+        double zOff = Double.NaN;
+        double peak = Double.NaN;
+        double trough = Double.NaN;
+        if (!Double.isNaN(s.cIss()) && s.cIss() > 0 && op.loop() > 0) {
+            double cg = n * s.cIss();
+            double rOnFast = kFast * rSrc + (op.rG() + rInt) / n;
+            double rOffFast = kFast * rSnk + (op.rGOff() + rInt) / n;
+            zOn = GateLoop.dampingRatio(rOnFast, op.loop(), cg);
+            zOff = GateLoop.dampingRatio(rOffFast, op.loop(), cg);
+            peak = GateLoop.extreme(rOnFast, op.loop(), cg, op.vDriveNeg(), op.vDrive());
+            trough = GateLoop.extreme(rOffFast, op.loop(), cg, op.vDrive(), op.vDriveNeg());
+        }
 
         // Only the driver's share is ruled on (driver-power); the split's other shares are shown figures.
         // Per package: each channel that switches at this point adds its share, quiescent and level-shift loss.
@@ -135,20 +216,6 @@ final class PairFigures {
             }
         }
 
-        double rOffPath = rSnk * n + op.rGOff() + rInt;
-        double sl = Double.NaN;
-        if (!Double.isNaN(op.dvdt())) {
-            sl = op.dvdt();
-        } else if (!Double.isNaN(op.bus()) && op.bus() > 0 && !Double.isNaN(plateauOn) && plateauOn > 0) {
-            sl = op.bus() / plateauOn;
-        }
-        double vi = Double.NaN;
-        if (!Double.isNaN(sl) && !Double.isNaN(s.cRss()) && !Double.isNaN(s.cIss()) && sl > 0) {
-            vi = rOffPath > 0 ? DvDt.induced(s.cRss(), sl, rOffPath, s.cIss(), millerStep(op, sl)) : 0;
-        } else if (!Double.isNaN(sl) && !Double.isNaN(s.cRss())) {
-            vi = DvDt.inducedBound(s.cRss(), sl, rOffPath);
-        }
-
         // Every field, every call: nothing of an earlier pair can remain.
         this.q = q;
         this.d = d;
@@ -172,9 +239,21 @@ final class PairFigures {
         this.bootDutyMax = bDuty;
         this.nmHigh = Double.isNaN(d.vIh()) ? Double.NaN : op.vOh() - d.vIh();
         this.nmLow = Double.isNaN(d.vIl()) ? Double.NaN : d.vIl() - op.vOl();
+        this.kHot = kHot;
+        this.iPlOn = iPlOn;
+        this.iPlOff = iPlOff;
+        this.driveCornerC = edges ? slowC : Double.NaN;
         this.slew = sl;
-        this.rOffPath = rOffPath;
+        this.slewMax = slMax;
+        this.rOffPath = hold;
         this.vInduced = vi;
+        this.vThSeen = vThSeen;
+        this.dvdtCornerC = dvdtC;
+        this.ringPeak = peak;
+        this.ringTrough = trough;
+        this.ringZetaOn = zOn;
+        this.ringZetaOff = zOff;
+        this.ringCornerC = Double.isNaN(peak) ? Double.NaN : fastC;
     }
 
     /** Whether the edges' plateau times are computed: a plateau to cross and positive resistances on and off. */
@@ -212,13 +291,49 @@ final class PairFigures {
         return p;
     }
 
-    /** The voltage step of the switch node that the Miller current integrates over: the bus, or 1 µs of the slew without one. */
-    double millerStep() {
-        return millerStep(q.op, slew);
+    /**
+     * The gate current on the turn-on plateau, capped at the rated peak, with a driver source
+     * resistance {@code rSrcAt} (already at its corner) and turn-on resistor {@code rG} per switch, A.
+     */
+    static double plateauCurrentOn(Question q, DriverPart d, double rSrcAt, double rG) {
+        return DriveCurrent.plateau(q.op.vDrive() - q.s.vPlateau(), rSrcAt + (rG + q.rInt) / q.n, d.iSource());
     }
 
-    private static double millerStep(OperatingPoint op, double slew) {
-        return Double.isNaN(op.bus()) ? slew * 1e-6 : op.bus();
+    /**
+     * The switch-node dv/dt while the twin (the same pair) turns on: as given, else the bus over the
+     * turn-on plateau time with the source resistance {@code rSrcAt} and resistor {@code rG}, V/s;
+     * NaN without a bus or a plateau.
+     */
+    static double slewAt(Question q, DriverPart d, double rSrcAt, double rG) {
+        OperatingPoint op = q.op;
+        if (!Double.isNaN(op.dvdt())) {
+            return op.dvdt();
+        }
+        if (!q.plateau || !(op.bus() > 0)) {
+            return Double.NaN;
+        }
+        return op.bus() * plateauCurrentOn(q, d, rSrcAt, rG) / (q.n * q.s.qGd());
+    }
+
+    /**
+     * The resistance holding an off gate, per switch: the sink (shared by the n switches, so n times
+     * it) plus R_g,off and R_g,int — or, with a Miller clamp, the clamp, taken as strong as the sink
+     * (from memory; the clamp pin bypasses R_g,off), plus R_g,int.
+     */
+    static double holdPath(Question q, DriverPart d, double rSnkAt) {
+        boolean clamp = Boolean.TRUE.equals(d.millerClamp());
+        return q.n * rSnkAt + (clamp ? 0 : q.op.rGOff()) + q.rInt;
+    }
+
+    /** Whether the charge-consistent Miller injection can be computed: a bus and the switch's Q_gd (a twin or a given dv/dt is checked apart). */
+    static boolean millerKnown(Question q) {
+        return q.op.bus() > 0 && !Double.isNaN(q.s.qGd());
+    }
+
+    /** V_th,min of the switch at a junction temperature, V; NaN when unknown. */
+    static double thresholdAt(SwitchPart s, double tj) {
+        return Double.isNaN(s.vThMin()) ? Double.NaN
+                : JunctionTemperature.threshold(s.vThMin(), s.technology().thresholdTc(), tj);
     }
 
     /** The on level for full enhancement: where R_DS(on) / V_CE(sat) is specified, else the recommended level. */
@@ -331,8 +446,67 @@ final class PairFigures {
         return nmLow;
     }
 
+    /** Factor on the driver's 25 °C output resistance at the hot corner. */
+    double kHot() {
+        return kHot;
+    }
+
+    /** Gate current on the turn-on plateau at the slow corner, A (NaN without a plateau). */
+    double iPlOn() {
+        return iPlOn;
+    }
+
+    /** Gate current on the turn-off plateau at the slow corner, A (NaN without a plateau). */
+    double iPlOff() {
+        return iPlOff;
+    }
+
+    /** Junction temperature of the slow corner the drive current was judged at, °C. */
+    double driveCornerC() {
+        return driveCornerC;
+    }
+
+    /** Switch-node dv/dt at the corner that decided the dv-dt rule, V/s. */
     double slew() {
         return slew;
+    }
+
+    /** Fastest switch-node dv/dt of either edge at either corner, V/s (for CMTI). */
+    double slewMax() {
+        return slewMax;
+    }
+
+    /** V_th,min at the corner that decided the dv-dt rule, V. */
+    double vThSeen() {
+        return vThSeen;
+    }
+
+    /** Junction temperature of the corner that decided the dv-dt rule, °C. */
+    double dvdtCornerC() {
+        return dvdtCornerC;
+    }
+
+    /** Peak gate voltage of the turn-on step (fast corner), V. */
+    double ringPeak() {
+        return ringPeak;
+    }
+
+    /** Lowest gate voltage of the turn-off step (fast corner), V. */
+    double ringTrough() {
+        return ringTrough;
+    }
+
+    double ringZetaOn() {
+        return ringZetaOn;
+    }
+
+    double ringZetaOff() {
+        return ringZetaOff;
+    }
+
+    /** Junction temperature of the fast corner the ringing was judged at, °C. */
+    double ringCornerC() {
+        return ringCornerC;
     }
 
     double rOffPath() {

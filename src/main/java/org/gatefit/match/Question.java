@@ -26,6 +26,12 @@ public final class Question {
     final double qTotal;
     /** Gate current the target edge needs (before the drive-current margin), A; NaN when Q_g is unknown. */
     final double iReq;
+    /**
+     * Gate current the drain-voltage edge needs on the Miller plateau (before the drive-current
+     * margin): the plateau charge of all switches over the edge, n·Q_gd / t_edge, A; NaN without a
+     * plateau. The edge ({@code --edge}, {@code edge_ns}) is the drain-voltage transition.
+     */
+    final double iReqPlateau;
     /** Whether the switch has a Miller plateau between the off and on levels (turn-on and turn-off times). */
     final boolean plateau;
     /**
@@ -49,15 +55,8 @@ public final class Question {
             // bipolar swing (e.g. −5 V to +18 V for SiC), the datasheet curve starts at the negative
             // level: extrapolate from the recommended on level and take the negative part's charge,
             // C_iss·|V_off,spec|, back out (REFERENCES.md §1 gate-charge curve; an estimate).
-            double vSpec = s.qGVgs();
-            double specNegCharge = 0;
-            if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
-                    && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5) {
-                vSpec = s.vGateOn();
-                double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
-                        : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
-                specNegCharge = cEq * -s.vGateOff();
-            }
+            double vSpec = specVoltage(s);
+            double specNegCharge = s.qG() - specCharge(s);
             Optional<GateCharge.Estimate> q = GateCharge.atSwing(s.qG() - specNegCharge, s.qGs(), s.qGd(), vSpec,
                     s.vPlateau(), s.cIss(), op.vDrive(), op.vDriveNeg());
             if (q.isPresent()) {
@@ -77,6 +76,35 @@ public final class Question {
         this.iReq = Double.isNaN(qTotal) ? Double.NaN : DriveCurrent.required(qTotal, op.edge());
         this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
                 && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
+        this.iReqPlateau = plateau ? DriveCurrent.required(n * s.qGd(), op.edge()) : Double.NaN;
+    }
+
+    /** Whether Q_g is specified over the switch's recommended bipolar swing (e.g. −5 V to +18 V). */
+    private static boolean bipolarSpec(SwitchPart s) {
+        return !Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && !Double.isNaN(s.vGateOn())
+                && Math.abs(s.qGVgs() - (s.vGateOn() - s.vGateOff())) < 0.5;
+    }
+
+    /**
+     * The gate voltage the datasheet's gate-charge curve ends at, counted from 0 V: q_g_vgs_v, or
+     * the recommended on level when Q_g is specified over the bipolar swing.
+     */
+    static double specVoltage(SwitchPart s) {
+        return bipolarSpec(s) ? s.vGateOn() : s.qGVgs();
+    }
+
+    /**
+     * Q_g from 0 V to {@link #specVoltage}: the datasheet's Q_g, less the negative part's charge
+     * C_iss·|V_off,spec| when it is specified over the bipolar swing (REFERENCES.md §1 gate-charge
+     * curve; an estimate).
+     */
+    static double specCharge(SwitchPart s) {
+        if (!bipolarSpec(s)) {
+            return s.qG();
+        }
+        double cEq = !Double.isNaN(s.cIss()) ? s.cIss()
+                : !Double.isNaN(s.qGs()) && !Double.isNaN(s.vPlateau()) ? s.qGs() / s.vPlateau() : 0;
+        return s.qG() - cEq * -s.vGateOff();
     }
 
     /** The question for a switch at an operating point (after defaults) with these margins. */

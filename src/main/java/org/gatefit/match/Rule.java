@@ -2,7 +2,7 @@ package org.gatefit.match;
 
 /** The checks of a driver–switch pair, with their DESIGN.md ids and weights in the score. */
 public enum Rule {
-    DRIVE_CURRENT("drive-current", 3, "peak gate current against gate charge and edge time"),
+    DRIVE_CURRENT("drive-current", 3, "gate current on the Miller plateau against the charge the drain edge moves"),
     GATE_VOLTAGE("gate-voltage", 3, "on level against driver supply range, V_GS limit and full-enhancement level"),
     NEGATIVE_BIAS("negative-bias", 1, "off level against V_GS,min, the driver's negative rail and the switch's advice"),
     UVLO("uvlo", 2, "driver undervoltage lockout against the supply and what the switch needs"),
@@ -11,10 +11,12 @@ public enum Rule {
     HIGH_SIDE("high-side", 2, "floating offset or isolation rating against the bus"),
     BOOTSTRAP("bootstrap", 1, "bootstrap capacitor, diode and duty limit"),
     DRIVER_POWER("driver-power", 1, "driver dissipation against its package limit"),
-    DV_DT("dv-dt", 1, "Miller-induced gate voltage against the threshold"),
+    DV_DT("dv-dt", 1, "Miller-induced gate voltage against the threshold at both corners"),
+    GATE_RINGING("gate-ringing", 1, "gate-loop overshoot and undershoot against V_GS,max and V_GS,min"),
     LIFECYCLE("lifecycle", 0, "production status and stock of both parts"),
     CATALOG("catalog", 0, "both parts are in the catalog"),
-    DESIGN("design", 0, "one driver package used consistently across the stages of a check");
+    DESIGN("design", 0, "one driver package used consistently across the stages of a check"),
+    DEAD_TIME("dead-time", 0, "a half-bridge stage's configured dead time against the minimum (check only)");
 
     private final String id;
     private final int weight;
@@ -37,7 +39,8 @@ public enum Rule {
      * current that is merely too small). Common practice, no source.
      */
     private static final java.util.List<Rule> FUNDAMENTAL = java.util.List.of(CATALOG, DESIGN, HIGH_SIDE, POLARITY,
-            GATE_VOLTAGE, NEGATIVE_BIAS, LOGIC_LEVEL, UVLO, DRIVE_CURRENT, BOOTSTRAP, DRIVER_POWER, DV_DT, LIFECYCLE);
+            GATE_VOLTAGE, NEGATIVE_BIAS, LOGIC_LEVEL, UVLO, DRIVE_CURRENT, DEAD_TIME, DV_DT, GATE_RINGING, BOOTSTRAP,
+            DRIVER_POWER, LIFECYCLE);
 
     static {
         if (FUNDAMENTAL.size() != values().length || !FUNDAMENTAL.containsAll(java.util.List.of(values()))) {

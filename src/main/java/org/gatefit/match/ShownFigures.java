@@ -7,6 +7,7 @@ import org.gatefit.physics.DvDt;
 import org.gatefit.physics.ESeries;
 import org.gatefit.physics.GateLoop;
 import org.gatefit.physics.GatePower;
+import org.gatefit.physics.JunctionTemperature;
 import org.gatefit.physics.SwitchingTimes;
 
 /**
@@ -31,6 +32,8 @@ final class ShownFigures {
     final double rgMin;
     final double rgMax;
     final double rgRecommended;
+    /** What sets {@link #rgMin}: the damping target, the gate-ringing rule or the dv-dt rule. */
+    final String rgFloor;
     final double bootInrush;
     final double dvdtAllowed;
 
@@ -67,15 +70,14 @@ final class ShownFigures {
         rgMin = loop == null ? Double.NaN : loop[2];
         rgMax = loop == null ? Double.NaN : loop[3];
         rgRecommended = loop == null ? Double.NaN : loop[4];
+        rgFloor = loop == null ? "" : loop[5] == 2 ? "the dv-dt rule (the twin's turn-on edge)"
+                : loop[5] == 1 ? "the gate-ringing rule" : "damping ζ ≥ " + DAMPING_TARGET;
 
         bootInrush = !Double.isNaN(f.bootDroop()) && f.bootDroop() > 0 && op.rBoot() > 0
                 ? shown(() -> Bootstrap.inrush(op.vDrive(), op.diodeDrop(), op.rBoot())) : Double.NaN;
 
-        double step = f.millerStep();
-        dvdtAllowed = !Double.isNaN(f.slew()) && f.slew() > 0 && !Double.isNaN(s.cRss()) && cIss
-                && !Double.isNaN(s.vThMin()) && s.vThMin() > 0 && f.rOffPath() > 0 && step > 0
-                ? shown(() -> DvDt.allowedRcLimited(s.cRss(), f.rOffPath(), s.cIss(), step, s.vThMin(), op.vDriveNeg()))
-                : Double.NaN;
+        dvdtAllowed = !Double.isNaN(f.vInduced()) && !Double.isNaN(f.vThSeen()) && f.vThSeen() > 0
+                ? shown(() -> allowedSlew(f)) : Double.NaN;
     }
 
     /** A figure only shown: NaN (left out) when its model refuses the pair's values. */
@@ -89,34 +91,197 @@ final class ShownFigures {
 
     /**
      * The gate-loop figures: critical resistance, damping with the chosen resistor, and the
-     * per-switch external resistor range with its recommended E24 value — damping target at the low
-     * end, the drive-current edge at the high end. Each is NaN where its model refuses the values.
+     * per-switch external turn-on resistor range with its recommended E24 value. The floor is the
+     * highest of the damping target, the resistor below which the gate-ringing rule would not pass
+     * and the resistor below which the twin's turn-on edge would make the dv-dt rule fail; the top is
+     * the drive-current margin on the turn-on plateau at the slow corner (one definition of the edge
+     * with the drive-current rule). Element 5 says which floor decided (0 damping, 1 ringing, 2 dv-dt).
+     * Each is NaN where its model refuses the values; the top may be below the floor (no resistor
+     * satisfies all, said by the recommendations) or below zero.
      */
     private static double[] gateLoop(PairFigures f) {
         Question q = f.q();
         OperatingPoint op = f.op();
+        SwitchPart s = q.s;
         int n = q.n;
-        double cg = n * q.s.cIss();
+        double cg = n * s.cIss();
         double rc = shown(() -> GateLoop.criticalResistance(op.loop(), cg));
         double z = shown(() -> GateLoop.dampingRatio(f.rOnTot(), op.loop(), cg));
-        double fixed = f.rSrc() + q.rInt / n;
-        double lo = Math.max(0, n * (DAMPING_TARGET * rc - fixed));
-        double hi = n * (op.swing() * op.edge() / (Margins.DEFAULT.driveCurrent() * q.qTotal) - fixed);
+        double kFast = Math.min(1, f.kHot());
+        double kSlow = Math.max(1, f.kHot());
+        double fixedFast = kFast * f.rSrc() + q.rInt / n;
+        double lo = Math.max(0, n * (DAMPING_TARGET * rc - fixedFast));
+        int floor = 0;
+        // Ringing: the overshoot that keeps the turn-on peak out of the gate headroom.
+        double allowed = Double.isNaN(s.vGsMax()) ? Double.NaN
+                : (s.vGsMax() * (1 - q.m.gateHeadroom()) - op.vDrive()) / op.swing();
+        if (allowed > 0 && allowed < 1) {
+            double zr = GateLoop.dampingForOvershoot(allowed);
+            double ring = n * (2 * zr * Math.sqrt(op.loop() / cg) - fixedFast);
+            if (ring > lo) {
+                lo = ring;
+                floor = 1;
+            }
+        }
+        double hi = Double.NaN;
+        if (q.plateau && f.d().iSource() >= q.m.driveCurrent() * q.iReqPlateau) {
+            hi = Math.max(0, n * ((op.vDrive() - s.vPlateau()) / (q.m.driveCurrent() * q.iReqPlateau) - kSlow * f.rSrc())
+                    - q.rInt);
+        } else if (q.plateau) {
+            hi = 0; // the rated peak alone is short of the need: no resistor helps (never a negative bound)
+        }
+        double dv = dvdtFloor(f, Double.isFinite(hi) && hi > lo ? hi : Math.max(lo, 1) * 1e3);
+        if (dv > lo) {
+            lo = dv;
+            floor = 2;
+        }
         double rec = Double.NaN;
         if (hi >= lo && hi > 0 && Double.isFinite(hi)) {
             // Aim at half the edge-limited maximum (margin on the edge, damping to spare; common
-            // practice, no source), but never below the damping minimum.
+            // practice, no source), but never below the floor.
+            double low = lo;
+            double high = hi;
             double aim = Math.max(lo, hi / 2);
             double pick = shown(() -> ESeries.E24.roundNearest(aim));
             if (pick < lo) {
-                pick = shown(() -> ESeries.E24.roundUp(lo));
+                pick = shown(() -> ESeries.E24.roundUp(low));
             }
             if (pick > hi) {
-                pick = shown(() -> ESeries.E24.roundDown(hi));
+                pick = shown(() -> ESeries.E24.roundDown(high));
             }
             rec = pick >= lo && pick <= hi ? pick : Double.NaN;
         }
-        return new double[] {rc, z, Double.isNaN(rc) ? Double.NaN : lo, hi, rec};
+        return new double[] {rc, z, Double.isNaN(rc) ? Double.NaN : lo, hi, rec, floor};
+    }
+
+    /**
+     * The smallest turn-on resistor per switch (0 to {@code top} Ω) at which the twin's turn-on edge
+     * leaves the dv-dt rule no worse than a warning at both corners (a slower edge injects less);
+     * 0 when even 0 Ω is fine or dv/dt is given, +∞ when no resistor up to {@code top} is, NaN when
+     * the injection cannot be computed.
+     */
+    private static double dvdtFloor(PairFigures f, double top) {
+        Question q = f.q();
+        if (!Double.isNaN(q.op.dvdt()) || !q.op.bridge() || !PairFigures.millerKnown(q) || !q.plateau || Double.isNaN(q.s.vThMin())) {
+            return Double.NaN;
+        }
+        java.util.function.DoubleUnaryOperator excess = rg -> {
+            double worst = Double.NEGATIVE_INFINITY;
+            for (double t : new double[] {JunctionTemperature.DATASHEET_C, q.op.tj()}) {
+                double k = JunctionTemperature.driverResistanceFactor(t);
+                double slew = PairFigures.slewAt(q, f.d(), k * f.rSrc(), rg);
+                double v = DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, PairFigures.holdPath(q, f.d(), k * f.rSnk()),
+                        q.s.cIss(), q.s.cRss()) + q.op.vDriveNeg();
+                worst = Math.max(worst, v - PairFigures.thresholdAt(q.s, t));
+            }
+            return worst; // ≥ 0: the dv-dt rule fails
+        };
+        try {
+            if (excess.applyAsDouble(0) < 0) {
+                return 0;
+            }
+            if (!(top > 0) || excess.applyAsDouble(top) >= 0) {
+                return Double.POSITIVE_INFINITY;
+            }
+            double a = 0;
+            double b = top;
+            for (int i = 0; i < 60 && b - a > 1e-4 * b; i++) {
+                double m = 0.5 * (a + b);
+                if (excess.applyAsDouble(m) >= 0) {
+                    a = m;
+                } else {
+                    b = m;
+                }
+            }
+            return b;
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            return Double.NaN;
+        }
+    }
+
+    /**
+     * The switch-node dv/dt at which the induced voltage plus the off level reaches V_th,min at the
+     * corner that decided the dv-dt rule (the injection rises with dv/dt), V/s; +∞ when even a step
+     * stays below (the capacitive divider).
+     */
+    private static double allowedSlew(PairFigures f) {
+        Question q = f.q();
+        double limit = f.vThSeen() - q.op.vDriveNeg();
+        java.util.function.DoubleUnaryOperator v = slew -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, f.rOffPath(),
+                q.s.cIss(), q.s.cRss());
+        double hi = Math.max(f.slew(), 1e6);
+        if (v.applyAsDouble(1e15) < limit) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double lo = 0;
+        while (v.applyAsDouble(hi) < limit) {
+            lo = hi;
+            hi *= 2;
+        }
+        for (int i = 0; i < 100 && hi - lo > 1e-6 * hi; i++) {
+            double m = 0.5 * (lo + hi);
+            if (v.applyAsDouble(m) < limit) {
+                lo = m;
+            } else {
+                hi = m;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /**
+     * What fixes a Miller turn-on, in words: the turn-off resistor the holding path may have, a
+     * turn-on resistor that slows the twin's edge enough (when one exists within the edge), a
+     * negative off level or a Miller clamp.
+     */
+    String dvdtFix() {
+        Question q = f.q();
+        double limit = f.vThSeen() * q.m.dvdt() - q.op.vDriveNeg();
+        List<String> ways = new ArrayList<>();
+        boolean clamp = Boolean.TRUE.equals(f.d().millerClamp());
+        if (!clamp && limit > 0) {
+            double k = f.dvdtCornerC() == JunctionTemperature.DATASHEET_C ? 1 : f.kHot();
+            double fixed = q.n * k * f.rSnk() + q.rInt;
+            double hold = shown(() -> maxHold(f, limit));
+            double rgOff = hold - fixed;
+            if (rgOff >= 0 && rgOff < q.op.rGOff() && rgOff < 1e6) {
+                ways.add("lower R_g,off to ≤ " + Eng.of(ESeries.E24.roundDown(Math.max(rgOff, 0.1)), "Ω"));
+            }
+        }
+        if (Double.isFinite(rgMin) && rgMin < 1e6 && rgMin > q.op.rG() && rgFloor.startsWith("the dv-dt") && rgMax >= rgMin) {
+            ways.add("raise R_g (turn-on) to ≥ " + Eng.of(ESeries.E24.roundUp(rgMin), "Ω") + " to slow the edge");
+        }
+        ways.add(q.op.vDriveNeg() < 0 ? "a deeper negative off level" : "a negative off level");
+        if (!clamp) {
+            ways.add("a driver with a Miller clamp");
+        }
+        return String.join(", ", ways.subList(0, ways.size() - 1)) + (ways.size() > 1 ? " or " : "")
+                + ways.get(ways.size() - 1);
+    }
+
+    /** The holding resistance at which the induced voltage reaches {@code limit} at the deciding slew, Ω (bisection). */
+    private static double maxHold(PairFigures f, double limit) {
+        Question q = f.q();
+        java.util.function.DoubleUnaryOperator v = r -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), f.slew(), r, q.s.cIss(),
+                q.s.cRss());
+        double hi = Math.max(f.rOffPath(), 1);
+        if (v.applyAsDouble(1e9) < limit) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double lo = 0;
+        while (v.applyAsDouble(hi) < limit) {
+            lo = hi;
+            hi *= 2;
+        }
+        for (int i = 0; i < 100 && hi - lo > 1e-6 * hi; i++) {
+            double m = 0.5 * (lo + hi);
+            if (v.applyAsDouble(m) < limit) {
+                lo = m;
+            } else {
+                hi = m;
+            }
+        }
+        return lo;
     }
 
     /** Every figure of the pair that is a number, ruled and shown, in a fixed order, named as DESIGN.md fixes. */
@@ -126,26 +291,32 @@ final class ShownFigures {
         List<Figure> l = new ArrayList<>();
         add(l, "gate-charge-at-swing", q.qSwing, "C", "Q_g over the actual swing, per switch", qEst);
         add(l, "gate-current-required", q.iReq, "A", "Q_g / target edge", qEst);
-        add(l, "gate-current-peak-source", f.iPkSrc(), "A", "lower of rated peak and V / (R_source + R_g + R_g,int)",
+        add(l, "gate-current-peak-source", f.iPkSrc(), "A", "min(rated, V / R_on), start of the edge, 25 °C",
                 f.rSrcEstimated());
-        add(l, "gate-current-peak-sink", f.iPkSnk(), "A", "lower of rated peak and V / (R_sink + R_g,off + R_g,int)",
+        add(l, "gate-current-peak-sink", f.iPkSnk(), "A", "min(rated, V / R_off), start of the edge, 25 °C",
                 f.rSnkEstimated());
+        add(l, "gate-current-plateau-required", q.iReqPlateau, "A", "n·Q_gd / edge (the drain-voltage transition)", false);
+        add(l, "gate-current-plateau-on", f.iPlOn(), "A", "min(rated, (V_drive − V_pl) / R_on), "
+                + Eng.num(f.driveCornerC()) + " °C", f.rSrcEstimated());
+        add(l, "gate-current-plateau-off", f.iPlOff(), "A", "min(rated, (V_pl − V_off) / R_off), "
+                + Eng.num(f.driveCornerC()) + " °C", f.rSnkEstimated());
         add(l, "driver-resistance-source", f.rSrc(), "Ω", f.rSrcEstimated() ? "estimated as V / I_source,peak"
                 : "from the catalog", f.rSrcEstimated());
         add(l, "driver-resistance-sink", f.rSnk(), "Ω", f.rSnkEstimated() ? "estimated as V / I_sink,peak"
                 : "from the catalog", f.rSnkEstimated());
         add(l, "delay-time-on", delayOn, "s", "R·C_iss·ln(V_drive / (V_drive − V_pl))", false);
-        add(l, "plateau-time-on", f.plateauOn(), "s", "Q_gd·R_on,total / (V_drive − V_plateau)", false);
+        add(l, "plateau-time-on", f.plateauOn(), "s", "n·Q_gd / gate-current-plateau-on", false);
         add(l, "delay-time-off", delayOff, "s", "R·C_iss·ln((V_drive − V_off) / (V_pl − V_off))", false);
-        add(l, "plateau-time-off", f.plateauOff(), "s", "Q_gd·R_off,total / (V_plateau − V_drive,neg)", false);
+        add(l, "plateau-time-off", f.plateauOff(), "s", "n·Q_gd / gate-current-plateau-off", false);
         add(l, "gate-drive-power", pGate, "W", "Q_g·ΔV·f", qEst);
         add(l, "driver-power", f.pDriver(), "W", "channels × (gate-power share + quiescent + level shift)", qEst);
         add(l, "gate-resistor-power", pExternal, "W", "share of gate power in the external resistors", qEst);
         add(l, "gate-internal-power", pInternal, "W", "share of gate power in the internal gate resistance", qEst);
         add(l, "gate-resistance-critical", rCrit, "Ω", "2·√(L/C) of the gate loop", false);
         add(l, "gate-loop-damping", zeta, "1", "ζ = (R/2)·√(C/L) with the chosen resistor", false);
-        add(l, "gate-resistor-min", rgMin, "Ω", "per switch, for damping ζ ≥ " + DAMPING_TARGET, false);
-        add(l, "gate-resistor-max", rgMax, "Ω", "per switch, for the target edge with the drive-current margin", false);
+        add(l, "gate-resistor-min", rgMin, "Ω", "per switch, set by " + rgFloor, false);
+        add(l, "gate-resistor-max", rgMax, "Ω", "per switch, drive-current margin on the plateau, "
+                + Eng.num(Math.max(q.op.tj(), JunctionTemperature.DATASHEET_C)) + " °C", false);
         add(l, "gate-resistor-recommended", rgRecommended, "Ω", "IEC 60063 E24 value in the range", false);
         add(l, "bootstrap-charge", f.bootCharge(), "C", "Q_g + Q_ls + (I_qbs + " + Eng.of(Bootstrap.LEAKAGE_ALLOWANCE, "A")
                 + " leakage)·t_on,max per cycle", qEst);
@@ -157,11 +328,16 @@ final class ShownFigures {
         add(l, "bootstrap-inrush", bootInrush, "A", "(V_drive − V_F) / R_boot at first charge", false);
         add(l, "noise-margin-high", f.nmHigh(), "V", "V_OH − V_IH", false);
         add(l, "noise-margin-low", f.nmLow(), "V", "V_IL − V_OL", false);
-        add(l, "dv-dt", f.slew(), "V/s", Double.isNaN(f.op().dvdt()) ? "bus / plateau-time-on" : "as given",
-                Double.isNaN(f.op().dvdt()));
-        add(l, "miller-induced-voltage", f.vInduced(), "V", "C_gd·dv/dt·R_off·(1 − e^(−T/(R·C_iss)))",
-                Double.isNaN(f.op().dvdt()));
-        add(l, "dv-dt-allowed", dvdtAllowed, "V/s", "slew at which the induced voltage reaches V_th,min", false);
+        add(l, "dv-dt", f.slew() * 1e-9, "V/ns", (Double.isNaN(f.op().dvdt()) ? "bus / the twin's turn-on plateau"
+                : "as given") + ", " + Eng.num(f.dvdtCornerC()) + " °C", Double.isNaN(f.op().dvdt()));
+        add(l, "miller-induced-voltage", f.vInduced(), "V", "(Q_gd/V_bus)·dv/dt·R, RC-limited, "
+                + Eng.num(f.dvdtCornerC()) + " °C", true);
+        add(l, "threshold-min-at-corner", f.vThSeen(), "V", "V_th,min at " + Eng.num(f.dvdtCornerC()) + " °C", true);
+        add(l, "dv-dt-allowed", dvdtAllowed * 1e-9, "V/ns", "slew at which the induced voltage reaches V_th,min", false);
+        add(l, "gate-peak-on", f.ringPeak(), "V", "series R-L-C step to the on level, " + Eng.num(f.ringCornerC()) + " °C",
+                true);
+        add(l, "gate-trough-off", f.ringTrough(), "V", "series R-L-C step to the off level, " + Eng.num(f.ringCornerC())
+                + " °C", true);
         return l;
     }
 

@@ -9,11 +9,11 @@ import java.util.Optional;
 import java.util.function.Function;
 import org.gatefit.catalog.Bom;
 import org.gatefit.catalog.Row;
-import org.gatefit.physics.DeadTime;
 
 /**
  * {@code check}: every driver–switch pair of a design's stage sheet, with every rule, plus the
- * {@code catalog} rule (both parts found) and a dead-time note for half-bridges.
+ * {@code catalog} rule (both parts found), the package checks ({@link PackageCheck}) and the
+ * {@code dead-time} rule for half-bridges ({@link DeadTimeCheck}).
  */
 public final class StageCheck {
 
@@ -106,7 +106,8 @@ public final class StageCheck {
                     pn -> switchCache.computeIfAbsent(pn, switches), m));
             progress.accept(out.size());
         }
-        out = deadTime(out, pn -> driverCache.computeIfAbsent(pn, drivers));
+        out = DeadTimeCheck.apply(out, stages, pn -> driverCache.computeIfAbsent(pn, drivers),
+                pn -> switchCache.computeIfAbsent(pn, switches), m);
         out = PackageCheck.apply(out, pn -> driverCache.computeIfAbsent(pn, drivers),
                 pn -> switchCache.computeIfAbsent(pn, switches), m);
         return new Report(file, out, bom == null ? List.of() : bom.notes(), m);
@@ -185,73 +186,6 @@ public final class StageCheck {
 
     private static String describe(String ref, String pn) {
         return ref.equalsIgnoreCase(pn) ? pn : ref + " (" + pn + ")";
-    }
-
-    /**
-     * Stages that share a driver reference, one high and one low, form a half-bridge: the dead
-     * time must cover the slower switch's turn-off (delay plus plateau, estimated) less the other's
-     * turn-on delay, plus the drivers' delay mismatch (REFERENCES.md §9, common practice).
-     */
-    private static List<StageResult> deadTime(List<StageResult> results, Function<String, Optional<Row>> drivers) {
-        Map<String, List<Integer>> byDriver = new LinkedHashMap<>();
-        for (int i = 0; i < results.size(); i++) {
-            StageResult r = results.get(i);
-            if (r.point() != null) {
-                byDriver.computeIfAbsent(r.driverRef().toUpperCase(java.util.Locale.ROOT), k -> new ArrayList<>()).add(i);
-            }
-        }
-        List<StageResult> out = new ArrayList<>(results);
-        for (List<Integer> group : byDriver.values()) {
-            if (group.size() != 2) {
-                continue;
-            }
-            StageResult a = results.get(group.get(0));
-            StageResult b = results.get(group.get(1));
-            if (a.point().highSide() == b.point().highSide()) {
-                continue;
-            }
-            String note = deadTimeNote(a, b, drivers);
-            if (note != null) {
-                out.set(group.get(0), withNote(a, "half-bridge with stage " + b.stage() + ": " + note));
-                out.set(group.get(1), withNote(b, "half-bridge with stage " + a.stage() + ": " + note));
-            }
-        }
-        return out;
-    }
-
-    private static String deadTimeNote(StageResult a, StageResult b, Function<String, Optional<Row>> drivers) {
-        double offA = sum(a, "delay-time-off", "plateau-time-off");
-        double offB = sum(b, "delay-time-off", "plateau-time-off");
-        double onA = a.figure("delay-time-on").map(Figure::value).orElse(Double.NaN);
-        double onB = b.figure("delay-time-on").map(Figure::value).orElse(Double.NaN);
-        if (Double.isNaN(offA) || Double.isNaN(offB) || Double.isNaN(onA) || Double.isNaN(onB)) {
-            return null;
-        }
-        DriverPart da = DriverPart.of(drivers.apply(a.driver()).orElseThrow());
-        DriverPart db = DriverPart.of(drivers.apply(b.driver()).orElseThrow());
-        double mismatch;
-        String mm;
-        if (a.driver().equals(b.driver()) && !Double.isNaN(da.tMatch())) {
-            mismatch = da.tMatch();
-            mm = "delay matching " + Eng.of(mismatch, "s");
-        } else if (!Double.isNaN(da.tProp()) && !Double.isNaN(db.tProp())) {
-            mismatch = Math.abs(da.tProp() - db.tProp()) + (Double.isNaN(da.tMatch()) ? 0 : da.tMatch());
-            mm = "propagation-delay difference " + Eng.of(mismatch, "s");
-        } else {
-            mismatch = 0;
-            mm = "driver delay mismatch unknown, taken as 0";
-        }
-        double needAB = DeadTime.minimum(offA, 0, onB, mismatch);
-        double needBA = DeadTime.minimum(offB, 0, onA, mismatch);
-        double need = Math.max(needAB, needBA);
-        StageResult slow = needAB >= needBA ? a : b;
-        return "dead time ≥ " + Eng.of(need, "s")
-                + " (turn-off of " + slow.stage() + " ≈ " + Eng.of(slow == a ? offA : offB, "s")
-                + " less the other's turn-on delay, plus " + mm + "; add margin for temperature and spread)";
-    }
-
-    private static double sum(StageResult r, String x, String y) {
-        return r.figure(x).map(Figure::value).orElse(Double.NaN) + r.figure(y).map(Figure::value).orElse(Double.NaN);
     }
 
     private static StageResult withNote(StageResult r, String note) {

@@ -46,7 +46,8 @@ public record SwitchPart(String partNumber, String maker, String pinout, String 
                 r.si("v_plateau_v"), r.si("c_iss_pf"), r.si("c_rss_pf"), r.si("r_g_int_ohm"),
                 Lifecycle.of(r.text("lifecycle")),
                 Double.isNaN(r.number("stock")) ? -1 : (long) r.number("stock"), r.si("unit_price"),
-                new SwitchRatings(r.si("v_gate_on_max_v"), r.si("v_gate_off_min_v"), r.si("t_sc_us")));
+                new SwitchRatings(r.si("v_gate_on_max_v"), r.si("v_gate_off_min_v"), r.si("t_sc_us"),
+                        r.si("t_d_off_ns"), r.si("t_f_ns")));
     }
 
     /** Internal gate resistance, 0 when unknown (the message of a check says when it was assumed). */

@@ -1,5 +1,7 @@
 package org.gatefit.match;
 
+import org.gatefit.physics.JunctionTemperature;
+
 /** Switch technologies of the catalog, with the assumptions gatefit makes per technology. */
 public enum Technology {
     SI_MOSFET("si-mosfet", 50e-9, 12),
@@ -32,6 +34,19 @@ public enum Technology {
     /** Typical on level when the switch gives none (REFERENCES.md §5, from memory). */
     public double typicalOn() {
         return typicalOn;
+    }
+
+    /**
+     * Temperature coefficient of the gate threshold, V/K, for judging at the hot corner
+     * ({@link JunctionTemperature}; from memory).
+     */
+    public double thresholdTc() {
+        return switch (this) {
+            case SI_MOSFET -> JunctionTemperature.THRESHOLD_TC_SI;
+            case SIC_MOSFET -> JunctionTemperature.THRESHOLD_TC_SIC;
+            case GAN_HEMT -> JunctionTemperature.THRESHOLD_TC_GAN;
+            case IGBT -> JunctionTemperature.THRESHOLD_TC_IGBT;
+        };
     }
 
     /** The constants, copied once ({@code values()} copies on every call; this is read per catalog row). */

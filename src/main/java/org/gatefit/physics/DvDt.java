@@ -80,6 +80,32 @@ public final class DvDt {
     }
 
     /**
+     * The gate voltage induced in the switch that stays off while its twin turns on, charge-consistent
+     * (REFERENCES.md §8): the switch node moves ΔV at {@code slew}, the off switch's C_gd averaged
+     * over the swing is Q_gd / ΔV, so the Miller current is (Q_gd / ΔV)·slew over t = ΔV / slew; the
+     * gate node, held through {@code rHold} and loaded by C_iss, reaches the RC-limited
+     * {@link #induced} peak, never more than the capacitive divider {@link #divider} with
+     * C_gs = C_iss − C_rss (C_iss alone when C_rss is unknown). Without C_iss the RC filtering is
+     * left out (I_M·R, an upper bound).
+     *
+     * @param qgd   the off switch's gate-drain charge Q_gd, C (≥ 0)
+     * @param swing the switch-node step ΔV (the bus), V (&gt; 0)
+     * @param slew  the switch-node dv/dt, V/s (&gt; 0)
+     * @param rHold resistance holding the off gate (sink + R_g,off + R_g,int, or the clamp path), Ω (≥ 0)
+     * @param ciss  input capacitance, F (&gt; 0), or NaN when unknown
+     * @param crss  reverse transfer capacitance, F (≥ 0), or NaN when unknown
+     * @return the peak induced gate voltage above the off level, V
+     */
+    public static double millerInjected(double qgd, double swing, double slew, double rHold, double ciss, double crss) {
+        double cgd = averageCgd(qgd, swing);
+        if (Double.isNaN(ciss)) {
+            return inducedBound(cgd, slew, rHold);
+        }
+        double cgs = Math.max(0, Double.isNaN(crss) ? ciss : ciss - crss);
+        return Math.min(induced(cgd, slew, rHold, ciss, swing), divider(cgd, cgs, swing));
+    }
+
+    /**
      * The capacitive divider that bounds any induced gate voltage, whatever the resistance:
      * {@code ΔV·C_gd / (C_gd + C_gs)} (plain circuit theory: an open gate takes this share of the
      * drain step).

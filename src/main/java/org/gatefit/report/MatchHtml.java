@@ -62,7 +62,7 @@ final class MatchHtml {
             return;
         }
         out.write("<table class=\"ranking\">\n<thead><tr><th>#</th><th>driver</th><th>verdict</th><th>score</th>"
-                + "<th>I_pk/I_req</th><th>NM min</th><th>P_driver</th><th>price</th><th>deciding</th></tr></thead>\n<tbody>\n");
+                + "<th>I_pl/I_req</th><th>NM min</th><th>P_driver</th><th>price</th><th>deciding</th></tr></thead>\n<tbody>\n");
         int i = 1;
         for (PairResult p : r.candidates()) {
             out.write("<tr><td class=\"num\">" + i++ + "</td><td>" + Html.esc(p.driver()) + "</td><td>"

@@ -56,7 +56,7 @@ public final class MatchReports {
             out.write((md ? "_" : "") + "No driver in the catalog works with this switch at this operating point"
                     + (r.failing() > 0 ? "; run with --all to see why each fails" : "") + (md ? "._\n" : ".\n"));
         } else {
-            TextTable t = new TextTable(List.of("#", "driver", "verdict", "score", "I_pk/I_req", "NM min", "P_driver", "price",
+            TextTable t = new TextTable(List.of("#", "driver", "verdict", "score", "I_pl/I_req", "NM min", "P_driver", "price",
                     "deciding"), true, false, false, true, true, true, true, true, false);
             if (colour) {
                 t.paint(2, Ansi::paintByWord);
@@ -136,11 +136,19 @@ public final class MatchReports {
     }
 
     static String driveRatio(PairResult p) {
-        double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
-        double src = p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN);
-        double snk = p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN);
-        double ratio = Math.min(src, snk) / req;
+        double ratio = driveRatioValue(p);
         return Double.isNaN(ratio) ? "" : Eng.num(ratio) + "×";
+    }
+
+    /**
+     * The drive-current rule's ratio, I_pl/I_req: the weaker plateau current over the current the
+     * drain edge needs (NaN when unknown).
+     */
+    static double driveRatioValue(PairResult p) {
+        double req = p.figure("gate-current-plateau-required").map(Figure::value).orElse(Double.NaN);
+        double on = p.figure("gate-current-plateau-on").map(Figure::value).orElse(Double.NaN);
+        double off = p.figure("gate-current-plateau-off").map(Figure::value).orElse(Double.NaN);
+        return Math.min(on, off) / req;
     }
 
     static String noiseMin(PairResult p) {
@@ -229,14 +237,12 @@ public final class MatchReports {
         int rank = 1;
         for (PairResult p : r.candidates()) {
             Check c = decidingCheck(p);
-            double req = p.figure("gate-current-required").map(Figure::value).orElse(Double.NaN);
-            double pk = Math.min(p.figure("gate-current-peak-source").map(Figure::value).orElse(Double.NaN),
-                    p.figure("gate-current-peak-sink").map(Figure::value).orElse(Double.NaN));
             double nm = Math.min(p.figure("noise-margin-high").map(Figure::value).orElse(Double.NaN),
                     p.figure("noise-margin-low").map(Figure::value).orElse(Double.NaN));
-            out.row(rank++, p.driver(), p.switchPart(), p.verdict().id(), MatchJson.round(p.score()), pk / req, nm,
-                    p.figure("driver-power").map(Figure::value).orElse(Double.NaN), p.priceTieBreak(),
-                    c == null ? "" : c.rule().id(), c == null ? "" : c.verdict().id(), c == null ? "" : c.message());
+            out.row(rank++, p.driver(), p.switchPart(), p.verdict().id(), MatchJson.round(p.score()),
+                    driveRatioValue(p), nm, p.figure("driver-power").map(Figure::value).orElse(Double.NaN),
+                    p.priceTieBreak(), c == null ? "" : c.rule().id(), c == null ? "" : c.verdict().id(),
+                    c == null ? "" : c.message());
         }
         out.flush();
     }
@@ -343,19 +349,27 @@ public final class MatchReports {
         double min = p.figure("gate-resistor-min").map(Figure::value).orElse(Double.NaN);
         double max = p.figure("gate-resistor-max").map(Figure::value).orElse(Double.NaN);
         double rec = p.figure("gate-resistor-recommended").map(Figure::value).orElse(Double.NaN);
+        String floor = p.figure("gate-resistor-min").map(f -> f.label().replaceFirst("^per switch, set by ", ""))
+                .orElse("");
         if (!Double.isNaN(min) && !Double.isNaN(max)) {
             if (max < min || max <= 0) {
-                sb.append("  Gate resistor: no external value meets both the damping target (≥ ").append(Eng.of(min, "Ω"))
-                        .append(") and the edge (≤ ").append(Eng.of(Math.max(max, 0), "Ω"))
-                        .append("); shorten the gate loop or pick a stronger driver.\n");
+                sb.append("  Gate resistor: no external value meets both the floor (≥ ").append(Eng.of(min, "Ω"))
+                        .append(", set by ").append(floor).append(") and the edge (≤ ").append(Eng.of(max, "Ω"))
+                        .append(max <= 0 ? ": the driver is short of the plateau current even with 0 Ω" : "")
+                        .append("); relax the edge, shorten the gate loop, or pick a stronger driver or one with a"
+                                + " Miller clamp.\n");
             } else {
                 sb.append("  Gate resistor: ").append(Eng.of(min, "Ω")).append(" to ").append(Eng.of(max, "Ω"))
                         .append(" per switch");
                 if (!Double.isNaN(rec)) {
                     sb.append("; ").append(Eng.of(rec, "Ω")).append(" (IEC 60063 E24)");
                 }
-                sb.append(" damps the gate loop and still meets the edge.\n");
+                sb.append(" — the floor set by ").append(floor).append(", the top by the drive-current margin on the"
+                        + " turn-on plateau.\n");
             }
+        } else if (!Double.isNaN(min)) {
+            sb.append("  Gate resistor: ≥ ").append(Eng.of(min, "Ω")).append(" per switch (set by ").append(floor)
+                    .append("); the top needs the switch's Q_gd and plateau voltage.\n");
         } else {
             sb.append("  Gate resistor: give the switch's C_iss to size it against ringing.\n");
         }

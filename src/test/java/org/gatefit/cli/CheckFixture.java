@@ -58,14 +58,17 @@ final class CheckFixture {
             """;
 
     static final String STAGE_HEADER = "stage,driver,switch,side,bus_v,f_sw_khz,edge_ns,v_drive_v,v_drive_neg_v,logic,"
-            + "v_oh_v,v_ol_v,pwm_sense,r_g_ohm,r_g_off_ohm,duty_max,parallel,loop_nh\n";
+            + "v_oh_v,v_ol_v,pwm_sense,r_g_ohm,r_g_off_ohm,duty_max,parallel,loop_nh,bridge\n";
 
     private CheckFixture() {
     }
 
-    /** A baseline stage row with the given stage id, driver and switch cells. */
+    /**
+     * A baseline stage row with the given stage id, driver and switch cells: a single-switch stage
+     * (bridge = no), so no twin turns on against it (the dv-dt rule's bridge rows are in RulesTest).
+     */
     static String baseline(String stage, String driver, String sw) {
-        return stage + "," + driver + "," + sw + ",low,48,20,100,12,0,,3.1,0.2,active-high,2.2,1.0,0.9,1,5\n";
+        return stage + "," + driver + "," + sw + ",low,48,20,100,12,0,,3.1,0.2,active-high,2.2,1.0,0.9,1,5,no\n";
     }
 
     /** Imports the test catalog into {@code tmp/catalog} and returns the catalog directory. */

@@ -23,7 +23,7 @@ class CompareCliTest {
     private static final ObjectMapper JSON = new ObjectMapper();
     /** GC-MAIN of examples/stages.csv as options: QND-65G150D at 375 V, 200 kHz, 6 V drive. */
     private static final List<String> POINT = List.of("--switch", "QND-65G150D", "--freq", "200", "--bus", "375",
-            "--edge", "10", "--drive", "6", "--rg", "4.7", "--rg-off", "1", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
+            "--edge", "10", "--drive", "6", "--rg", "10", "--rg-off", "0.5", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
     private static final List<String> DRIVERS = List.of("QND-D06L", "VHM-4410N", "ISY-5710S");
 
     @TempDir

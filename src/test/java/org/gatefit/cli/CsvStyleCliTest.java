@@ -30,7 +30,7 @@ class CsvStyleCliTest {
     /** The UTF-8 encoding of U+FEFF (RFC 3629 section 6; the Unicode Standard, "byte order mark"). */
     private static final byte[] UTF8_BOM = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF};
     private static final List<String> POINT = List.of("--freq", "200", "--bus", "375", "--edge", "10", "--drive", "6",
-            "--rg", "4.7", "--rg-off", "1", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
+            "--rg", "10", "--rg-off", "0.5", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
 
     @TempDir
     Path tmp;

@@ -33,9 +33,12 @@ final class HtmlFixture {
         return "\"" + s.replace("\"", "\"\"") + "\"";
     }
 
-    /** The operating point of the explain and shortlist reports. */
-    static final String[] POINT = {"--freq", "200", "--bus", "375", "--edge", "10", "--drive", "6", "--rg", "4.7",
-        "--rg-off", "1", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2"};
+    /**
+     * The operating point of the explain and shortlist reports: a GaN low side in a bridge, 10 Ω on and
+     * 0.5 Ω off so the twin's edge cannot lift the off gate (dv-dt).
+     */
+    static final String[] POINT = {"--freq", "200", "--bus", "375", "--edge", "10", "--drive", "6", "--rg", "10",
+        "--rg-off", "0.5", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2"};
 
     final Path dir;
     final Path catalog;
@@ -66,8 +69,8 @@ final class HtmlFixture {
                 StandardCharsets.UTF_8);
         stages = dir.resolve("stages.csv");
         Files.writeString(stages, String.join("\n", STAGE_HEAD,
-                q(SCRIPT) + ",TST-D06A,TST-G650A,low,375,200,10,6,0,,4.6,0.2,active-high,4.7,1.0,0.6,1,3",
-                q("S2 " + QUOTES) + ",TST-D06B,TST-G650A,low,375,200,10,6,0,,4.6,0.2,active-high,4.7,1.0,0.6,1,3",
+                q(SCRIPT) + ",TST-D06A,TST-G650A,low,375,200,10,6,0,,4.6,0.2,active-high,10,0.5,0.6,1,3",
+                q("S2 " + QUOTES) + ",TST-D06B,TST-G650A,low,375,200,10,6,0,,4.6,0.2,active-high,10,0.5,0.6,1,3",
                 "S3,TST-D06C,TST-G650B,low,375,100,20,6,0,lvcmos-3v3,,,active-high,2.2,1.0,0.6,1,5") + "\n",
                 StandardCharsets.UTF_8);
         CliRun imp = CliRun.on(catalog, "import", switches.toString(), drivers.toString());

@@ -87,14 +87,16 @@ class ReplaceCliTest {
      *   TST-S100B: 76.8 nF → 470 nF → 0.9627 pass (stays drop-in)
      *   TST-S100H: 94.5 nF → 680 nF → 0.9557 < 0.96 FAIL
      *   TST-S100Q: 119 nF → 820 nF → 0.9437 FAIL
-     * The other rules keep their verdicts, e.g. drive current: peak source min(4 A, 12 V / (1.5 + 2.2 + 1.0) Ω)
-     * = 2.55 A against 1.5 × Q/edge = 1.5 × 118 nC / 100 ns = 1.77 A for S100H (REFERENCES.md §1) → pass.
+     * The other rules keep their verdicts, e.g. drive current on the Miller plateau at 125 °C (REFERENCES.md
+     * §8; driver ×1.4, from memory): (12 − 4.5) V / (1.4·1.5 + 15 + 1.0) Ω = 414 mA against 1.5 × Q_gd/edge =
+     * 1.5 × 20 nC / 100 ns = 300 mA for S100 → pass. The stages turn on through 15 Ω and off through 0 Ω, so
+     * the twin's edge cannot lift the off gate to V_th,min (dv-dt), and the bridge inserts 400 ns dead time.
      */
     static final String STAGES = """
-            stage,driver,switch,side,bus_v,f_sw_khz,edge_ns,v_drive_v,v_drive_neg_v,logic,pwm_sense,r_g_ohm,r_g_off_ohm,duty_max,parallel,loop_nh,v_f_boot_v,r_boot_ohm
-            HS,U1,Q1,high,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
-            LS,U1,Q2,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
-            OTHER,U2,Q3,low,48,20,100,12,0,lvcmos-3v3,active-high,2.2,1.0,0.96,1,5,0.7,20
+            stage,driver,switch,side,bus_v,f_sw_khz,edge_ns,v_drive_v,v_drive_neg_v,logic,pwm_sense,r_g_ohm,r_g_off_ohm,duty_max,parallel,loop_nh,v_f_boot_v,r_boot_ohm,dead_time_ns
+            HS,U1,Q1,high,48,20,100,12,0,lvcmos-3v3,active-high,15,0,0.96,1,5,0.7,20,400
+            LS,U1,Q2,low,48,20,100,12,0,lvcmos-3v3,active-high,15,0,0.96,1,5,0.7,20,400
+            OTHER,U2,Q3,low,48,20,100,12,0,lvcmos-3v3,active-high,15,0,0.96,1,5,0.7,20,
             """;
 
     static final String BOM = """

@@ -35,7 +35,7 @@ class ReportHeaderCliTest {
     /** ISO 8601 extended date and time to the second with a numeric offset (ISO 8601-1:2019, 5.4.2 and 4.3.13). */
     static final Pattern ISO_OFFSET = Pattern.compile("\\d{4}-\\d{2}-\\d{2}T\\d{2}:\\d{2}:\\d{2}[+-]\\d{2}:\\d{2}");
     private static final List<String> POINT = List.of("--freq", "200", "--bus", "375", "--edge", "10", "--drive", "6",
-            "--rg", "4.7", "--rg-off", "1", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
+            "--rg", "10", "--rg-off", "0.5", "--loop", "3", "--v-oh", "4.6", "--v-ol", "0.2");
 
     @TempDir
     Path tmp;

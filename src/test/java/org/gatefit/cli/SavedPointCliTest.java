@@ -32,7 +32,8 @@ class SavedPointCliTest {
     private static final String[][] COLUMNS = {{"side", "--side"}, {"bus_v", "--bus"}, {"f_sw_khz", "--freq"},
         {"edge_ns", "--edge"}, {"v_drive_v", "--drive"}, {"v_drive_neg_v", "--drive-neg"}, {"logic", "--logic"},
         {"v_oh_v", "--v-oh"}, {"v_ol_v", "--v-ol"}, {"pwm_sense", "--pwm"}, {"r_g_ohm", "--rg"},
-        {"r_g_off_ohm", "--rg-off"}, {"duty_max", "--duty-max"}, {"parallel", "--parallel"}, {"loop_nh", "--loop"}};
+        {"r_g_off_ohm", "--rg-off"}, {"duty_max", "--duty-max"}, {"parallel", "--parallel"}, {"loop_nh", "--loop"},
+        {"bridge", "--bridge"}, {"t_j_c", "--tj"}};
 
     @TempDir
     Path tmp;

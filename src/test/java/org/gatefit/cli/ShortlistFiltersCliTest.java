@@ -33,7 +33,8 @@ class ShortlistFiltersCliTest {
     private static final Path DRIVERS = Project.file("examples/drivers.csv");
     /** A SiC switch of the example catalog whose lifecycle is nrnd (input only). */
     private static final String NRND_SIC = "OBP-12M020K4";
-    private static final String[] POINT = {"--freq", "10", "--bus", "800", "--drive", "18", "--drive-neg", "-4", "--edge", "200"};
+    private static final String[] POINT = {"--freq", "10", "--bus", "800", "--drive", "18", "--drive-neg", "-4", "--edge", "200",
+        "--rg", "2", "--rg-off", "1"};
 
     @TempDir
     Path tmp;

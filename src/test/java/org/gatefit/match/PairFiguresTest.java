@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
  */
 class PairFiguresTest {
 
-    private static Question question(double bus, double rG, double vDrive) {
+    private static Question question(double bus, double rG, double vDrive, double tj, boolean bridge, double loop) {
         Parts.Sw sw = Parts.sw();
         SwitchPart sp = sw.build();
         OperatingPoint.Spec o = Parts.op();
@@ -29,11 +29,14 @@ class PairFiguresTest {
         o.rG = rG;
         o.vDrive = vDrive;
         o.dutyMax = 0.6;
+        o.tj = tj;
+        o.bridge = bridge;
+        o.loop = loop;
         return Question.of(sp, o.resolve(sp), Margins.DEFAULT);
     }
 
-    private static final Question QA = question(48, 2, 10);
-    private static final Question QB = question(80, 3.3, 12);
+    private static final Question QA = question(48, 2, 10, 125, true, 10e-9);
+    private static final Question QB = question(80, 3.3, 12, 10, true, 300e-9); // a cold corner below 25 °C: every corner differs
     private static final DriverPart A = Parts.dr().build();
     private static final DriverPart B = other();
 

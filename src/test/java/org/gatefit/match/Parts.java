@@ -15,7 +15,7 @@ import org.gatefit.physics.LogicFamily;
  *       7 V rising / 6.5 V falling, V_IH 2.0 V, V_IL 0.8 V, 200 V offset, built-in bootstrap
  *       diode, I_qbs 50 µA, no negative rail, P_max 1 W;</li>
  *   <li>operating point: low side, 48 V bus, 100 kHz, 50 ns edge, +10 / 0 V, LVCMOS 3.3 V,
- *       R_g 2 Ω.</li>
+ *       R_g 2 Ω, a single-switch stage (no twin turns on against it), hot corner 125 °C.</li>
  * </ul>
  */
 final class Parts {
@@ -30,7 +30,7 @@ final class Parts {
         double vThMin = 2, vThMax = 4, vGsMax = 20, vGsMin = -20, vGateOn = 10, vGateOff = 0;
         double qG = 50e-9, qGVgs = 10, qGs = 15e-9, qGd = 15e-9, vPlateau = 5;
         double cIss = 3e-9, cRss = 50e-12, rGInt = 1;
-        double vGateOnMax = Double.NaN, vGateOffMin = Double.NaN, tSc = Double.NaN;
+        double vGateOnMax = Double.NaN, vGateOffMin = Double.NaN, tSc = Double.NaN, tDOff = Double.NaN, tF = Double.NaN;
         String lifecycle = "active";
         long stock = 1000;
         double price = 1;
@@ -38,7 +38,7 @@ final class Parts {
         SwitchPart build() {
             return new SwitchPart(pn, "Testmaker", "PKG", "PKG", tech, nChannel, vBlock, iCont, rOn, rOnVgs, vCeSat, vThMin,
                     vThMax, vGsMax, vGsMin, vGateOn, vGateOff, qG, qGVgs, qGs, qGd, vPlateau, cIss, cRss, rGInt,
-                    Lifecycle.of(lifecycle), stock, price, new SwitchRatings(vGateOnMax, vGateOffMin, tSc));
+                    Lifecycle.of(lifecycle), stock, price, new SwitchRatings(vGateOnMax, vGateOffMin, tSc, tDOff, tF));
         }
     }
 
@@ -55,7 +55,7 @@ final class Parts {
         int channels = 2;
         /** Optional ratings: V_IORM (V), CMTI (V/s), UVLO reference (null unknown, true total supply), I_q,out (A), Q_ls (C), fault protection. */
         double vIorm = Double.NaN, cmti = Double.NaN, iQOut = Double.NaN, qLs = Double.NaN, tDesat = Double.NaN;
-        double bootClamp = Double.NaN;
+        double bootClamp = Double.NaN, tPropMax = Double.NaN;
         Boolean uvloTotal = null, desat = null, softOff = null;
         String lifecycle = "active";
         long stock = 1000;
@@ -65,7 +65,7 @@ final class Parts {
             return new DriverPart(pn, "Testmaker", "PKG", "PKG", topology, channels, inverting, iSource, iSink, rSource,
                     rSink, vSupplyMin, vSupplyMax, uvloOn, uvloOff, vIh, vIl, vInMax, vOffsetMax, bootstrapDiode, iQbs,
                     vNegMin, tProp, tMatch, millerClamp, isolationVrms, pMax, Lifecycle.of(lifecycle), stock, price,
-                    new DriverRatings(vIorm, cmti, uvloTotal, iQOut, qLs, desat, tDesat, softOff, bootClamp));
+                    new DriverRatings(vIorm, cmti, uvloTotal, iQOut, qLs, desat, tDesat, softOff, bootClamp, tPropMax));
         }
     }
 
@@ -89,6 +89,7 @@ final class Parts {
         s.logic = LogicFamily.LVCMOS_3V3;
         s.rG = 2.0;
         s.loop = 10e-9;
+        s.bridge = false; // a single-switch stage: the dv-dt rows put it in a bridge
         return s;
     }
 
