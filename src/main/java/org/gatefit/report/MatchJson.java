@@ -84,7 +84,9 @@ final class MatchJson {
         number(g, "loop_h", p.loop());
         number(g, "v_f_boot_v", p.diodeDrop());
         number(g, "r_boot_ohm", p.rBoot());
-        number(g, "dv_dt_v_per_s", p.dvdt());
+        number(g, "dv_dt_v_per_ns", p.dvdt() * 1e-9);
+        g.writeBooleanField("bridge", p.bridge());
+        number(g, "t_j_c", p.tj());
         g.writeEndObject();
         g.writeArrayFieldStart("assumed");
         for (String a : p.assumed()) {
@@ -174,6 +176,11 @@ final class MatchJson {
             sb.append(", ").append(p.parallel()).append(" in parallel");
         }
         sb.append(", loop ").append(Eng.of(p.loop(), "H"));
+        if (!Double.isNaN(p.dvdt())) {
+            sb.append(", dv/dt ").append(Eng.slew(p.dvdt()));
+        }
+        sb.append(p.bridge() ? ", in a bridge" : ", single switch");
+        sb.append(", hot corner ").append(Eng.num(p.tj())).append(" °C");
         return sb.toString();
     }
 
