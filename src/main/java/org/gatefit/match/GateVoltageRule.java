@@ -12,8 +12,23 @@ import org.gatefit.match.Check.Comparison;
  * specified at (full enhancement; datasheet convention).
  */
 final class GateVoltageRule implements PairRule {
-    enum Why implements Reason { NO_LIMIT, SUPPLY_HIGH, SUPPLY_LOW, OVER_LIMIT, BELOW_THRESHOLD, NEAR_LIMIT, NO_FULL_LEVEL,
-        UNDER_ENHANCED, FITS }
+    enum Why implements Reason { NO_LIMIT, SUPPLY_HIGH, SUPPLY_LOW, OVER_LIMIT, BELOW_THRESHOLD, NEAR_LIMIT, ABOVE_WINDOW,
+        NO_FULL_LEVEL, UNDER_ENHANCED, FITS }
+
+    /**
+     * Whether a higher on level costs short-circuit ruggedness: IGBTs and SiC MOSFETs are rated for a
+     * short circuit at a stated gate voltage, and more drive raises the short-circuit current and
+     * shortens the withstand time (REFERENCES.md §9; common practice, no source).
+     */
+    static boolean shortCircuitRated(SwitchPart s) {
+        return s.technology() == Technology.IGBT || s.technology() == Technology.SIC_MOSFET;
+    }
+
+    /** Whether the on level is above the top of the switch's recommended range where that matters. */
+    private static boolean aboveWindow(PairFigures f) {
+        double top = f.s().ratings().vGateOnMax();
+        return shortCircuitRated(f.s()) && !Double.isNaN(top) && f.op().vDrive() > top;
+    }
 
     private static double limit(PairFigures f) {
         return f.s().vGsMax() * (1 - f.m().gateHeadroom());
@@ -40,6 +55,8 @@ final class GateVoltageRule implements PairRule {
             out.fail(Why.BELOW_THRESHOLD);
         } else if (on > limit) {
             out.warn(Why.NEAR_LIMIT, (s.vGsMax() - on) / (s.vGsMax() - limit));
+        } else if (aboveWindow(f)) {
+            out.warn(Why.ABOVE_WINDOW, 0.5);
         } else if (Double.isNaN(full)) {
             out.unknown(Why.NO_FULL_LEVEL);
         } else if (on < full) {
@@ -73,6 +90,9 @@ final class GateVoltageRule implements PairRule {
         if (!Double.isNaN(s.vThMax())) {
             cmp.add(new Comparison("on level (above threshold)", on, "≥", s.vThMax(), "V"));
         }
+        if (shortCircuitRated(s) && !Double.isNaN(s.ratings().vGateOnMax())) {
+            cmp.add(new Comparison("on level (recommended range)", on, "≤", s.ratings().vGateOnMax(), "V"));
+        }
         String msg = switch (w) {
             case NO_LIMIT -> throw new IllegalStateException("worded above");
             case SUPPLY_HIGH -> "the " + Eng.of(swing, "V") + " supply (on " + Eng.of(on, "V") + ", off "
@@ -90,6 +110,10 @@ final class GateVoltageRule implements PairRule {
             case NEAR_LIMIT -> "on level " + Eng.of(on, "V") + " is within "
                     + Eng.pct(f.m().gateHeadroom()) + " of V_GS,max " + Eng.of(s.vGsMax(), "V")
                     + ", leaving little room for overshoot — drive at " + Eng.of(limit, "V") + " or less, or damp the gate loop";
+            case ABOVE_WINDOW -> "on level " + Eng.of(on, "V") + " is above the " + Eng.of(s.ratings().vGateOnMax(), "V")
+                    + " top of the switch's recommended range: more gate drive raises the short-circuit current and"
+                    + " shortens the withstand time it is rated for — drive at " + Eng.of(s.ratings().vGateOnMax(), "V")
+                    + " or less, or check the short-circuit rating at " + Eng.of(on, "V");
             case NO_FULL_LEVEL -> "on level " + Eng.of(on, "V") + " is within the limits,"
                     + " but the level R_on is specified at (r_on_vgs_v) is unknown — check full enhancement in the datasheet";
             case UNDER_ENHANCED -> "on level " + Eng.of(on, "V") + " is below the "

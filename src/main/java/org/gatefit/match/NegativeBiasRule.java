@@ -11,7 +11,8 @@ import org.gatefit.match.Check.Comparison;
  * for undershoot is common practice, no source).
  */
 final class NegativeBiasRule implements PairRule {
-    enum Why implements Reason { NO_LIMIT, BELOW_LIMIT, NO_RAIL, BEYOND_RAIL, NEAR_LIMIT, CLAMP_HOLDS, LESS_NEGATIVE, FITS }
+    enum Why implements Reason { NO_LIMIT, BELOW_LIMIT, NO_RAIL, BEYOND_RAIL, NEAR_LIMIT, BELOW_WINDOW, CLAMP_HOLDS,
+        LESS_NEGATIVE, FITS }
 
     private static double limit(PairFigures f) {
         return f.s().vGsMin() * (1 - f.m().gateHeadroom());
@@ -32,6 +33,8 @@ final class NegativeBiasRule implements PairRule {
             out.fail(Why.BEYOND_RAIL);
         } else if (off < limit(f)) {
             out.warn(Why.NEAR_LIMIT, 0.5);
+        } else if (!Double.isNaN(s.ratings().vGateOffMin()) && off < s.ratings().vGateOffMin()) {
+            out.warn(Why.BELOW_WINDOW, 0.5);
         } else if (!Double.isNaN(s.vGateOff()) && s.vGateOff() < 0 && off > s.vGateOff()) {
             if (Boolean.TRUE.equals(d.millerClamp())) {
                 out.pass(Why.CLAMP_HOLDS, 0);
@@ -64,6 +67,9 @@ final class NegativeBiasRule implements PairRule {
         if (!Double.isNaN(s.vGateOff())) {
             cmp.add(new Comparison("off level (switch's recommendation)", off, "≤", s.vGateOff(), "V"));
         }
+        if (!Double.isNaN(s.ratings().vGateOffMin())) {
+            cmp.add(new Comparison("off level (recommended range)", off, "≥", s.ratings().vGateOffMin(), "V"));
+        }
         String msg = switch (w) {
             case NO_LIMIT -> throw new IllegalStateException("worded above");
             case BELOW_LIMIT -> "off level " + Eng.of(off, "V") + " is below the switch's V_GS,min "
@@ -77,6 +83,11 @@ final class NegativeBiasRule implements PairRule {
             case NEAR_LIMIT -> "off level " + Eng.of(off, "V") + " is within "
                     + Eng.pct(f.m().gateHeadroom()) + " of V_GS,min " + Eng.of(s.vGsMin(), "V") + " — undershoot may exceed it;"
                     + " use " + Eng.of(limit, "V") + " or less negative";
+            case BELOW_WINDOW -> "off level " + Eng.of(off, "V") + " is more negative than the "
+                    + Eng.of(s.ratings().vGateOffMin(), "V") + " the switch recommends at most"
+                    + (s.technology() == Technology.SIC_MOSFET ? " (a SiC gate threshold drifts under deeper negative bias;"
+                    + " from memory of published reliability studies)" : "") + " — turn off at "
+                    + Eng.of(s.ratings().vGateOffMin(), "V") + " or less negative";
             case CLAMP_HOLDS -> "the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "
                     + Eng.of(off, "V") + "; this driver's Miller clamp holds the gate low, so verify turn-off on the bench";
             case LESS_NEGATIVE -> "the switch recommends " + Eng.of(s.vGateOff(), "V") + " off but the stage gives "

@@ -235,7 +235,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
                 LogicFamily.Levels base = (fam == null ? DEFAULT_LOGIC : fam).levels();
                 oh = vOh != null ? vOh : base.vOh();
                 ol = vOl != null ? vOl : base.vOl();
-                ohMax = Math.max(oh, fam == null ? oh : fam.nominalSupply());
+                ohMax = Math.max(oh, fam == null ? oh : fam.maxSupply());
                 if (vOh == null || vOl == null) {
                     a.add("controller levels: " + (vOh == null ? "V_OH " + Eng.of(oh, "V") : "V_OL " + Eng.of(ol, "V"))
                             + " taken from " + (fam == null ? DEFAULT_LOGIC.id() : fam.id()));
@@ -248,7 +248,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
                 LogicFamily.Levels l = fam.levels();
                 oh = l.vOh();
                 ol = l.vOl();
-                ohMax = fam.nominalSupply();
+                ohMax = fam.maxSupply(); // the highest the output reaches: the top of the supply range
             }
             boolean hs = highSide != null && highSide;
             double rg = rG != null ? rG : 0;

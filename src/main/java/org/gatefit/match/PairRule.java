@@ -16,7 +16,7 @@ import org.gatefit.match.Check.Comparison;
  * declarations.
  */
 sealed interface PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBiasRule, UvloRule, LogicLevelRule,
-        PolarityRule, HighSideRule, BootstrapRule, DriverPowerRule, DvDtRule, GateRingingRule, LifecycleRule {
+        PolarityRule, HighSideRule, BootstrapRule, DriverPowerRule, DvDtRule, GateRingingRule, ProtectionRule, LifecycleRule {
 
     /**
      * Judges the pair: calls one of {@code out}'s pass, warn, fail or unknown with a reason of this

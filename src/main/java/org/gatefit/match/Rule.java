@@ -13,6 +13,7 @@ public enum Rule {
     DRIVER_POWER("driver-power", 1, "driver dissipation against its package limit"),
     DV_DT("dv-dt", 1, "Miller-induced gate voltage against the threshold at both corners"),
     GATE_RINGING("gate-ringing", 1, "gate-loop overshoot and undershoot against V_GS,max and V_GS,min"),
+    PROTECTION("protection", 1, "desaturation detection of an IGBT or SiC stage and its speed against the withstand time"),
     LIFECYCLE("lifecycle", 0, "production status and stock of both parts"),
     CATALOG("catalog", 0, "both parts are in the catalog"),
     DESIGN("design", 0, "one driver package used consistently across the stages of a check"),
@@ -40,7 +41,7 @@ public enum Rule {
      */
     private static final java.util.List<Rule> FUNDAMENTAL = java.util.List.of(CATALOG, DESIGN, HIGH_SIDE, POLARITY,
             GATE_VOLTAGE, NEGATIVE_BIAS, LOGIC_LEVEL, UVLO, DRIVE_CURRENT, DEAD_TIME, DV_DT, GATE_RINGING, BOOTSTRAP,
-            DRIVER_POWER, LIFECYCLE);
+            DRIVER_POWER, PROTECTION, LIFECYCLE);
 
     static {
         if (FUNDAMENTAL.size() != values().length || !FUNDAMENTAL.containsAll(java.util.List.of(values()))) {

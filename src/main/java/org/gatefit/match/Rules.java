@@ -17,7 +17,7 @@ public final class Rules {
         new Entry(Rule.POLARITY, new PolarityRule()), new Entry(Rule.HIGH_SIDE, new HighSideRule()),
         new Entry(Rule.BOOTSTRAP, new BootstrapRule()), new Entry(Rule.DRIVER_POWER, new DriverPowerRule()),
         new Entry(Rule.DV_DT, new DvDtRule()), new Entry(Rule.GATE_RINGING, new GateRingingRule()),
-        new Entry(Rule.LIFECYCLE, new LifecycleRule())};
+        new Entry(Rule.PROTECTION, new ProtectionRule()), new Entry(Rule.LIFECYCLE, new LifecycleRule())};
 
     /** A rule's id (name, weight, description) and its implementation. */
     private record Entry(Rule id, PairRule rule) {

@@ -14,16 +14,20 @@ import java.util.stream.Collectors;
  *   <li>{@code cmos-5v}: 5 V high-speed CMOS (74HC style), V_IH = 0.7·V_CC, V_IL = 0.3·V_CC;
  *       V_OH 4.4 V and V_OL 0.1 V are the light-load (20 µA) limits at V_CC = 4.5 V, the worst
  *       case of the 4.5–5.5 V range, so they are kept fixed over it.</li>
- *   <li>{@code lvttl-3v3}: JEDEC JESD8C.01 LVTTL, 2.4 / 0.4 / 2.0 / 0.8 V, V_DD 2.7–3.6 V.</li>
+ *   <li>{@code lvttl-3v3}: JEDEC JESD8C.01 LVTTL, 2.4 / 0.4 / 2.0 / 0.8 V, V_DD 3.0–3.6 V (the
+ *       standard's normal range; its extended range reaches 2.7 V).</li>
  *   <li>{@code lvcmos-3v3}: JEDEC JESD8C.01 LVCMOS, V_OH = V_DD − 0.2 V, V_OL 0.2 V (100 µA),
- *       V_IH 2.0 V, V_IL 0.8 V, V_DD 2.7–3.6 V.</li>
+ *       V_IH 2.0 V, V_IL 0.8 V, V_DD 3.0–3.6 V (normal range; REFERENCES.md §9: 2.8 V at the minimum
+ *       supply).</li>
  *   <li>{@code lvcmos-2v5}: JEDEC JESD8-5, V_OH 2.0 V, V_OL 0.4 V (1 mA), V_IH 1.7 V,
  *       V_IL 0.7 V, V_DD 2.3–2.7 V.</li>
  *   <li>{@code lvcmos-1v8}: JEDEC JESD8-7, V_OH = V_DD − 0.45 V, V_OL 0.45 V (2 mA),
  *       V_IH = 0.65·V_DD, V_IL = 0.35·V_DD, V_DD 1.65–1.95 V.</li>
  * </ul>
  * Levels that the standard gives as fixed numbers do not change with the supply; the others
- * are computed from it. The ids are fixed by the stage-sheet format ({@code logic} column).
+ * are computed from it. A controller of a family is judged at the worst end of its supply range,
+ * the minimum (REFERENCES.md §9: "judge every family at its minimum supply"), where its output high
+ * is lowest: {@link #levels()}. The ids are fixed by the stage-sheet format ({@code logic} column).
  */
 public enum LogicFamily {
     /** 5 V TTL. */
@@ -31,9 +35,9 @@ public enum LogicFamily {
     /** 5 V CMOS. */
     CMOS_5V("cmos-5v", 5.0, 4.5, 5.5),
     /** 3.3 V LVTTL, JESD8C.01. */
-    LVTTL_3V3("lvttl-3v3", 3.3, 2.7, 3.6),
+    LVTTL_3V3("lvttl-3v3", 3.3, 3.0, 3.6),
     /** 3.3 V LVCMOS, JESD8C.01. */
-    LVCMOS_3V3("lvcmos-3v3", 3.3, 2.7, 3.6),
+    LVCMOS_3V3("lvcmos-3v3", 3.3, 3.0, 3.6),
     /** 2.5 V, JESD8-5. */
     LVCMOS_2V5("lvcmos-2v5", 2.5, 2.3, 2.7),
     /** 1.8 V, JESD8-7. */
@@ -91,9 +95,9 @@ public enum LogicFamily {
         return maxSupply;
     }
 
-    /** Levels at the nominal supply. */
+    /** Levels at the worst end of the supply range, the minimum (where V_OH is lowest). */
     public Levels levels() {
-        return levels(nominalSupply);
+        return levels(minSupply);
     }
 
     /**

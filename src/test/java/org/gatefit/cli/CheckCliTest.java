@@ -41,7 +41,7 @@ import org.w3c.dom.NodeList;
  */
 class CheckCliTest {
     private static final List<String> RULES = List.of("catalog", "drive-current", "gate-voltage", "negative-bias", "uvlo",
-            "logic-level", "polarity", "high-side", "bootstrap", "driver-power", "dv-dt", "gate-ringing", "lifecycle");
+            "logic-level", "polarity", "high-side", "bootstrap", "driver-power", "dv-dt", "gate-ringing", "protection", "lifecycle");
 
     /** Stage id → the one rule it must fail, in sheet order. */
     private static final Map<String, String> INTENDED = new LinkedHashMap<>();
@@ -286,8 +286,8 @@ class CheckCliTest {
                 }
             }
         }
-        // 12 stages with both parts × 13 checks + F-CAT's one catalog check; one failure per failing stage.
-        assertEquals(12 * 13 + 1, expectedCases.size());
+        // 12 stages with both parts × 14 checks + F-CAT's one catalog check; one failure per failing stage.
+        assertEquals(12 * 14 + 1, expectedCases.size());
         assertEquals(12, expectedFailures.size());
 
         Document doc = parseXml(xml);

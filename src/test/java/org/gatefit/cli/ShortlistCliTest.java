@@ -81,14 +81,15 @@ class ShortlistCliTest {
      *       (offset ratings 100–700 V, all below the 800 V bus) fails {@code high-side};</li>
      *   <li>ISY-5710S (isolated, 5.7 kV rms ≥ 2 × 800 V; supply 13–33 V holds 22 V; rail to −10 V;
      *       10.5 / (1.26 + 3.5) = 2.21 A into the plateau ≥ 1.55 A, 11.5 / (0.84 + 3.5) = 2.65 A out; UVLO 12.4 V rising ≤ 22 − 1 V; falling 11.6 V − 4 V = 7.6 V on the gate ≥ 7.5 V
-     *       plateau; V_IH 2.0 / V_IL 0.8 against V_OH 3.1 / V_OL 0.2 (JEDEC, from memory);
+     *       plateau; V_IH 2.0 / V_IL 0.8 against V_OH 2.8 / V_OL 0.2 (JEDEC, from memory; at the 3.0 V minimum supply);
      *       non-inverting; active; Miller clamp and −4 V hold the off gate) passes every rule: it must be
      *       first and the only passing driver;</li>
      *   <li>ISY-5702S: 10.5 / (5.04 + 3.5) = 1.23 A, 1.19× the plateau need: above 1× but under the
      *       margin → {@code drive-current} warns, nothing fails: second, the only warning driver;</li>
      *   <li>ISY-5710U: the same but {@code v_neg_min_v} 0 — no negative rail for −4 V: fails
      *       {@code negative-bias} only;</li>
-     *   <li>CRW-GI5712: V_IH 3.5 V (5 V CMOS thresholds) against V_OH 3.1 V: NM_H −0.4 V
+     *   <li>CRW-GI5712: V_IH 3.5 V (5 V CMOS thresholds) against V_OH 2.8 V (LVCMOS at its 3.0 V minimum
+     *       supply, REFERENCES §9): NM_H −0.7 V
      *       (REFERENCES §6): fails {@code logic-level}; its other figures pass (min(8 A, 22/(1.1+1+1.5)) =
      *       6.1 A; UVLO falling 11.8 − 4 = 7.8 V ≥ 7.5 V);</li>
      *   <li>ISY-3020D: rail 0 V → {@code negative-bias}; V_IORM 630 V peak below the 800 V bus →
@@ -142,7 +143,7 @@ class ShortlistCliTest {
         String dc = message(by.get("ISY-5702S"), "drive-current");
         assertTrue(dc.contains("1.55 A") && dc.contains("1.23 A") && dc.contains("125 °C"), dc);
         String ll = message(by.get("CRW-GI5712"), "logic-level");
-        assertTrue(ll.contains("3.5 V") && ll.contains("3.1 V"), ll);
+        assertTrue(ll.contains("3.5 V") && ll.contains("2.8 V"), ll);
     }
 
     @Test
@@ -213,7 +214,7 @@ class ShortlistCliTest {
             rules.add(c.get("rule").asText());
         }
         assertEquals(Set.of("drive-current", "gate-voltage", "negative-bias", "uvlo", "logic-level", "polarity",
-                "high-side", "bootstrap", "driver-power", "dv-dt", "gate-ringing", "lifecycle"), rules);
+                "high-side", "bootstrap", "driver-power", "dv-dt", "gate-ringing", "protection", "lifecycle"), rules);
         Map<String, JsonNode> figs = new HashMap<>();
         for (JsonNode f : root.get("figures")) {
             assertTrue(f.has("name") && f.has("value") && f.has("unit"), f.toString());
@@ -237,8 +238,9 @@ class ShortlistCliTest {
         assertEquals(q / 150e-9, figs.get("gate-current-required").get("value").asDouble(), 1e-9 * q / 150e-9);
         // P_G = Q_g·ΔV·f (REFERENCES §2) with ΔV 12 V, f 20 kHz.
         assertEquals(q * 12 * 20e3, figs.get("gate-drive-power").get("value").asDouble(), 1e-9);
-        // NM = V_OH − V_IH = 3.1 − 2.0; V_IL − V_OL = 0.8 − 0.2 (REFERENCES §6, JEDEC from memory; driver row).
-        assertEquals(1.1, figs.get("noise-margin-high").get("value").asDouble(), 1e-9);
+        // NM = V_OH − V_IH = 2.8 − 2.0 (LVCMOS at its 3.0 V minimum supply, REFERENCES §9); V_IL − V_OL =
+        // 0.8 − 0.2 (REFERENCES §6, JEDEC from memory; driver row).
+        assertEquals(0.8, figs.get("noise-margin-high").get("value").asDouble(), 1e-9);
         assertEquals(0.6, figs.get("noise-margin-low").get("value").asDouble(), 1e-9);
     }
 

@@ -103,7 +103,7 @@ class RulesProperties {
                                                        @ForAll("points") OperatingPoint.Spec spec) {
         PairResult r = Rules.evaluate(d, s, spec.resolve(s), Margins.DEFAULT);
         assertTrue(r.score() >= 0 && r.score() <= 1, "score " + r.score());
-        assertEquals(12, r.checks().size());
+        assertEquals(13, r.checks().size());
         Verdict worst = Verdict.PASS;
         for (Check c : r.checks()) {
             worst = worst.and(c.verdict());

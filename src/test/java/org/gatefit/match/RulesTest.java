@@ -115,6 +115,17 @@ class RulesTest {
 
     static Stream<Row> gateVoltage() {
         return Stream.of(
+                row(Verdict.WARN, "SiC on 20 V above the 18 V top of its recommended range (v_gate_on_max_v): more drive,"
+                        + " more short-circuit current, a shorter withstand time (REFERENCES §9, common practice)",
+                        s -> {
+                            s.tech = Technology.SIC_MOSFET;
+                            s.vGsMax = 25;
+                            s.vGateOnMax = 18;
+                        }, D0, o -> o.vDrive = 20.0, "18 V", "short-circuit"),
+                row(Verdict.PASS, "the same range on a Si MOSFET: no short-circuit rating to lose", s -> {
+                    s.vGsMax = 25;
+                    s.vGateOnMax = 18;
+                }, D0, o -> o.vDrive = 20.0, "20 V"),
                 row(Verdict.PASS, "10 V on = the 10 V R_DS(on) is specified at (full enhancement, REFERENCES §5) and"
                         + " ≤ 20 V − 10 % = 18 V; 10 V swing within the 8–20 V supply", S0, D0, O0, "10 V", "18 V"),
                 row(Verdict.WARN, "19 V on: above 18 V (20 V less 10 % headroom) but not above V_GS,max 20 V", S0, D0,
@@ -147,6 +158,14 @@ class RulesTest {
 
     static Stream<Row> negativeBias() {
         return Stream.of(
+                row(Verdict.WARN, "SiC off at −8 V, deeper than the −5 V it recommends at most (v_gate_off_min_v): its"
+                        + " threshold drifts (REFERENCES §9, from memory)", s -> {
+                            s.tech = Technology.SIC_MOSFET;
+                            s.vGateOffMin = -5;
+                        }, d -> {
+                            d.vNegMin = -10;
+                            d.vSupplyMax = 25;
+                        }, o -> o.vDriveNeg = -8.0, "-5 V", "drifts"),
                 row(Verdict.PASS, "0 V off ≥ V_GS,min −20 V, and the switch recommends 0 V", S0, D0, O0, "0 V", "-20 V"),
                 row(Verdict.PASS, "−5 V off: within −20 V (less 10 %: −18 V) and the driver's −10 V rail", S0,
                         d -> d.vNegMin = -10, o -> o.vDriveNeg = -5.0, "-5 V", "-10 V"),
@@ -259,19 +278,20 @@ class RulesTest {
 
     static Stream<Row> logicLevel() {
         return Stream.of(
-                row(Verdict.PASS, "LVCMOS 3.3 V: V_OH 3.1, V_OL 0.2 (JESD8C.01, from memory) into V_IH 2.0 / V_IL 0.8:"
-                        + " NM_H 1.1 V, NM_L 0.6 V (REFERENCES §6)", S0, D0, O0, "1.1 V", "600 mV"),
-                row(Verdict.WARN, "V_IH 3.05 V: NM_H = 3.1 − 3.05 = 50 mV < 0.1 V", S0, d -> d.vIh = 3.05, O0, "50 mV",
-                        "3.05 V"),
-                row(Verdict.FAIL, "5 V CMOS thresholds V_IH 3.5 / V_IL 1.5 (0.7/0.3·V_CC, from memory): NM_H = 3.1 − 3.5"
-                        + " = −0.4 V (§6); needs V_IH ≤ 3.1 − 0.1 = 3 V", S0, d -> {
+                row(Verdict.PASS, "LVCMOS 3.3 V at its minimum supply 3.0 V (REFERENCES §9: judge every family there):"
+                        + " V_OH 3.0 − 0.2 = 2.8, V_OL 0.2 (JESD8C.01, from memory) into V_IH 2.0 / V_IL 0.8: NM_H 0.8 V,"
+                        + " NM_L 0.6 V (REFERENCES §6)", S0, D0, O0, "800 mV", "600 mV"),
+                row(Verdict.WARN, "V_IH 2.75 V: NM_H = 2.8 − 2.75 = 50 mV < 0.1 V", S0, d -> d.vIh = 2.75, O0, "50 mV",
+                        "2.75 V"),
+                row(Verdict.FAIL, "5 V CMOS thresholds V_IH 3.5 / V_IL 1.5 (0.7/0.3·V_CC, from memory): NM_H = 2.8 − 3.5"
+                        + " = −0.7 V (§6); needs V_IH ≤ 2.8 − 0.1 = 2.7 V", S0, d -> {
                             d.vIh = 3.5;
                             d.vIl = 1.5;
-                        }, O0, "3.5 V", "-400 mV", "pick a driver with V_IH ≤ 3 V"),
+                        }, O0, "3.5 V", "-700 mV", "pick a driver with V_IH ≤ 2.7 V"),
                 row(Verdict.FAIL, "V_IL 0.15 V < V_OL 0.2 V: NM_L −50 mV", S0, d -> d.vIl = 0.15, O0, "-50 mV",
                         "pick a driver with V_IL ≥ 300 mV"),
-                row(Verdict.FAIL, "5 V CMOS controller (up to 5 V) into a 3.6 V input maximum", S0, d -> d.vInMax = 3.6,
-                        o -> o.logic = LogicFamily.CMOS_5V, "5 V", "3.6 V", "add a level shifter"),
+                row(Verdict.FAIL, "5 V CMOS controller, up to the top of its 4.5–5.5 V supply, into a 3.6 V input maximum",
+                        S0, d -> d.vInMax = 3.6, o -> o.logic = LogicFamily.CMOS_5V, "5.5 V", "3.6 V", "add a level shifter"),
                 row(Verdict.UNKNOWN, "v_ih_v unknown", S0, d -> d.vIh = Double.NaN, O0, "v_ih_v"));
     }
 
@@ -628,6 +648,48 @@ class RulesTest {
         check(Rule.GATE_RINGING, r);
     }
 
+    // ------------------------------------------------------------------ protection
+
+    /** An IGBT on 400 V: above the 100 V protection-bus margin (common practice, no source). */
+    private static final Consumer<Parts.Sw> IGBT_SW = s -> s.tech = Technology.IGBT;
+    private static final Consumer<OperatingPoint.Spec> BUS400 = o -> o.bus = 400.0;
+
+    /*
+     * protection (REFERENCES §9: IGBT and SiC withstand times of a few µs at a stated gate voltage;
+     * desaturation detection with soft turn-off is the usual protection).
+     */
+    static Stream<Row> protection() {
+        return Stream.of(
+                row(Verdict.PASS, "a Si MOSFET: desaturation detection not expected", S0, D0, O0, "not expected"),
+                row(Verdict.PASS, "an IGBT at 48 V: at or below the 100 V protection bus", IGBT_SW, D0, O0, "100 V"),
+                row(Verdict.UNKNOWN, "an IGBT at 400 V, the driver's desat column empty", IGBT_SW, D0, BUS400, "desat"),
+                row(Verdict.WARN, "an IGBT at 400 V on a driver without detection", IGBT_SW, d -> d.desat = false, BUS400,
+                        "no desaturation"),
+                row(Verdict.PASS, "detection in 1.5 µs inside a 5 µs withstand time", IGBT_SW.andThen(s -> s.tSc = 5e-6),
+                        d -> {
+                            d.desat = true;
+                            d.tDesat = 1.5e-6;
+                            d.softOff = true;
+                        }, BUS400, "1.5 µs", "5 µs", "soft turn-off"),
+                row(Verdict.WARN, "detection in 3 µs, not before a 2 µs withstand time",
+                        IGBT_SW.andThen(s -> s.tSc = 2e-6), d -> {
+                            d.desat = true;
+                            d.tDesat = 3e-6;
+                        }, BUS400, "3 µs", "2 µs"),
+                row(Verdict.UNKNOWN, "detection but no withstand time: the timing is unknown", IGBT_SW, d -> {
+                    d.desat = true;
+                    d.tDesat = 1.5e-6;
+                }, BUS400, "t_sc_us"),
+                row(Verdict.UNKNOWN, "a SiC stage without a bus", s -> s.tech = Technology.SIC_MOSFET, D0,
+                        o -> o.bus = null, "bus voltage unknown"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource
+    void protection(Row r) {
+        check(Rule.PROTECTION, r);
+    }
+
     @ParameterizedTest(name = "{0}")
     @MethodSource
     void dvdt(Row r) {
@@ -664,7 +726,7 @@ class RulesTest {
             assertEquals(Verdict.PASS, c.verdict(), () -> c.rule() + ": " + c.message());
         }
         assertEquals(Verdict.PASS, r.verdict());
-        assertEquals(12, r.checks().size(), "one check per pair rule (catalog, design and dead-time belong to check)");
+        assertEquals(13, r.checks().size(), "one check per pair rule (catalog, design and dead-time belong to check)");
     }
 
     @Test
@@ -766,6 +828,7 @@ class RulesTest {
             case DRIVER_POWER -> driverPower().toList();
             case DV_DT -> dvdt().toList();
             case GATE_RINGING -> gateRinging().toList();
+            case PROTECTION -> protection().toList();
             case LIFECYCLE -> lifecycle().toList();
             case CATALOG, DESIGN, DEAD_TIME -> List.of(); // stage-level rules: cli/CheckCliTest, PackageCheckCliTest
         };

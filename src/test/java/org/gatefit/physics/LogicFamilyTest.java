@@ -52,7 +52,7 @@ class LogicFamilyTest {
     @Test
     void familyMarginsAtNominalSupplyMatchTheReferenceChecks() {
         // REFERENCES §6 checks, through the enum at its nominal supply
-        NoiseMargins m18 = LogicFamily.LVCMOS_1V8.levels().selfMargins();
+        NoiseMargins m18 = LogicFamily.LVCMOS_1V8.levels(1.8).selfMargins();
         assertEquals(0.18, m18.high(), TOL);
         assertEquals(0.18, m18.low(), TOL);
         NoiseMargins lvttl = LogicFamily.LVTTL_3V3.levels().selfMargins();
@@ -60,11 +60,23 @@ class LogicFamilyTest {
         assertEquals(0.4, lvttl.low(), TOL);
         // a TTL-level output into a 5 V CMOS input (V_IH 3.5 V): incompatible
         NoiseMargins ttlIntoCmos = NoiseMargins.of(LogicFamily.TTL_5V.levels(),
-                LogicFamily.CMOS_5V.levels().vIh(), LogicFamily.CMOS_5V.levels().vIl());
+                LogicFamily.CMOS_5V.levels(5.0).vIh(), LogicFamily.CMOS_5V.levels(5.0).vIl());
         assertEquals(-1.1, ttlIntoCmos.high(), TOL);
         assertFalse(ttlIntoCmos.compatible());
         for (LogicFamily f : LogicFamily.values()) {
             assertTrue(f.levels().selfMargins().compatible(), f.id());
+        }
+    }
+
+    @Test
+    void aControllerIsJudgedAtTheBottomOfItsSupplyRange() {
+        // REFERENCES §9: LVCMOS 3.3 V, V_DD 3.0–3.6 V in JESD8C.01's normal range, V_OH ≥ V_DD − 0.2 V
+        // → 2.8 V at the minimum supply; JESD8-7 (from memory): 1.65 − 0.45 = 1.2 V.
+        assertEquals(2.8, LogicFamily.LVCMOS_3V3.levels().vOh(), TOL);
+        assertEquals(3.0, LogicFamily.LVCMOS_3V3.minSupply(), TOL);
+        assertEquals(1.2, LogicFamily.LVCMOS_1V8.levels().vOh(), TOL);
+        for (LogicFamily f : LogicFamily.values()) {
+            assertEquals(f.levels(f.minSupply()), f.levels(), f.id());
         }
     }
 
@@ -88,7 +100,7 @@ class LogicFamilyTest {
         NoiseMargins m = NoiseMargins.of(2.4, 0.4, 3.5, 1.5);
         assertEquals(-1.1, m.worst(), TOL);
         // REFERENCES §6 (from memory): 1.8 V at V_DD 1.8 → both 0.18 V
-        assertEquals(0.18, LogicFamily.LVCMOS_1V8.levels().selfMargins().worst(), TOL);
+        assertEquals(0.18, LogicFamily.LVCMOS_1V8.levels(1.8).selfMargins().worst(), TOL);
         // NM_L = V_IL − V_OL, LVTTL (JESD8C.01, from memory): 0.8 − 0.4 V
         assertEquals(0.4, NoiseMargins.low(0.8, 0.4).orElseThrow(), TOL);
         assertTrue(NoiseMargins.low(0.8, Double.NaN).isEmpty());
