@@ -99,8 +99,9 @@ final class GateVoltageRule implements PairRule {
                     + Eng.of(op.vDriveNeg(), "V") + ") exceeds this driver's " + Eng.of(f.d().vSupplyMax(), "V")
                     + " maximum — lower the drive levels or pick a driver rated ≥ " + Eng.of(swing, "V");
             case SUPPLY_LOW -> "the " + Eng.of(swing, "V") + " supply is below this driver's "
-                    + Eng.of(f.d().vSupplyMin(), "V") + " minimum — raise the supply or pick a driver that runs from "
-                    + Eng.of(swing, "V");
+                    + Eng.of(f.d().vSupplyMin(), "V") + " minimum — "
+                    + (GateWindow.allows(s, f.m(), on + f.d().vSupplyMin() - swing) ? "raise the supply or " : "")
+                    + "pick a driver that runs from " + Eng.of(swing, "V");
             case OVER_LIMIT -> "on level " + Eng.of(on, "V") + " exceeds the switch's V_GS,max of "
                     + Eng.of(s.vGsMax(), "V") + " and will damage the gate — drive at " + Eng.of(limit, "V")
                     + " or less" + (Double.isNaN(s.vGateOn()) ? "" : " (recommended " + Eng.of(s.vGateOn(), "V") + ")");

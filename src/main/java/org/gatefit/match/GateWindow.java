@@ -10,9 +10,15 @@ final class GateWindow {
     private GateWindow() {
     }
 
-    /** The highest on level advice may name: V_GS,max less the gate headroom; NaN when V_GS,max is unknown. */
+    /**
+     * The highest on level advice may name: V_GS,max less the gate headroom, and for an IGBT or SiC
+     * MOSFET no more than the top of its recommended range where the catalog gives one (more drive
+     * shortens the short-circuit withstand time: {@code gate-voltage}); NaN when V_GS,max is unknown.
+     */
     static double onLimit(SwitchPart s, Margins m) {
-        return s.vGsMax() * (1 - m.gateHeadroom());
+        double limit = s.vGsMax() * (1 - m.gateHeadroom());
+        double top = s.ratings().vGateOnMax();
+        return GateVoltageRule.shortCircuitRated(s) && !Double.isNaN(top) ? Math.min(limit, top) : limit;
     }
 
     /** Whether an on level may be advised: within {@link #onLimit} (or the limit is unknown). */

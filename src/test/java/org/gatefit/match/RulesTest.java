@@ -140,6 +140,11 @@ class RulesTest {
                         o -> o.vDrive = 22.0, "22 V", "20 V", "pick a driver rated ≥ 22 V"),
                 row(Verdict.FAIL, "6 V swing below the driver's 8 V supply minimum", S0, D0, o -> o.vDrive = 6.0, "6 V",
                         "8 V", "raise the supply"),
+                row(Verdict.FAIL, "a 7 V gate (GaN-like) at 6 V on a driver that needs 8 V: raising the supply would leave"
+                        + " the window (≤ 7 V less 10 % = 6.3 V), so only another driver is advised", s -> {
+                            s.vGsMax = 7;
+                            s.rOnVgs = 6;
+                        }, D0, o -> o.vDrive = 6.0, "8 V", "— pick a driver that runs from 6 V"),
                 row(Verdict.UNKNOWN, "neither r_on_vgs_v nor v_gate_on_v: full enhancement cannot be judged", s -> {
                     s.rOnVgs = Double.NaN;
                     s.vGateOn = Double.NaN;
