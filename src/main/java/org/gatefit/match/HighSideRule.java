@@ -215,6 +215,9 @@ final class HighSideRule implements PairRule {
                     Prefilter.Condition.of("v_offset_max_v", Op.LT, bus));
             b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Op.EQ, Topology.HALF_BRIDGE.id()),
                     Prefilter.Condition.of("v_offset_max_v", Op.LT, bus));
+            // An isolated driver whose working voltage is known and below the bus fails, whatever its withstand rating.
+            b.skip(Rule.HIGH_SIDE, Prefilter.Condition.is("topology", Op.EQ, Topology.ISOLATED.id()),
+                    Prefilter.Condition.of("v_iorm_v", Op.LT, bus));
         }
     }
 }

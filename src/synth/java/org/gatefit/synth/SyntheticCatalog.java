@@ -294,7 +294,11 @@ public final class SyntheticCatalog {
             row.put("i_qbs_ua", num(40 + r.nextInt(160), 0));
         }
         if (topo.equals("isolated")) {
-            row.put("isolation_vrms", num(pick(r, 2500, 3750, 5000, 5700), 0));
+            double withstand = pick(r, 2500, 3750, 5000, 5700);
+            row.put("isolation_vrms", num(withstand, 0));
+            // The working voltage (peak) a third of the withstand rating, rounded to 10 V, derived
+            // rather than drawn so the random sequence, and every other column, stays as it was.
+            row.put("v_iorm_v", num(Math.round(withstand * 0.3 / 10) * 10.0, 0));
             row.put("v_neg_min_v", r.nextInt(3) == 0 ? "0" : num(pick(r, -5, -8, -10), 0));
             row.put("miller_clamp", r.nextBoolean() ? "yes" : "no");
         } else if (r.nextInt(3) == 0) {
