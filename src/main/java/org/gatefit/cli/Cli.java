@@ -99,6 +99,7 @@ public final class Cli {
             }
         }
         offerOnlyFormatsMade(cl);
+        completeOperatingPointChoices(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -186,6 +187,36 @@ public final class Cli {
                 last = last.subcommand();
             }
             throw new CommandLine.ExecutionException(last.commandSpec().commandLine(), e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The operating-point options with a fixed set of values ({@code --side}, {@code --logic},
+     * {@code --pwm}, {@code --bridge}) complete to their stage-sheet column's choices, in every command
+     * that has them.
+     */
+    private static void completeOperatingPointChoices(CommandLine cl) {
+        java.util.Map<String, List<String>> choices = new java.util.LinkedHashMap<>();
+        for (String[] c : OperatingPointOptions.COLUMNS) {
+            choices.put(c[0], OperatingPointOptions.completionCandidates(c[0]));
+        }
+        // Other options with a fixed set of values, each from the one place that defines them.
+        choices.put("--topology", org.gatefit.catalog.Schema.of(org.gatefit.catalog.Kind.DRIVER).column("topology")
+                .map(org.gatefit.catalog.Column::choices).orElse(List.of()));
+        choices.put("--kind", java.util.Arrays.stream(org.gatefit.catalog.Kind.values())
+                .map(org.gatefit.catalog.Kind::id).toList());
+        choices.put("--csv-style", java.util.Arrays.stream(org.gatefit.report.CsvStyle.values())
+                .map(v -> v.name().toLowerCase(java.util.Locale.ROOT)).toList());
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            CommandLine.Model.CommandSpec spec = sub.getCommandSpec();
+            for (java.util.Map.Entry<String, List<String>> e : choices.entrySet()) {
+                CommandLine.Model.OptionSpec o = spec.findOption(e.getKey());
+                if (o == null || e.getValue().isEmpty() || o.completionCandidates() != null) {
+                    continue;
+                }
+                spec.remove(o);
+                spec.addOption(CommandLine.Model.OptionSpec.builder(o).completionCandidates(e.getValue()).build());
+            }
         }
     }
 

@@ -91,6 +91,31 @@ final class OperatingPointOptions {
                     + " package (default: all of the driver's channels).")
     String channelsUsed;
 
+    /**
+     * Each operating-point option and the stage-sheet column it stands for, in the order of the fields
+     * {@link #spec(Row)} reads: one table, so parsing, errors and shell completion (the column's
+     * choices, {@link #completionCandidates}) agree.
+     */
+    static final String[][] COLUMNS = {
+        {"--side", "side"}, {"--bus", "bus_v"}, {"--freq", "f_sw_khz"}, {"--edge", "edge_ns"}, {"--drive", "v_drive_v"},
+        {"--drive-neg", "v_drive_neg_v"}, {"--logic", "logic"}, {"--v-oh", "v_oh_v"}, {"--v-ol", "v_ol_v"},
+        {"--pwm", "pwm_sense"}, {"--rg", "r_g_ohm"}, {"--rg-off", "r_g_off_ohm"}, {"--duty-max", "duty_max"},
+        {"--parallel", "parallel"}, {"--loop", "loop_nh"}, {"--v-f-boot", "v_f_boot_v"}, {"--r-boot", "r_boot_ohm"},
+        {"--tj", "t_j_c"}, {"--bridge", "bridge"}};
+
+    /**
+     * The values a shell may complete for an operating-point option: the choices of its stage-sheet
+     * column in the schema (empty for a number).
+     */
+    static java.util.List<String> completionCandidates(String option) {
+        for (String[] c : COLUMNS) {
+            if (c[0].equals(option)) {
+                return Schema.of(Kind.STAGE).column(c[1]).map(Column::choices).orElse(java.util.List.of());
+            }
+        }
+        return java.util.List.of();
+    }
+
     /** The option that sets a checked quantity, for warnings. */
     static String option(Plausibility.Quantity q) {
         return switch (q) {
@@ -114,14 +139,12 @@ final class OperatingPointOptions {
      */
     OperatingPoint.Spec spec(Row stage) throws BadValueException, UsageException {
         // Option, stage-sheet column, value as typed: one row each, so errors name the option.
-        String[][] cells = {
-            {"--side", "side", side}, {"--bus", "bus_v", bus}, {"--freq", "f_sw_khz", freq},
-            {"--edge", "edge_ns", edge}, {"--drive", "v_drive_v", drive}, {"--drive-neg", "v_drive_neg_v", driveNeg},
-            {"--logic", "logic", logic}, {"--v-oh", "v_oh_v", vOh}, {"--v-ol", "v_ol_v", vOl},
-            {"--pwm", "pwm_sense", pwm}, {"--rg", "r_g_ohm", rg}, {"--rg-off", "r_g_off_ohm", rgOff},
-            {"--duty-max", "duty_max", dutyMax}, {"--parallel", "parallel", parallel}, {"--loop", "loop_nh", loop},
-            {"--v-f-boot", "v_f_boot_v", vfBoot}, {"--r-boot", "r_boot_ohm", rBoot}, {"--tj", "t_j_c", tj},
-            {"--bridge", "bridge", bridge}};
+        String[] typed = {side, bus, freq, edge, drive, driveNeg, logic, vOh, vOl, pwm, rg, rgOff, dutyMax, parallel, loop,
+            vfBoot, rBoot, tj, bridge};
+        String[][] cells = new String[COLUMNS.length][];
+        for (int i = 0; i < COLUMNS.length; i++) {
+            cells[i] = new String[] {COLUMNS[i][0], COLUMNS[i][1], typed[i]};
+        }
         Schema sheet = Schema.of(Kind.STAGE);
         Map<String, Object> values = new LinkedHashMap<>();
         if (stage != null) {

@@ -125,6 +125,33 @@ class TerminalTest {
         assertFalse(piped.err().contains("\r") || piped.err().contains("rows imported"), piped.dump());
     }
 
+    /**
+     * Bash's own programmable completion (the reference): the generated script, sourced in bash, offers
+     * the fixed values of an option — each from the one place that defines them (the stage sheet's and
+     * the driver schema's choices, the CSV styles).
+     */
+    @Test
+    void bashCompletesTheValuesOfOptionsWithAFixedSet() throws Exception {
+        CliRun r = run(false, Map.of(), "completion");
+        assertEquals(0, r.exit(), r.dump());
+        Path script = tmp.resolve("gatefit-completion.bash");
+        Files.writeString(script, r.out(), StandardCharsets.UTF_8);
+        String[][] asks = {{"explain", "--bridge", "", "yes no"}, {"shortlist", "--logic", "lvc",
+            "lvcmos-3v3 lvcmos-2v5 lvcmos-1v8"}, {"shortlist", "--topology", "", "low-side high-side half-bridge isolated"},
+            {"check", "--csv-style", "", "comma semicolon"}, {"explain", "--side", "", "low high"},
+            {"shortlist", "--pwm", "active-", "active-high active-low"}};
+        for (String[] a : asks) {
+            String line = "gatefit " + a[0] + " " + a[1] + " " + a[2];
+            String bash = "source '" + script + "' 2>/dev/null; COMP_WORDS=(gatefit " + a[0] + " " + a[1] + " '" + a[2]
+                    + "'); COMP_CWORD=3; COMP_LINE='" + line + "'; COMP_POINT=${#COMP_LINE}; _complete_gatefit gatefit '"
+                    + a[2] + "' " + a[1] + " 2>/dev/null; echo \"${COMPREPLY[@]}\"";
+            Process p = new ProcessBuilder("bash", "-c", bash).redirectErrorStream(true).start();
+            String got = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).strip();
+            assertEquals(0, p.waitFor(), got);
+            assertEquals(a[3], got, line);
+        }
+    }
+
     @Test
     void completionPrintsABashScriptCoveringTheCommandsAndOptions() {
         CliRun r = run(false, Map.of(), "completion");
