@@ -852,10 +852,10 @@ public final class SheetReader {
         l.bareExponent = new int[l.columnAt.length];
         l.heading = new String[l.columnAt.length];
         l.quickChoices = new String[l.columnAt.length][];
-        @SuppressWarnings("unchecked")
+        @SuppressWarnings({"unchecked", "rawtypes"})
         Map<String, Object>[] memo = new Map[l.columnAt.length];
         l.memo = memo;
-        @SuppressWarnings("unchecked")
+        @SuppressWarnings({"unchecked", "rawtypes"})
         Map<String, String>[] readings = new Map[l.columnAt.length];
         l.readings = readings;
         for (int i = 0; i < l.columnAt.length; i++) {

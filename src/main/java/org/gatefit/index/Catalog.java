@@ -215,6 +215,7 @@ public final class Catalog implements AutoCloseable {
      * @throws CatalogStorageException when something is damaged: the message says what and what to do
      * @throws CatalogBusyException    when an import is running
      */
+    @SuppressWarnings("try") // the lock is held for the try's body, never referenced in it
     public static Verification verify(Path dir) throws IOException, CatalogBusyException {
         if (CatalogFolder.inspect(dir) == CatalogFolder.State.NONE) {
             throw new CatalogFormatException("there is no catalog in " + dir + " yet: nothing to verify");

@@ -356,6 +356,7 @@ final class ColumnSegment extends LeafReader {
     }
 
     @Override
+    @SuppressWarnings("deprecation") // Lucene 9 still declares it abstract; it delegates to storedFields()
     public void document(int docID, StoredFieldVisitor visitor) throws IOException {
         storedFields().document(docID, visitor);
     }
@@ -421,6 +422,7 @@ final class ColumnSegment extends LeafReader {
     }
 
     @Override
+    @SuppressWarnings("deprecation") // Lucene 9 still declares it abstract
     public org.apache.lucene.index.Fields getTermVectors(int docID) {
         return null;
     }

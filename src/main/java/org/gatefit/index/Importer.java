@@ -128,6 +128,7 @@ public final class Importer {
      *                              being skipped, and never for a file that cannot be read through)
      * @throws CatalogBusyException when another import holds the catalog's lock
      */
+    @SuppressWarnings("try") // the lock is held for the try's body; the writer is closed early to commit
     public Result run(List<Path> files, List<String> names, Options options, Listener listener)
             throws IOException, CatalogDataException, CatalogBusyException {
         if (files.size() != names.size()) {
@@ -175,6 +176,7 @@ public final class Importer {
         }
     }
 
+    @SuppressWarnings("try") // the writer is closed explicitly to commit before the rejects move
     private Result run(CatalogFolder.Own directory, List<Path> files, List<String> names, Options options,
                        Listener listener) throws IOException, CatalogDataException, CatalogBusyException {
         SegmentInfos start;

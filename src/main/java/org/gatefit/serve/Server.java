@@ -30,7 +30,7 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import org.eclipse.jetty.http.BadMessageException;
+import org.eclipse.jetty.http.HttpException;
 import org.eclipse.jetty.server.HttpConnectionFactory;
 import org.eclipse.jetty.server.ServerConnector;
 import org.gatefit.index.Catalog;
@@ -427,7 +427,8 @@ public final class Server implements AutoCloseable {
         // Jetty refuses a malformed request body (a multipart form cut short, or longer than the
         // limit while it is read, as a body sent in chunks without its length is) as a bad message.
         for (Throwable c = e; c != null; c = c.getCause()) {
-            if (c instanceof BadMessageException bad) {
+            // BadMessageException (deprecated in Jetty 12) is the HttpException with code 400.
+            if (c instanceof HttpException bad && bad.getCode() == 400) {
                 for (Throwable d = c; d != null; d = d.getCause()) {
                     if (d.getMessage() != null && d.getMessage().startsWith("max length exceeded")) {
                         tooLarge(ctx);

@@ -102,7 +102,6 @@ class BomFrontEndTest {
                 }
             }
             wb.write(out);
-            wb.dispose();
         }
         List<String> notes = new java.util.ArrayList<>();
         Bom b = Bom.read(x, "bom.xlsx", new SheetReader.Options(null, 0, null, null, notes::add));

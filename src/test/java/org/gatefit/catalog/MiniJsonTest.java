@@ -28,7 +28,7 @@ class MiniJsonTest {
     private static Object plain(JsonNode n) {
         if (n.isObject()) {
             Map<String, Object> m = new LinkedHashMap<>();
-            Iterator<Map.Entry<String, JsonNode>> it = n.fields();
+            Iterator<Map.Entry<String, JsonNode>> it = n.properties().iterator();
             while (it.hasNext()) {
                 Map.Entry<String, JsonNode> e = it.next();
                 m.put(e.getKey(), plain(e.getValue()));

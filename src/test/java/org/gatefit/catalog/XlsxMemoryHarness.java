@@ -45,7 +45,6 @@ public final class XlsxMemoryHarness {
                 row.createCell(8).setCellValue(r % 50 == 0 ? "NRND" : "Active");
             }
             wb.write(out);
-            wb.dispose();
         }
         MemoryMXBean mem = ManagementFactory.getMemoryMXBean();
         System.out.printf("workbook: %,d rows, %,d bytes; max heap %,d MB%n", rows, Files.size(file),

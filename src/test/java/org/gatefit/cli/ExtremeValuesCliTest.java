@@ -95,14 +95,14 @@ class ExtremeValuesCliTest {
             Files.copy(Path.of("examples", name), to);
             return to;
         }
-        CSVFormat in = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build();
+        CSVFormat in = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get();
         StringWriter w = new StringWriter();
         int changed = 0;
         try (Reader r = Files.newBufferedReader(Path.of("examples", name), StandardCharsets.UTF_8);
              org.apache.commons.csv.CSVParser p = in.parse(r)) {
             List<String> header = p.getHeaderNames();
             try (CSVPrinter out = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setHeader(header.toArray(String[]::new))
-                    .build())) {
+                    .get())) {
                 for (CSVRecord rec : p) {
                     List<String> cells = new ArrayList<>(rec.toList());
                     if (rec.get(0).equals(key)) {

@@ -172,7 +172,6 @@ class SpreadsheetExportCliTest {
                 }
             }
             wb.write(out);
-            wb.dispose();
         }
         Path fromCsv = tmp.resolve("from-csv");
         assertEquals(ExitCode.OK, CliRun.on(fromCsv, "import", csv.toString()).exit());
@@ -214,7 +213,6 @@ class SpreadsheetExportCliTest {
             r.createCell(4).setCellValue(-20);
             r.createCell(5).setCellValue("13O");
             wb.write(out);
-            wb.dispose();
         }
         CliRun v = CliRun.on(tmp.resolve("cat"), "import", xlsx.toString());
         assertEquals(ExitCode.BAD_DATA, v.exit(), v.dump());

@@ -45,7 +45,7 @@ class ExtremeValuesProperties {
         Schema schema = Schema.of(kind);
         List<Row> out = new ArrayList<>();
         try (Reader r = Files.newBufferedReader(Path.of(file), StandardCharsets.UTF_8)) {
-            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build().parse(r)) {
+            for (CSVRecord rec : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
                 LinkedHashMap<String, Object> values = new LinkedHashMap<>();
                 for (Column c : schema.columns()) {
                     String cell = rec.isMapped(c.name()) ? rec.get(c.name()) : "";
