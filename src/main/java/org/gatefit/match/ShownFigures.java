@@ -206,14 +206,21 @@ final class ShownFigures {
      */
     private static double allowedSlew(PairFigures f) {
         Question q = f.q();
-        double limit = f.vThSeen() - q.op.vDriveNeg();
-        java.util.function.DoubleUnaryOperator v = slew -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, f.rOffPath(),
-                q.s.cIss(), q.s.cRss());
-        double hi = Math.max(f.slew(), 1e6);
-        if (v.applyAsDouble(1e15) < limit) {
+        return crossing(slew -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, f.rOffPath(), q.s.cIss(), q.s.cRss()),
+                f.vThSeen() - q.op.vDriveNeg(), Math.max(f.slew(), 1e6), 1e15);
+    }
+
+    /**
+     * Where a rising function {@code v} reaches {@code limit}, by doubling from {@code start} and then
+     * bisection to a relative 1e-6; +∞ when even {@code far} stays below. One search for the allowed
+     * dv/dt and the allowed holding resistance.
+     */
+    private static double crossing(java.util.function.DoubleUnaryOperator v, double limit, double start, double far) {
+        if (v.applyAsDouble(far) < limit) {
             return Double.POSITIVE_INFINITY;
         }
         double lo = 0;
+        double hi = start;
         while (v.applyAsDouble(hi) < limit) {
             lo = hi;
             hi *= 2;
@@ -226,7 +233,7 @@ final class ShownFigures {
                 hi = m;
             }
         }
-        return 0.5 * (lo + hi);
+        return lo;
     }
 
     /**
@@ -259,29 +266,11 @@ final class ShownFigures {
                 + ways.get(ways.size() - 1);
     }
 
-    /** The holding resistance at which the induced voltage reaches {@code limit} at the deciding slew, Ω (bisection). */
+    /** The holding resistance at which the induced voltage reaches {@code limit} at the deciding slew, Ω. */
     private static double maxHold(PairFigures f, double limit) {
         Question q = f.q();
-        java.util.function.DoubleUnaryOperator v = r -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), f.slew(), r, q.s.cIss(),
-                q.s.cRss());
-        double hi = Math.max(f.rOffPath(), 1);
-        if (v.applyAsDouble(1e9) < limit) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double lo = 0;
-        while (v.applyAsDouble(hi) < limit) {
-            lo = hi;
-            hi *= 2;
-        }
-        for (int i = 0; i < 100 && hi - lo > 1e-6 * hi; i++) {
-            double m = 0.5 * (lo + hi);
-            if (v.applyAsDouble(m) < limit) {
-                lo = m;
-            } else {
-                hi = m;
-            }
-        }
-        return lo;
+        return crossing(r -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), f.slew(), r, q.s.cIss(), q.s.cRss()), limit,
+                Math.max(f.rOffPath(), 1), 1e9);
     }
 
     /** Every figure of the pair that is a number, ruled and shown, in a fixed order, named as DESIGN.md fixes. */
