@@ -59,7 +59,46 @@ class ReferenceFiguresTest {
         return new Row(source, s, d, o, figure, expected, relTol);
     }
 
+    private static final Consumer<Parts.Sw> GAN = s -> {
+        s.tech = Technology.GAN_HEMT;
+        s.vBlock = 650;
+        s.vThMin = 1.1;
+        s.vThMax = 2.5;
+        s.vGsMax = 7;
+        s.vGsMin = -10;
+        s.vGateOn = 6;
+        s.rOnVgs = 6;
+        s.qG = 2.2e-9;
+        s.qGVgs = 6;
+        s.qGs = 0.7e-9;
+        s.qGd = 0.6e-9;
+        s.vPlateau = 3.0;
+        s.cIss = 125e-12;
+        s.cRss = 0.6e-12;
+        s.rGInt = 1.6;
+    };
+
+    private static final Consumer<Parts.Dr> GAN_DRIVER = d -> {
+        d.iSource = 4;
+        d.iSink = 8;
+        d.rSource = 1.0;
+        d.rSink = 0.45;
+        d.vSupplyMin = 4.5;
+        d.vSupplyMax = 6.5;
+    };
+
     static Stream<Row> figures() {
+        Consumer<OperatingPoint.Spec> ganBridge = o -> {
+            o.bus = 375.0;
+            o.fSw = 200e3;
+            o.edge = 10e-9;
+            o.vDrive = 6.0;
+            o.vDriveNeg = 0.0;
+            o.rG = 10.0;
+            o.rGOff = 0.5;
+            o.loop = 3e-9;
+            o.bridge = true;
+        };
         Consumer<Parts.Sw> s12 = sec1Switch(12);
         Consumer<Parts.Sw> s10 = sec1Switch(10);
         // §4: Q_g + I_qbs·t_on + Q_ls with Q_ls 2.5 nC folded into Q_g (it adds the same way):
@@ -108,6 +147,13 @@ class ReferenceFiguresTest {
                 row("REFERENCES §8: (V_on − V_pl)·t / (margin·Q_gd) − R_driver − R_g,int", s12, SEC1_DRIVER, loop40,
                         "gate-resistor-max", 40.278, 1e-3),
                 row("IEC 60063 E24 nearest 20.14 Ω", s12, SEC1_DRIVER, loop40, "gate-resistor-recommended", 20.0, 1e-9),
+                // The floor set by dv-dt (REFERENCES §8, charge-consistent injection; bisection by hand in
+                // Python over the same model, computed): a 650 V GaN low side in a bridge, Q_gd 0.6 nC, V_pl 3 V,
+                // C_iss 125 pF, C_rss 0.6 pF, R_g,int 1.6 Ω, V_th,min 1.1 V (0.9 V at 125 °C); driver 4 A,
+                // 1 Ω / 0.45 Ω; 375 V, 6 V / 0 V, R_g,off 0.5 Ω. The twin's turn-on at R_g = 6.05 Ω just lifts
+                // the off gate to V_th,min at 125 °C: below it dv-dt fails.
+                row("REFERENCES §8, computed: the R_g below which dv-dt fails", GAN, GAN_DRIVER, ganBridge,
+                        "gate-resistor-min", 6.0549, 2e-3),
                 row("REFERENCES §4: (12 − 0.7) V / 2.2 Ω", boot, bootDriver, bootOpRb, "bootstrap-inrush", 5.136, 1e-3),
                 // The recommended capacitor and the duty limit follow the charge balance with DC-bias
                 // derating (issue 17); BootstrapBalanceTest checks them against a cycle-by-cycle simulation.
