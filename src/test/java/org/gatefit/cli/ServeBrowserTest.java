@@ -186,6 +186,34 @@ class ServeBrowserTest {
             assertEquals(failing.contains(stage), row.getText().contains("\u2716 fail"), stage + ": " + row.getText());
         }
         assertEquals(3, browser.findElements(By.cssSelector("#downloads button")).size(), "JSON, JUnit XML, HTML");
+        // Each stage opens its pair's calculation sheet at the stage's operating point: the pair page
+        // explains it with the stage's own verdict for a pair rule (PFC-B: drive-current fails there).
+        String verdict = null;
+        for (JsonNode s : report.get("results")) {
+            if (s.get("stage").asText().equals("PFC-B")) {
+                for (JsonNode ch : s.get("checks")) {
+                    if (ch.get("rule").asText().equals("drive-current")) {
+                        verdict = ch.get("verdict").asText();
+                    }
+                }
+            }
+        }
+        assertEquals("fail", verdict, "the example's PFC-B fails drive-current (examples/README.md)");
+        WebElement pfcB = null;
+        for (WebElement row : browser.findElements(By.cssSelector("#out tbody tr"))) {
+            if (row.findElements(By.tagName("td")).get(0).getText().equals("PFC-B")) {
+                pfcB = row;
+            }
+        }
+        assertTrue(pfcB != null, "a PFC-B row");
+        String href = pfcB.findElement(By.linkText("calculation sheet")).getAttribute("href");
+        assertTrue(href.contains("bridge=no") && href.contains("tj=125") && href.contains("edge=40"), href);
+        browser.get(href);
+        waiting().until(d -> browser.findElement(By.id("compare")).getText().contains("drive-current"));
+        String compare = browser.findElement(By.id("compare")).getText();
+        assertTrue(compare.contains("YSP-G65T75"), compare);
+        String row = compare.lines().filter(l -> l.startsWith("drive-current")).findFirst().orElse("");
+        assertTrue(row.contains("fail"), "the stage's drive-current verdict on its sheet: " + compare);
         onlyOwnOrigin();
     }
 

@@ -43,6 +43,14 @@
         { key: 'switch', cell: x => (x.switch_ref ? x.switch_ref + ' ' : '') + (x.switch || '') },
         { key: 'verdict', cell: x => G.verdict(x.verdict) },
         { key: 'score', num: true },
+        { key: 'sheet', cell: x => {
+          if (!x.operating_point) return '';
+          // The pair's full calculation sheet at this stage's operating point.
+          const q = new URLSearchParams([['switch', x.switch], ['driver', x.driver]].concat(G.opParams(x.operating_point)));
+          const a = G.el('a', 'calculation sheet');
+          a.href = 'pair?' + q.toString();
+          return a;
+        } },
         { key: 'problems', cell: x => {
           const d = G.el('details');
           const bad = x.checks.filter(c => c.verdict !== 'pass');

@@ -88,7 +88,25 @@ const G = {
     ['v-ol', 'V_OL', 'V'], ['pwm', 'PWM sense', 'active-high|active-low'], ['rg', 'R_g on', '\u03A9'],
     ['rg-off', 'R_g off', '\u03A9'], ['duty-max', 'duty max', '0..1'], ['parallel', 'parallel', 'n'],
     ['loop', 'gate loop', 'nH'], ['v-f-boot', 'bootstrap diode', 'V'], ['r-boot', 'bootstrap R', '\u03A9'],
-    ['dvdt', 'dv/dt', 'V/ns']],
+    ['dvdt', 'dv/dt', 'V/ns'], ['tj', 'hot corner', '\u00B0C'], ['bridge', 'in a bridge', 'yes|no']],
+
+  /**
+   * A stage's operating point (the JSON "operating_point" of check and explain) as the explain
+   * options, so a design row can open its pair's calculation sheet with the same point.
+   */
+  opParams(op) {
+    if (!op) return [];
+    const n = v => (v === null || v === undefined ? null : String(+(+v).toPrecision(6)));
+    const out = [['side', op.side], ['bus', n(op.bus_v)], ['freq', n(op.f_sw_hz / 1e3)], ['edge', n(op.edge_s * 1e9)],
+      ['drive', n(op.v_drive_v)], ['drive-neg', n(op.v_drive_neg_v)],
+      ['pwm', op.pwm_sense], ['rg', n(op.r_g_ohm)], ['rg-off', n(op.r_g_off_ohm)], ['duty-max', n(op.duty_max)],
+      ['parallel', n(op.parallel)], ['loop', n(op.loop_h * 1e9)], ['v-f-boot', n(op.v_f_boot_v)],
+      ['r-boot', n(op.r_boot_ohm)], ['dvdt', n(op.dv_dt_v_per_ns)], ['tj', n(op.t_j_c)],
+      ['bridge', op.bridge === undefined ? null : (op.bridge ? 'yes' : 'no')]];
+    if (op.logic) out.push(['logic', op.logic]);
+    else out.push(['v-oh', n(op.v_oh_v)], ['v-ol', n(op.v_ol_v)]);
+    return out.filter(([, v]) => v !== null && v !== undefined && v !== 'NaN');
+  },
 
   /** Fills the operating-point fieldset, values from the page's query. */
   opForm(fieldset) {
