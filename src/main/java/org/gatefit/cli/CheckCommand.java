@@ -75,7 +75,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
         }
         if (junit != null) {
             try (Writer w = OutputOptions.open(ctx, junit)) {
-                CheckReports.junit(report, w);
+                CheckReports.junit(report, header, w);
             }
         }
         return report.failed() ? ExitCode.FAILED : ExitCode.OK;

@@ -180,6 +180,11 @@ public final class CheckReports {
      * with its message in {@code <system-out>}.
      */
     public static void junit(StageCheck.Report r, Writer out) throws IOException {
+        junit(r, null, out);
+    }
+
+    /** The JUnit XML with the report header as the suite's {@code <properties>} (none when {@code header} is null). */
+    public static void junit(StageCheck.Report r, ReportHeader header, Writer out) throws IOException {
         int tests = 0;
         int failures = 0;
         int skipped = 0;
@@ -198,6 +203,9 @@ public final class CheckReports {
                 + skipped + "\">\n");
         out.write("  <testsuite name=\"" + xml(r.file()) + "\" tests=\"" + tests + "\" failures=\"" + failures
                 + "\" errors=\"0\" skipped=\"" + skipped + "\">\n");
+        if (header != null) {
+            out.write(header.junitProperties(CheckReports::xml, "    "));
+        }
         for (StageCheck.StageResult s : r.results()) {
             for (Check c : s.checks()) {
                 out.write("    <testcase classname=\"" + xml("stage." + s.stage()) + "\" name=\"" + xml(c.rule().id()) + "\">");

@@ -197,4 +197,26 @@ public record ReportHeader(String command, OffsetDateTime time, String gatefit, 
         g.writeEndArray();
         g.writeEndObject();
     }
+
+    /**
+     * The same facts as JUnit XML {@code <property>} elements, names as in the JSON {@code report}
+     * object ({@code report.generated}, {@code report.catalog.content_sha256}, {@code report.input.stages.sha256} …),
+     * for a CI server that shows a test suite's properties. {@code escape} escapes an attribute value.
+     */
+    public String junitProperties(java.util.function.UnaryOperator<String> escape, String indent) {
+        StringBuilder sb = new StringBuilder(indent).append("<properties>\n");
+        java.util.function.BiConsumer<String, String> p = (name, value) -> sb.append(indent).append("  <property name=\"")
+                .append(escape.apply(name)).append("\" value=\"").append(escape.apply(value == null ? "" : value))
+                .append("\"/>\n");
+        p.accept("report.command", command);
+        p.accept("report.generated", timeText());
+        p.accept("report.gatefit", gatefit);
+        p.accept("report.catalog.path", catalog);
+        p.accept("report.catalog.content_sha256", catalogSha256);
+        for (Input in : inputs) {
+            p.accept("report.input." + in.role().id() + ".file", in.file());
+            p.accept("report.input." + in.role().id() + ".sha256", in.sha256());
+        }
+        return sb.append(indent).append("</properties>\n").toString();
+    }
 }

@@ -121,6 +121,31 @@ class ReportHeaderCliTest {
         return ref != null ? ref : Sha256.of(f);
     }
 
+    /**
+     * The JUnit XML carries the header as the suite's properties (JUnit's own place for them), in XML a
+     * standard parser reads, with each input's SHA-256 as sha256sum prints it.
+     */
+    @Test
+    void theJunitXmlCarriesTheHeaderAsProperties() throws Exception {
+        Path xml = tmp.resolve("check.junit.xml");
+        CliRun r = CliRun.on(catalog, "check", stages.toString(), "--bom", bom.toString(), "--junit", xml.toString());
+        assertEquals(ExitCode.FAILED, r.exit(), r.dump());
+        org.w3c.dom.Document doc = javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder()
+                .parse(xml.toFile());
+        Map<String, String> props = new LinkedHashMap<>();
+        org.w3c.dom.NodeList list = doc.getElementsByTagName("property");
+        for (int i = 0; i < list.getLength(); i++) {
+            org.w3c.dom.Element e = (org.w3c.dom.Element) list.item(i);
+            props.put(e.getAttribute("name"), e.getAttribute("value"));
+        }
+        assertEquals("check", props.get("report.command"), props.toString());
+        assertTrue(Pattern.matches("\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\d[+-]\\d\\d:\\d\\d",
+                props.get("report.generated")), props.toString());
+        assertEquals(referenceSha256(stages), props.get("report.input.stages.sha256"), props.toString());
+        assertEquals(referenceSha256(bom), props.get("report.input.bom.sha256"), props.toString());
+        assertTrue(props.get("report.catalog.content_sha256").matches("[0-9a-f]{64}"), props.toString());
+    }
+
     @Test
     void theTimeCarriesTheClocksOffset() throws Exception {
         StringWriter out = new StringWriter();
