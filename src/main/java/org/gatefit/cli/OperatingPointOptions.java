@@ -77,8 +77,9 @@ final class OperatingPointOptions {
     String dvdt;
 
     @Option(names = "--bridge", paramLabel = "yes|no",
-            description = "Whether another switch turns on against this one (half-bridge, totem pole, synchronous"
-                    + " rectifier) — its edge is what the dv-dt rule judges (default: yes, printed).")
+            description = "Whether another switch turns on hard against this one (half-bridge, totem pole, synchronous"
+                    + " rectifier) — its edge is what the dv-dt rule judges; no for a single switch or a partner that"
+                    + " turns on at zero voltage (default: yes, printed).")
     String bridge;
 
     @Option(names = "--tj", paramLabel = "°C",

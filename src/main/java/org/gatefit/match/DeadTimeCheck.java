@@ -48,8 +48,11 @@ final class DeadTimeCheck {
     private record Side(int index, StageResult r, Row row, DriverPart d, SwitchPart s) {
     }
 
-    static List<StageResult> apply(List<StageResult> results, List<Row> rows, Function<String, Optional<Row>> drivers,
-                                   Function<String, Optional<Row>> switches, Margins m) {
+    /**
+     * The half-bridges of a check: pairs of stage indices, one high and one low, on one driver
+     * designator or with the same {@code leg} cell (only stages whose parts and point resolved).
+     */
+    static List<int[]> bridges(List<StageResult> results, List<Row> rows) {
         Map<String, List<Integer>> bridges = new LinkedHashMap<>();
         for (int i = 0; i < results.size(); i++) {
             StageResult r = results.get(i);
@@ -61,13 +64,21 @@ final class DeadTimeCheck {
                     : "driver " + r.driverRef().toUpperCase(Locale.ROOT);
             bridges.computeIfAbsent(key, k -> new ArrayList<>()).add(i);
         }
-        List<StageResult> out = new ArrayList<>(results);
+        List<int[]> out = new ArrayList<>();
         for (List<Integer> g : bridges.values()) {
-            if (g.size() != 2 || results.get(g.get(0)).point().highSide() == results.get(g.get(1)).point().highSide()) {
-                continue;
+            if (g.size() == 2 && results.get(g.get(0)).point().highSide() != results.get(g.get(1)).point().highSide()) {
+                out.add(new int[] {g.get(0), g.get(1)});
             }
-            Side a = side(g.get(0), results, rows, drivers, switches);
-            Side b = side(g.get(1), results, rows, drivers, switches);
+        }
+        return out;
+    }
+
+    static List<StageResult> apply(List<StageResult> results, List<Row> rows, Function<String, Optional<Row>> drivers,
+                                   Function<String, Optional<Row>> switches, Margins m) {
+        List<StageResult> out = new ArrayList<>(results);
+        for (int[] g : bridges(results, rows)) {
+            Side a = side(g[0], results, rows, drivers, switches);
+            Side b = side(g[1], results, rows, drivers, switches);
             out.set(a.index(), judged(a, b, m));
             out.set(b.index(), judged(b, a, m));
         }

@@ -86,8 +86,8 @@ final class DvDtRule implements PairRule {
         boolean clamp = Boolean.TRUE.equals(f.d().millerClamp());
         List<Comparison> cmp = List.of(new Comparison("induced gate voltage + off level at " + Eng.num(f.dvdtCornerC())
                 + " °C", seen, "≤", limit, "V"));
-        String slew = Eng.slew(f.slew()) + (Double.isNaN(f.op().dvdt()) ? " (the twin's turn-on)"
-                : " (as given)");
+        String slew = Eng.slew(f.slew()) + (!Double.isNaN(f.op().dvdt()) ? " (as given)"
+                : f.op().twin() != null ? " (" + f.op().twin().name() + "'s turn-on)" : " (the twin's turn-on)");
         String what = "at " + Eng.num(f.dvdtCornerC()) + " °C the switch node slews at " + slew + " and the Miller current"
                 + " (Q_gd " + Eng.of(s.qGd(), "C") + " over " + Eng.of(f.op().bus(), "V") + ") lifts the off gate to "
                 + Eng.of(seen, "V") + " through " + Eng.of(f.rOffPath(), "Ω")

@@ -34,13 +34,30 @@ import org.gatefit.physics.LogicFamily;
  *                   dissipation adds up in the package); 0: all of the driver's channels
  * @param bridge     whether another switch turns on against this one (half-bridge, totem pole,
  *                   synchronous rectifier): its edge is what can turn this switch on through C_gd
+ * @param twin       the other switch of the half-bridge, when its edge is known apart from this pair
+ *                   ({@code check} knows both stages of a bridge), or null: the twin is taken to be
+ *                   the same pair at the same point
  * @param tj         junction temperature of the hot corner, °C: the rules that depend on temperature
  *                   judge at 25 °C (where datasheets specify) and here, and the worse decides
  */
 public record OperatingPoint(boolean highSide, double bus, double fSw, double edge, double vDrive, double vDriveNeg,
                              LogicFamily logic, double vOh, double vOl, double vOhMax, boolean activeHigh, double rG,
                              double rGOff, double dutyMax, int parallel, double loop, double diodeDrop, double rBoot,
-                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed, boolean bridge, double tj) {
+                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed, boolean bridge, Twin twin, double tj) {
+
+    /**
+     * The other switch of a half-bridge whose turn-on is what can lift this switch's off gate: its
+     * name (a stage id) and its switch-node dv/dt at 25 °C and at the hot corner, V/s.
+     */
+    public record Twin(String name, double slewCold, double slewHot) {
+        public Twin {
+            java.util.Objects.requireNonNull(name, "name");
+            if (!(slewCold > 0) || !(slewHot > 0)) {
+                throw new IllegalArgumentException("expected the twin's dv/dt above 0, got " + slewCold + " / " + slewHot);
+            }
+        }
+    }
+
 
     /** Gate-loop inductance assumed when none is given (REFERENCES.md §3: 10–20 nH leaded, from memory). */
     public static final double DEFAULT_LOOP = 10e-9;
@@ -122,6 +139,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         public Double tj;
         /** Whether another switch turns on against this one (null: assumed yes, printed). */
         public Boolean bridge;
+        /** The twin's edge when known apart from this pair (set by {@code check} for a half-bridge), or null. */
+        public Twin twin;
 
         /**
          * What a stage-sheet row (or the same columns typed on the command line) gives; empty
@@ -189,6 +208,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.channelsUsed = channelsUsed;
             s.tj = tj;
             s.bridge = bridge;
+            s.twin = twin;
             return s;
         }
 
@@ -276,7 +296,7 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             return new OperatingPoint(hs, bus == null ? Double.NaN : bus, fSw, e, on, off, fam, oh, ol, ohMax,
                     activeHigh == null || activeHigh, rg, rgOff, dutyMax == null ? Double.NaN : dutyMax,
                     parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt,
-                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed, bridge == null || bridge, t);
+                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed, bridge == null || bridge, twin, t);
         }
     }
 }

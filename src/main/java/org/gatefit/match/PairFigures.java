@@ -134,13 +134,17 @@ final class PairFigures {
         for (int c = 0; c < 2; c++) {
             double k = c == 0 ? 1 : kHot;
             double t = c == 0 ? JunctionTemperature.DATASHEET_C : tHot;
-            double slewC = slewAt(q, d, k * rSrc, op.rG());
+            double slewC = op.twin() != null && Double.isNaN(op.dvdt()) ? (c == 0 ? op.twin().slewCold()
+                    : op.twin().slewHot()) : slewAt(q, d, k * rSrc, op.rG());
             if (Double.isNaN(slewC)) {
                 continue;
             }
             double offEdge = edges && Double.isNaN(op.dvdt()) ? op.bus() * DriveCurrent.plateau(s.vPlateau()
                     - op.vDriveNeg(), k * rSnk + (op.rGOff() + rInt) / n, d.iSink()) / (n * s.qGd()) : slewC;
-            slMax = Double.isNaN(slMax) ? Math.max(slewC, offEdge) : Math.max(slMax, Math.max(slewC, offEdge));
+            // Every edge the switch node makes: the twin's turn-on, this switch's own turn-on and turn-off.
+            double ownOn = op.twin() != null && Double.isNaN(op.dvdt()) ? slewAt(q, d, k * rSrc, op.rG()) : slewC;
+            double fastest = Math.max(slewC, Math.max(offEdge, Double.isNaN(ownOn) ? slewC : ownOn));
+            slMax = Double.isNaN(slMax) ? fastest : Math.max(slMax, fastest);
             double holdC = holdPath(q, d, k * rSnk);
             double viC = millerKnown(q) && (op.bridge() || !Double.isNaN(op.dvdt())) ? DvDt.millerInjected(s.qGd(), op.bus(), slewC, holdC, s.cIss(), s.cRss())
                     : Double.NaN;

@@ -162,7 +162,7 @@ final class ShownFigures {
      */
     private static double dvdtFloor(PairFigures f, double top) {
         Question q = f.q();
-        if (!Double.isNaN(q.op.dvdt()) || !q.op.bridge() || !PairFigures.millerKnown(q) || !q.plateau || Double.isNaN(q.s.vThMin())) {
+        if (!Double.isNaN(q.op.dvdt()) || q.op.twin() != null || !q.op.bridge() || !PairFigures.millerKnown(q) || !q.plateau || Double.isNaN(q.s.vThMin())) {
             return Double.NaN;
         }
         java.util.function.DoubleUnaryOperator excess = rg -> {
@@ -255,6 +255,9 @@ final class ShownFigures {
                 ways.add("lower R_g,off to ≤ " + Eng.of(ESeries.E24.roundDown(Math.max(rgOff, 0.1)), "Ω"));
             }
         }
+        if (q.op.twin() != null) {
+            ways.add("slow " + q.op.twin().name() + "'s turn-on (a larger R_g there)");
+        }
         if (Double.isFinite(rgMin) && rgMin < 1e6 && rgMin > q.op.rG() && rgFloor.startsWith("the dv-dt") && rgMax >= rgMin) {
             ways.add("raise R_g (turn-on) to ≥ " + Eng.of(ESeries.E24.roundUp(rgMin), "Ω") + " to slow the edge");
         }
@@ -317,8 +320,8 @@ final class ShownFigures {
         add(l, "bootstrap-inrush", bootInrush, "A", "(V_drive − V_F) / R_boot at first charge", false);
         add(l, "noise-margin-high", f.nmHigh(), "V", "V_OH − V_IH", false);
         add(l, "noise-margin-low", f.nmLow(), "V", "V_IL − V_OL", false);
-        add(l, "dv-dt", f.slew() * 1e-9, "V/ns", (Double.isNaN(f.op().dvdt()) ? "bus / the twin's turn-on plateau"
-                : "as given") + ", " + Eng.num(f.dvdtCornerC()) + " °C", Double.isNaN(f.op().dvdt()));
+        add(l, "dv-dt", f.slew() * 1e-9, "V/ns", (!Double.isNaN(f.op().dvdt()) ? "as given" : f.op().twin() != null
+                ? "bus / " + f.op().twin().name() + "'s turn-on plateau" : "bus / the twin's turn-on plateau") + ", " + Eng.num(f.dvdtCornerC()) + " °C", Double.isNaN(f.op().dvdt()));
         add(l, "miller-induced-voltage", f.vInduced(), "V", "(Q_gd/V_bus)·dv/dt·R, RC-limited, "
                 + Eng.num(f.dvdtCornerC()) + " °C", true);
         add(l, "threshold-min-at-corner", f.vThSeen(), "V", "V_th,min at " + Eng.num(f.dvdtCornerC()) + " °C", true);

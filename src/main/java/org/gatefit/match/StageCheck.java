@@ -106,6 +106,8 @@ public final class StageCheck {
                     pn -> switchCache.computeIfAbsent(pn, switches), m));
             progress.accept(out.size());
         }
+        out = twins(out, stages, bom, pn -> driverCache.computeIfAbsent(pn, drivers),
+                pn -> switchCache.computeIfAbsent(pn, switches), m);
         out = DeadTimeCheck.apply(out, stages, pn -> driverCache.computeIfAbsent(pn, drivers),
                 pn -> switchCache.computeIfAbsent(pn, switches), m);
         out = PackageCheck.apply(out, pn -> driverCache.computeIfAbsent(pn, drivers),
@@ -144,8 +146,52 @@ public final class StageCheck {
                 ? " (it looks like a designator: give the BOM with --bom)" : " — import it, or check the part number"));
     }
 
+    /**
+     * The two stages of each half-bridge judged against each other's edge: a stage's dv-dt comes from
+     * its partner's turn-on (the partner's pair at the partner's point, at both corners), not from its
+     * own pair standing in for the twin, so a bridge of unlike halves is judged as built.
+     */
+    private static List<StageResult> twins(List<StageResult> results, List<Row> rows, Bom bom,
+                                           Function<String, Optional<Row>> drivers,
+                                           Function<String, Optional<Row>> switches, Margins m) {
+        List<StageResult> out = new ArrayList<>(results);
+        for (int[] g : DeadTimeCheck.bridges(results, rows)) {
+            for (int k = 0; k < 2; k++) {
+                int self = g[k];
+                int other = g[1 - k];
+                OperatingPoint.Twin twin = twin(results.get(other), drivers, switches, m);
+                if (twin != null) {
+                    out.set(self, one(rows.get(self), bom, drivers, switches, m, twin));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** The switch-node dv/dt of a stage's own turn-on at 25 °C and at its hot corner, as a twin; null when unknown. */
+    private static OperatingPoint.Twin twin(StageResult r, Function<String, Optional<Row>> drivers,
+                                            Function<String, Optional<Row>> switches, Margins m) {
+        try {
+            DriverPart d = DriverPart.of(drivers.apply(r.driver()).orElseThrow());
+            SwitchPart s = SwitchPart.of(switches.apply(r.switchPart()).orElseThrow());
+            OperatingPoint op = r.point();
+            Question q = Question.of(s, op, m);
+            PairFigures f = PairFigures.of(q, d);
+            double cold = Double.isNaN(op.dvdt()) ? PairFigures.slewAt(q, d, f.rSrc(), op.rG()) : op.dvdt();
+            double hot = Double.isNaN(op.dvdt()) ? PairFigures.slewAt(q, d, f.kHot() * f.rSrc(), op.rG()) : op.dvdt();
+            return cold > 0 && hot > 0 ? new OperatingPoint.Twin(r.stage(), cold, hot) : null;
+        } catch (IllegalArgumentException | ArithmeticException | java.util.NoSuchElementException e) {
+            return null; // the partner's edge cannot be computed: the stage keeps its own pair as the twin
+        }
+    }
+
     private static StageResult one(Row st, Bom bom, Function<String, Optional<Row>> drivers,
                                    Function<String, Optional<Row>> switches, Margins m) {
+        return one(st, bom, drivers, switches, m, null);
+    }
+
+    private static StageResult one(Row st, Bom bom, Function<String, Optional<Row>> drivers,
+                                   Function<String, Optional<Row>> switches, Margins m, OperatingPoint.Twin twin) {
         String dRef = st.text("driver");
         String sRef = st.text("switch");
         Resolved d = resolve(dRef, "driver", bom, drivers);
@@ -168,6 +214,7 @@ public final class StageCheck {
         try {
             OperatingPoint.Spec spec = OperatingPoint.Spec.fromStage(st);
             spec.channelsUsed = 1; // a stage is one channel; PackageCheck adds up the stages of one package
+            spec.twin = twin;
             op = spec.resolve(sp);
         } catch (IllegalArgumentException e) {
             Check c = new Check(Rule.CATALOG, Verdict.FAIL, "the stage's operating point cannot be used: " + e.getMessage(),

@@ -384,6 +384,44 @@ class CheckCliTest {
         assertEquals(ExitCode.FAILED, r.exit(), r.dump());
     }
 
+    /**
+     * Unlike halves (REFERENCES.md §7 and §8, charge-consistent; hot corner ×1.4 and −0.6 V from memory):
+     * each stage's dv-dt comes from the other's turn-on, not from its own pair. HB-H turns on through
+     * 2.2 Ω: 7 V / 5.2 Ω = 1.35 A moves 48 V in 7.43 ns (6.46 V/ns); HB-L holds its gate through
+     * 1 + 0.5 + 1 = 2.5 Ω: 1.35 A · 2.5 Ω · (1 − e^(−7.43/7.5)) = 2.11 V ≥ V_th,min 2 V → fail (hot: 2.12 V
+     * against 1.4 V). HB-L turns on through 22 Ω: 7/25 = 0.28 A, 1.34 V/ns, so HB-H sees 0.69 V (0.78 V
+     * hot, under 0.7 · 1.4 V) → pass. Judged as its own twin, HB-L would have passed (0.78 V): the
+     * false pass this guards against.
+     */
+    @Test
+    void aBridgeOfUnlikeHalvesIsJudgedOnEachOthersEdge() throws Exception {
+        Path bom = write(tmp.resolve("bom.csv"), "Designator,Quantity,MPN\nU1,1,TST-DRV2\n\"Q1, Q2\",2,TST-SW1\n");
+        String high = "HB-H,U1,Q1,high,48,20,100,12,0,,3.1,0.2,active-high,2.2,0.5,0.9,1,5,yes\n";
+        String low = "HB-L,U1,Q2,low,48,20,100,12,0,,3.1,0.2,active-high,22,0.5,0.9,1,5,yes\n";
+        JsonNode bridge = json(CliRun.on(catalog, "check", write(tmp.resolve("hb.csv"), STAGE_HEADER + high + low)
+                .toString(), "--bom", bom.toString(), "--format", "json"));
+        JsonNode lowDvdt = check(stage(bridge, "HB-L"), "dv-dt");
+        assertEquals("fail", lowDvdt.get("verdict").asText(), lowDvdt.toString());
+        assertTrue(lowDvdt.get("message").asText().contains("HB-H's turn-on"), lowDvdt.toString());
+        JsonNode highDvdt = check(stage(bridge, "HB-H"), "dv-dt");
+        assertEquals("pass", highDvdt.get("verdict").asText(), highDvdt.toString());
+        assertTrue(highDvdt.get("message").asText().contains("HB-L's turn-on"), highDvdt.toString());
+        // The same low stage alone (its own designator, no leg) stands in as its own twin and passes.
+        Path bom2 = write(tmp.resolve("bom2.csv"), "Designator,Quantity,MPN\nU2,1,TST-DRV2\nQ2,1,TST-SW1\n");
+        JsonNode alone = json(CliRun.on(catalog, "check", write(tmp.resolve("alone.csv"), STAGE_HEADER
+                + low.replace(",U1,", ",U2,")).toString(), "--bom", bom2.toString(), "--format", "json"));
+        assertEquals("pass", check(stage(alone, "HB-L"), "dv-dt").get("verdict").asText());
+    }
+
+    private static JsonNode check(JsonNode stage, String rule) {
+        for (JsonNode c : stage.get("checks")) {
+            if (c.get("rule").asText().equals(rule)) {
+                return c;
+            }
+        }
+        throw new AssertionError("no " + rule + " in " + stage);
+    }
+
     @Test
     void aHalfBridgeWithoutADeadTimeSaysUnknownNeverPass() throws Exception {
         Path bom = write(tmp.resolve("bom.csv"), "Designator,Quantity,MPN\nU1,1,TST-DRV2\n\"Q1, Q2\",2,TST-SW1\n");
