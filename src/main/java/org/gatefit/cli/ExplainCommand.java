@@ -7,6 +7,7 @@ import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
+import org.gatefit.match.GateNetwork;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
@@ -65,6 +66,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
+        List<GateNetwork> networks = new ArrayList<>();
         ReportHeader header;
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
@@ -82,13 +84,14 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 PairResult r = Rules.evaluate(dr, sw, op, margins.margins());
                 rs.add(r);
                 drives.add(GateDrive.of(sw, r));
+                networks.add(GateNetwork.of(dr, sw, r));
             }
             header = header("explain", c, input(ReportHeader.Role.STAGES, saved.stages));
         }
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
             if (rs.size() == 1) {
-                MatchReports.explain(rs.get(0), drives.get(0), how, w);
+                MatchReports.explain(rs.get(0), drives.get(0), networks.get(0), how, w);
             } else {
                 CompareReports.render(rs, drives, how, w);
             }
