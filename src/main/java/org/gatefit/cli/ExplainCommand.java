@@ -14,6 +14,7 @@ import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
 import org.gatefit.report.CompareReports;
+import org.gatefit.report.Format;
 import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
 import org.gatefit.report.Rendering;
@@ -63,6 +64,9 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             throw new UsageException("--driver: at most " + MAX_COMPARED + " drivers compared at once, got "
                     + driverPns.size());
         }
+        if (output.format == Format.SPICE && driverPns.size() > 1) {
+            throw new UsageException("--format spice: one --driver (a deck models one gate loop), got " + driverPns.size());
+        }
         OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
@@ -91,7 +95,14 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
             if (rs.size() == 1) {
-                MatchReports.explain(rs.get(0), drives.get(0), networks.get(0), how, w);
+                try {
+                    MatchReports.explain(rs.get(0), drives.get(0), networks.get(0), how, w);
+                } catch (IllegalArgumentException e) {
+                    if (how.format() != Format.SPICE) {
+                        throw e;
+                    }
+                    throw new UsageException(e.getMessage()); // a deck needs C_iss, Q_gd, V_pl: nothing written
+                }
             } else {
                 CompareReports.render(rs, drives, how, w);
             }

@@ -267,6 +267,7 @@ public final class MatchReports {
             throws IOException {
         switch (how.format()) {
             case HTML -> MatchHtml.explain(p, drive, network, how.header(), out);
+            case SPICE -> GateSpice.write(p, drive, network, out);
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();

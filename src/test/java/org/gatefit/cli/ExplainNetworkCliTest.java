@@ -88,4 +88,18 @@ class ExplainNetworkCliTest {
         assertTrue(html.indexOf("<td>bootstrap diode</td><td class=\"num\">600 V</td>") > table, html);
         assertTrue(html.contains("class=\"caution\""), html);
     }
+
+    @Test
+    void spiceIsForOnePairOfExplainOnly() {
+        CliRun find = CliRun.on(catalog, "find", "--kind", "switch", "--format", "spice");
+        assertEquals(ExitCode.USAGE, find.exit(), find.dump());
+        assertTrue(find.err().contains("--format spice is not available for find; SPICE netlists are made by explain"),
+                find.err());
+        CliRun two = CliRun.on(catalog, "explain", "--driver", "PGL-HB6005", "--driver", "PGL-HB1046", "--switch",
+                "THW-65R190T", "--format", "spice");
+        assertEquals(ExitCode.USAGE, two.exit(), two.dump());
+        assertTrue(two.err().contains("--format spice: one --driver"), two.err());
+        CliRun help = CliRun.on(catalog, "find", "--help");
+        assertTrue(help.out().contains("Output format: text, json, csv, markdown (default"), help.out());
+    }
 }
