@@ -27,7 +27,10 @@ import picocli.CommandLine.Option;
         header = "Show the full calculation sheet of one driver–switch pair.",
         description = {"Every rule with the figures and limits it compared and what would fix it; every computed"
             + " figure with its unit and formula; the recommended gate-resistor range and E24 value, the bootstrap"
-            + " capacitor for a high side, driver losses and switching-time estimates. Exit 1 when the pair fails.",
+            + " capacitor for a high side, driver losses and switching-time estimates; the gate-drive network (supply"
+            + " capacitors, gate resistors and their packages, turn-off diode, pull-down, clamps, bootstrap parts), each"
+            + " with its rating and why. --format spice writes the gate loop as a SPICE netlist. Exit 1 when the pair"
+            + " fails.",
             "",
             "With --driver given two to four times, the drivers are compared with the switch side by side (checks and"
             + " figures in columns, in HTML the gate waveforms overlaid); exit 1 when any of the pairs fails."})
