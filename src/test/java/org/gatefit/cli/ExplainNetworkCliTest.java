@@ -102,4 +102,13 @@ class ExplainNetworkCliTest {
         CliRun help = CliRun.on(catalog, "find", "--help");
         assertTrue(help.out().contains("Output format: text, json, csv, markdown (default"), help.out());
     }
+
+    @Test
+    void theDemoShowsTheNetworkOfItsFirstChoice() {
+        String out = CliRun.on(catalog, "demo").out();
+        int eight = out.indexOf("== 8.");
+        int net = out.indexOf("\nGate-drive network\n", eight);
+        assertTrue(eight > 0 && net > eight && net < out.indexOf("== 9."), out);
+        assertTrue(out.substring(net, out.indexOf("== 9.")).contains("  negative gate clamp (Zener):"), out.substring(net));
+    }
 }
