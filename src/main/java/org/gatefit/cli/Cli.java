@@ -221,36 +221,37 @@ public final class Cli {
     }
 
     /**
-     * A command without an HTML report offers (in its help and in completion) only the formats it
-     * makes: its {@code --format} option is rebuilt with those candidates, bound to the same field.
+     * A command offers (in its help and in completion) only the formats it makes — HTML only where
+     * it has an HTML report, SPICE only for {@code explain}: its {@code --format} option is rebuilt
+     * with those candidates, bound to the same field.
      */
     private static void offerOnlyFormatsMade(CommandLine cl) {
-        List<String> made = java.util.Arrays.stream(Format.values()).filter(f -> f != Format.HTML)
-                .map(f -> f.name().toLowerCase(java.util.Locale.ROOT)).toList();
         for (CommandLine sub : cl.getSubcommands().values()) {
             CommandLine.Model.CommandSpec spec = sub.getCommandSpec();
             CommandLine.Model.OptionSpec format = spec.findOption("--format");
-            if (format == null || Format.HTML_COMMANDS.contains(spec.name())) {
+            if (format == null) {
                 continue;
             }
+            List<String> made = java.util.Arrays.stream(Format.values()).filter(f -> f.madeBy(spec.name()))
+                    .map(f -> f.name().toLowerCase(java.util.Locale.ROOT)).toList();
             spec.remove(format);
             spec.addOption(CommandLine.Model.OptionSpec.builder(format).completionCandidates(made)
                     .description("Output format: " + String.join(", ", made) + " (default: ${DEFAULT-VALUE}).").build());
         }
     }
 
-    /** {@code --format html} on a command without an HTML report is a usage error (exit 2), before any work. */
+    /** {@code --format html} or {@code spice} on a command that does not make it is a usage error (exit 2), before any work. */
     private static void rejectHtml(CommandLine.ParseResult parsed) {
         CommandLine.ParseResult last = parsed;
         while (last.hasSubcommand()) {
             last = last.subcommand();
         }
         CommandLine.Model.OptionSpec format = last.commandSpec().findOption("--format");
-        if (format != null && last.hasMatchedOption("--format") && format.getValue() == Format.HTML
-                && !Format.HTML_COMMANDS.contains(last.commandSpec().name())) {
-            throw new CommandLine.ParameterException(last.commandSpec().commandLine(), "--format html is not available"
-                    + " for " + last.commandSpec().name() + "; HTML reports are made by " + String.join(", ",
-                    Format.HTML_COMMANDS));
+        if (format != null && last.hasMatchedOption("--format") && format.getValue() instanceof Format f
+                && !f.madeBy(last.commandSpec().name())) {
+            throw new CommandLine.ParameterException(last.commandSpec().commandLine(), "--format " + f + " is not available"
+                    + " for " + last.commandSpec().name() + "; " + (f == Format.HTML ? "HTML reports are" : "SPICE netlists"
+                    + " are") + " made by " + String.join(", ", f.commands()));
         }
     }
 

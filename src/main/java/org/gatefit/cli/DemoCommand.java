@@ -68,7 +68,8 @@ final class DemoCommand implements Callable<Integer> {
                     catalog, "shortlist", "--switch", "OBP-12M016K4", "--side", "high", "--bus", "800", "--freq", "10",
                     "--edge", "120", "--drive", "18", "--drive-neg", "-4", "--rg", "2", "--rg-off", "1", "--loop", "10",
                     "--logic", "lvcmos-3v3", "--top", "5"));
-            worst = Math.max(worst, step("8. The full calculation sheet of the first choice", catalog, "explain",
+            worst = Math.max(worst, step("8. The full calculation sheet of the first choice, ending with its gate-drive"
+                    + " network", catalog, "explain",
                     "--driver", "ISY-5710S", "--switch", "OBP-12M016K4", "--side", "high", "--bus", "800", "--freq", "10",
                     "--edge", "120", "--drive", "18", "--drive-neg", "-4", "--rg", "2", "--rg-off", "1", "--loop", "10",
                     "--logic", "lvcmos-3v3"));

@@ -7,12 +7,14 @@ import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
 import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
+import org.gatefit.match.GateNetwork;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
 import org.gatefit.report.CompareReports;
+import org.gatefit.report.Format;
 import org.gatefit.report.GateDrive;
 import org.gatefit.report.MatchReports;
 import org.gatefit.report.Rendering;
@@ -25,7 +27,10 @@ import picocli.CommandLine.Option;
         header = "Show the full calculation sheet of one driver–switch pair.",
         description = {"Every rule with the figures and limits it compared and what would fix it; every computed"
             + " figure with its unit and formula; the recommended gate-resistor range and E24 value, the bootstrap"
-            + " capacitor for a high side, driver losses and switching-time estimates. Exit 1 when the pair fails.",
+            + " capacitor for a high side, driver losses and switching-time estimates; the gate-drive network (supply"
+            + " capacitors, gate resistors and their packages, turn-off diode, pull-down, clamps, bootstrap parts), each"
+            + " with its rating and why. --format spice writes the gate loop as a SPICE netlist. Exit 1 when the pair"
+            + " fails.",
             "",
             "With --driver given two to four times, the drivers are compared with the switch side by side (checks and"
             + " figures in columns, in HTML the gate waveforms overlaid); exit 1 when any of the pairs fails."})
@@ -62,9 +67,13 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             throw new UsageException("--driver: at most " + MAX_COMPARED + " drivers compared at once, got "
                     + driverPns.size());
         }
+        if (output.format == Format.SPICE && driverPns.size() > 1) {
+            throw new UsageException("--format spice: one --driver (a deck models one gate loop), got " + driverPns.size());
+        }
         OperatingPoint.Spec spec = point.spec(saved.row(ctx));
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
+        List<GateNetwork> networks = new ArrayList<>();
         ReportHeader header;
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
@@ -82,13 +91,21 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 PairResult r = Rules.evaluate(dr, sw, op, margins.margins());
                 rs.add(r);
                 drives.add(GateDrive.of(sw, r));
+                networks.add(GateNetwork.of(dr, sw, r));
             }
             header = header("explain", c, input(ReportHeader.Role.STAGES, saved.stages));
         }
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
             if (rs.size() == 1) {
-                MatchReports.explain(rs.get(0), drives.get(0), how, w);
+                try {
+                    MatchReports.explain(rs.get(0), drives.get(0), networks.get(0), how, w);
+                } catch (IllegalArgumentException e) {
+                    if (how.format() != Format.SPICE) {
+                        throw e;
+                    }
+                    throw new UsageException(e.getMessage()); // a deck needs C_iss, Q_gd, V_pl: nothing written
+                }
             } else {
                 CompareReports.render(rs, drives, how, w);
             }

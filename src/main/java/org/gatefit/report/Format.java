@@ -4,10 +4,23 @@ import java.util.Locale;
 
 /** Output formats of every command that prints results. */
 public enum Format {
-    TEXT, JSON, CSV, MARKDOWN, HTML;
+    TEXT, JSON, CSV, MARKDOWN, HTML, SPICE;
 
     /** The commands whose results have an HTML report. */
     public static final java.util.List<String> HTML_COMMANDS = java.util.List.of("explain", "shortlist", "check", "replace");
+
+    /** The commands that write a SPICE netlist (the gate loop of one pair). */
+    public static final java.util.List<String> SPICE_COMMANDS = java.util.List.of("explain");
+
+    /** The commands that make this format: every command for text, JSON, CSV and Markdown. */
+    public java.util.List<String> commands() {
+        return this == HTML ? HTML_COMMANDS : this == SPICE ? SPICE_COMMANDS : null;
+    }
+
+    /** Whether {@code command} makes this format. */
+    public boolean madeBy(String command) {
+        return commands() == null || commands().contains(command);
+    }
 
     /** The error of a renderer without an HTML report (the command line rejects the format before this). */
     static IllegalArgumentException noHtml(String command) {
@@ -15,7 +28,7 @@ public enum Format {
                 + String.join(", ", HTML_COMMANDS));
     }
 
-    /** Parses {@code text}, {@code json}, {@code csv}, {@code markdown} (also {@code md}) or {@code html}. */
+    /** Parses {@code text}, {@code json}, {@code csv}, {@code markdown} (also {@code md}), {@code html} or {@code spice}. */
     public static Format of(String s) {
         return switch (s.strip().toLowerCase(Locale.ROOT)) {
             case "text", "txt" -> TEXT;
@@ -23,7 +36,8 @@ public enum Format {
             case "csv" -> CSV;
             case "markdown", "md" -> MARKDOWN;
             case "html", "htm" -> HTML;
-            default -> throw new IllegalArgumentException("expected text, json, csv, markdown or html, got '" + s + "'");
+            case "spice", "cir" -> SPICE;
+            default -> throw new IllegalArgumentException("expected text, json, csv, markdown, html or spice, got '" + s + "'");
         };
     }
 

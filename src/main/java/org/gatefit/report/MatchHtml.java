@@ -124,7 +124,8 @@ final class MatchHtml {
 
     // ------------------------------------------------------------------ explain
 
-    static void explain(PairResult p, GateDrive g, ReportHeader header, Writer out) throws IOException {
+    static void explain(PairResult p, GateDrive g, org.gatefit.match.GateNetwork network, ReportHeader header, Writer out)
+            throws IOException {
         Html.begin(out, "Driver " + p.driver() + " with switch " + p.switchPart(), header);
         out.write("<h1>Driver " + Html.esc(p.driver()) + " with switch " + Html.esc(p.switchPart()) + "</h1>\n");
         out.write("<p class=\"summary\">Verdict " + Html.verdict(p.verdict()) + ", score " + Eng.num(p.score())
@@ -143,6 +144,9 @@ final class MatchHtml {
             out.write("<li>" + Html.esc(line.strip()) + "</li>\n");
         }
         out.write("</ul>\n");
+        if (network != null) {
+            out.write(NetworkReports.html(network));
+        }
         Html.end(out);
     }
 

@@ -8,6 +8,7 @@ import java.util.List;
 import org.gatefit.match.Check;
 import org.gatefit.match.Eng;
 import org.gatefit.match.Figure;
+import org.gatefit.match.GateNetwork;
 import org.gatefit.match.PairResult;
 import org.gatefit.match.Rule;
 import org.gatefit.match.Shortlist;
@@ -255,8 +256,18 @@ public final class MatchReports {
      * may be null.
      */
     public static void explain(PairResult p, GateDrive drive, Rendering how, Writer out) throws IOException {
+        explain(p, drive, null, how, out);
+    }
+
+    /**
+     * {@link #explain(PairResult, GateDrive, Rendering, Writer)} with the pair's gate-drive network
+     * (a section after the recommendations; JSON {@code network}); {@code network} may be null.
+     */
+    public static void explain(PairResult p, GateDrive drive, GateNetwork network, Rendering how, Writer out)
+            throws IOException {
         switch (how.format()) {
-            case HTML -> MatchHtml.explain(p, drive, how.header(), out);
+            case HTML -> MatchHtml.explain(p, drive, network, how.header(), out);
+            case SPICE -> GateSpice.write(p, drive, network, out);
             case JSON -> {
                 try (JsonGenerator g = PartsReport.generator(out)) {
                     g.writeStartObject();
@@ -270,6 +281,9 @@ public final class MatchReports {
                     MatchJson.point(g, p.point());
                     MatchJson.margins(g, p.margins());
                     MatchJson.waveforms(g, p, drive);
+                    if (network != null) {
+                        NetworkReports.json(g, network);
+                    }
                     g.writeStringField("caution", Caution.TEXT);
                     g.writeEndObject();
                 }
@@ -284,20 +298,25 @@ public final class MatchReports {
                 for (Figure f : p.figures()) {
                     csv.row("figure", f.name(), f.value(), f.unit(), f.label() + (f.estimated() ? " (estimate)" : ""));
                 }
+                if (network != null) {
+                    for (GateNetwork.Part x : network.parts()) {
+                        csv.row("network", x.role(), x.value(), x.unit(), x.rating() + "; " + x.why());
+                    }
+                }
                 csv.flush();
             }
             case TEXT -> {
                 how.head(out, false);
-                explainText(p, out, how.colour());
+                explainText(p, network, out, how.colour());
             }
             case MARKDOWN -> {
                 how.head(out, true);
-                explainMarkdown(p, out);
+                explainMarkdown(p, network, out);
             }
         }
     }
 
-    private static void explainText(PairResult p, Writer out, boolean colour) throws IOException {
+    private static void explainText(PairResult p, GateNetwork network, Writer out, boolean colour) throws IOException {
         String verdict = p.verdict().id().toUpperCase(java.util.Locale.ROOT);
         out.write("Driver " + p.driver() + " with switch " + p.switchPart() + ": "
                 + (colour ? Ansi.paint(p.verdict(), verdict) : verdict) + " (score " + Eng.num(p.score()) + ")\n");
@@ -321,10 +340,13 @@ public final class MatchReports {
         for (String line : recommendations(p).lines().toList()) {
             out.write((line.startsWith("  ") ? "  " + Wrap.wrap(line.strip(), WIDTH, 4, 2) : line) + "\n");
         }
+        if (network != null) {
+            out.write("\n" + NetworkReports.text(network, WIDTH));
+        }
         out.write(Wrap.wrap(Caution.TEXT, WIDTH, 0) + "\n");
     }
 
-    private static void explainMarkdown(PairResult p, Writer out) throws IOException {
+    private static void explainMarkdown(PairResult p, GateNetwork network, Writer out) throws IOException {
         out.write("## Driver " + Markdown.escape(p.driver()) + " with switch " + Markdown.escape(p.switchPart()) + ": **"
                 + p.verdict().id() + "** (score " + Eng.num(p.score()) + ")\n\n");
         context(out, true, p.point(), p.margins(), null);
@@ -339,8 +361,11 @@ public final class MatchReports {
                     f.label() + (f.estimated() ? " (estimate)" : "")));
         }
         out.write("\n### Figures\n\n" + t.markdown());
-        out.write("\n### Recommendations\n\n" + Markdown.escape(recommendations(p)).replace("\n", "\n\n") + "\n\n> "
-                + Caution.TEXT + "\n");
+        out.write("\n### Recommendations\n\n" + Markdown.escape(recommendations(p)).replace("\n", "\n\n") + "\n");
+        if (network != null) {
+            out.write(NetworkReports.markdown(network));
+        }
+        out.write("\n> " + Caution.TEXT + "\n");
     }
 
     /** Gate resistor, bootstrap and timing advice from the figures. */
