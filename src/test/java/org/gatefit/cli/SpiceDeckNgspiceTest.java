@@ -1,20 +1,17 @@
 package org.gatefit.cli;
 
+import org.gatefit.testsupport.Ngspice;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -37,7 +34,6 @@ import org.junit.jupiter.api.io.TempDir;
  * </ul>
  */
 class SpiceDeckNgspiceTest {
-    private static final String SKIP = "GATEFIT_SKIP_NGSPICE";
 
     @TempDir
     Path tmp;
@@ -49,34 +45,15 @@ class SpiceDeckNgspiceTest {
     }
 
     private static void requireNgspice() {
-        for (String p : System.getenv().getOrDefault("PATH", "/usr/bin").split(java.io.File.pathSeparator)) {
-            if (Files.isExecutable(Path.of(p, "ngspice"))) {
-                return;
-            }
-        }
-        String hint = "ngspice not found: install it with `apt-get update && apt-get install -y ngspice`";
-        if ("true".equalsIgnoreCase(System.getenv("CI")) && !"1".equals(System.getenv(SKIP))) {
-            fail(hint + ", or set " + SKIP + "=1 to skip this test");
-        }
-        Assumptions.abort(hint + "; SPICE deck check skipped outside CI");
+        Ngspice.require();
     }
 
     private String ngspice(String name, String deck) throws Exception {
-        Path cir = tmp.resolve(name + ".cir");
-        Files.writeString(cir, deck, StandardCharsets.US_ASCII);
-        Process p = new ProcessBuilder("ngspice", "-b", cir.toString()).redirectErrorStream(true).start();
-        byte[] out = p.getInputStream().readAllBytes();
-        assertTrue(p.waitFor(300, TimeUnit.SECONDS), "ngspice did not finish");
-        String text = new String(out, StandardCharsets.UTF_8);
-        assertEquals(0, p.exitValue(), text);
-        assertTrue(!text.toLowerCase(java.util.Locale.ROOT).contains("error"), text);
-        return text;
+        return Ngspice.run(tmp, name, deck, 300);
     }
 
     private static double meas(String output, String name) {
-        Matcher m = Pattern.compile("(?m)^\\s*" + name + "\\s*=\\s*([-+0-9.eE]+)").matcher(output);
-        assertTrue(m.find(), "no " + name + " in ngspice's output:\n" + output);
-        return Double.parseDouble(m.group(1));
+        return Ngspice.meas(output, name);
     }
 
     private double figure(List<String> args, String name) throws Exception {

@@ -1,18 +1,13 @@
 package org.gatefit.physics;
 
+import org.gatefit.testsupport.Ngspice;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
-import java.util.concurrent.TimeUnit;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -37,46 +32,17 @@ import org.junit.jupiter.api.io.TempDir;
  * are skipped with the install command elsewhere (as {@code HtmlBrowserTest} does for Chromium).
  */
 class NgspiceCrossCheckTest {
-    private static final String SKIP = "GATEFIT_SKIP_NGSPICE";
 
     @TempDir
     Path dir;
 
-    private static void requireNgspice() {
-        boolean found = false;
-        for (String p : System.getenv().getOrDefault("PATH", "/usr/bin").split(java.io.File.pathSeparator)) {
-            if (Files.isExecutable(Path.of(p, "ngspice"))) {
-                found = true;
-                break;
-            }
-        }
-        if (!found) {
-            String hint = "ngspice not found: install it with `apt-get update && apt-get install -y ngspice`";
-            if ("true".equalsIgnoreCase(System.getenv("CI")) && !"1".equals(System.getenv(SKIP))) {
-                fail(hint + ", or set " + SKIP + "=1 to skip this test");
-            }
-            Assumptions.abort(hint + "; ngspice cross-check skipped outside CI");
-        }
-    }
-
     /** Runs a netlist in batch mode and returns ngspice's output. */
     private String run(String name, String netlist) throws IOException, InterruptedException {
-        requireNgspice();
-        Path cir = dir.resolve(name + ".cir");
-        Files.writeString(cir, netlist, StandardCharsets.UTF_8);
-        Process p = new ProcessBuilder("ngspice", "-b", cir.toString()).redirectErrorStream(true).start();
-        byte[] out = p.getInputStream().readAllBytes();
-        assertTrue(p.waitFor(120, TimeUnit.SECONDS), "ngspice did not finish");
-        String text = new String(out, StandardCharsets.UTF_8);
-        assertEquals(0, p.exitValue(), text);
-        return text;
+        return Ngspice.run(dir, name, netlist, 120);
     }
 
-    /** The value of a {@code .meas} result in ngspice's output. */
     private static double meas(String output, String name) {
-        Matcher m = Pattern.compile("(?m)^\\s*" + name + "\\s*=\\s*([-+0-9.eE]+)").matcher(output);
-        assertTrue(m.find(), "no ." + name + " in ngspice's output:\n" + output);
-        return Double.parseDouble(m.group(1));
+        return Ngspice.meas(output, name);
     }
 
     private static String n(double v) {
