@@ -47,6 +47,14 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
     @Option(names = "--junit", paramLabel = "FILE", description = "Also write a JUnit-XML report (one test case per stage and rule).")
     Path junit;
 
+    @Option(names = "--network-bom", paramLabel = "FILE", description = "Also write each stage's gate-drive network"
+            + " (supply capacitors, gate resistors, diode, pull-down, clamps, bootstrap parts) as a BOM fragment the"
+            + " --bom option reads, designators derived from the stage ids.")
+    Path networkBom;
+
+    /** Each stage's gate-drive network, in sheet order (filled while the catalog is open, when asked for). */
+    private final List<org.gatefit.report.NetworkReports.StageNetwork> networks = new java.util.ArrayList<>();
+
     @Mixin
     MarginOptions margins;
 
@@ -76,6 +84,11 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
         if (junit != null) {
             try (Writer w = OutputOptions.open(ctx, junit)) {
                 CheckReports.junit(report, header, w);
+            }
+        }
+        if (networkBom != null) {
+            try (Writer w = OutputOptions.open(ctx, networkBom)) {
+                org.gatefit.report.NetworkReports.bom(networks, w);
             }
         }
         return report.failed() ? ExitCode.FAILED : ExitCode.OK;
@@ -111,10 +124,32 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
                 report = StageCheck.run(stagesFile.toString(), rows, b, new CatalogParts(c), m, bar::update);
             }
             warnImplausible(stagesFile.toString(), rows, report, c);
+            if (networkBom != null) {
+                networks(report, c);
+            }
             header = header("check", c, input(org.gatefit.report.ReportHeader.Role.STAGES, stagesFile),
                     input(org.gatefit.report.ReportHeader.Role.BOM, bomFile),
                     input(org.gatefit.report.ReportHeader.Role.MAP_FILE, sheet == null ? null : sheet.mapFile));
             return report;
+        }
+    }
+
+    /** Each resolved stage's gate-drive network, from its parts and its figures (GateNetwork, one place). */
+    private void networks(StageCheck.Report report, Catalog c) throws IOException {
+        for (StageCheck.StageResult s : report.results()) {
+            if (s.point() == null) {
+                continue;
+            }
+            java.util.Optional<Row> d = c.get(Kind.DRIVER, s.driver());
+            java.util.Optional<Row> sw = c.get(Kind.SWITCH, s.switchPart());
+            if (d.isEmpty() || sw.isEmpty()) {
+                continue;
+            }
+            org.gatefit.match.PairResult pair = new org.gatefit.match.PairResult(s.driver(), s.switchPart(), s.verdict(),
+                    s.score(), s.checks(), s.figures(), s.point(), report.margins(), Double.NaN);
+            networks.add(new org.gatefit.report.NetworkReports.StageNetwork(s.stage(), s.switchRef(), s.line(),
+                    org.gatefit.match.GateNetwork.of(org.gatefit.match.DriverPart.of(d.get()), SwitchPart.of(sw.get()),
+                    pair)));
         }
     }
 

@@ -22,7 +22,7 @@ import picocli.CommandLine.Model.PositionalParamSpec;
  */
 final class FileArgs {
     /** Options naming a file the command writes. */
-    static final Set<String> OUTPUTS = Set.of("--output", "--junit", "--skip-invalid");
+    static final Set<String> OUTPUTS = Set.of("--output", "--junit", "--network-bom", "--skip-invalid");
     /** Options and parameters (by label) naming a file the command reads. */
     static final Set<String> INPUTS = Set.of("--stages", "--bom", "FILE", "STAGES.csv", "--map-file");
 

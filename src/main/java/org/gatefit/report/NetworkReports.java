@@ -11,7 +11,7 @@ import org.gatefit.match.GateNetwork;
  * HTML table and the JSON {@code network} list, each inside a report that ends with the caution
  * ({@link Caution}), which covers these parts too.
  */
-final class NetworkReports {
+public final class NetworkReports {
     /** The section's title. */
     static final String TITLE = "Gate-drive network";
     /** What the values are per, under the title. */
@@ -90,5 +90,39 @@ final class NetworkReports {
             g.writeString(note);
         }
         g.writeEndArray();
+    }
+
+    /** A stage's network for the BOM fragment: the stage, its switch cell as written, its sheet line. */
+    public record StageNetwork(String stage, String switchRef, long line, GateNetwork network) {
+    }
+
+    /**
+     * The networks of a check's stages as a BOM fragment gatefit's own BOM reader reads back
+     * ({@code Designator}, {@code Quantity}, {@code Manufacturer Part Number}, {@code Description},
+     * {@code DNP}): one line per part. Designators are derived from the stage's switch designator —
+     * R, C or D (resistor, capacitor, diode or clamp), the switch's, then A, B, C… ({@code RQ8A} is the
+     * first resistor at Q8) — or, when the switch cell is not a designator, from the stage's sheet line
+     * ({@code RL12A}), so they fit the reader's designator form and never clash. The part number is left
+     * for the engineer to choose ({@code choose: …} with the value); the description carries the stage,
+     * role, value and rating. Parts a driver output shares (its supply capacitors) are listed per stage.
+     */
+    public static void bom(List<StageNetwork> stages, java.io.Writer out) throws IOException {
+        Csv csv = Csv.start(out, CsvStyle.COMMA);
+        csv.row("Designator", "Quantity", "Manufacturer Part Number", "Description", "DNP");
+        for (StageNetwork s : stages) {
+            String base = s.switchRef() != null && s.switchRef().strip().matches("[A-Za-z]+\\d+") ? s.switchRef().strip()
+                    .toUpperCase(java.util.Locale.ROOT) : "L" + s.line();
+            java.util.Map<Character, Integer> count = new java.util.HashMap<>();
+            for (GateNetwork.Part p : s.network().parts()) {
+                char letter = p.unit().equals("F") ? 'C' : p.unit().equals("Ω") ? 'R' : 'D';
+                int k = count.merge(letter, 1, Integer::sum);
+                if (k > 26) {
+                    throw new IllegalStateException("more than 26 parts of one kind in a network: " + s.stage());
+                }
+                csv.row(String.valueOf(letter) + base + (char) ('A' + k - 1), 1, "choose: " + value(p), s.stage() + " "
+                        + p.role() + " " + value(p) + "; " + p.rating(), "no");
+            }
+        }
+        csv.flush();
     }
 }
