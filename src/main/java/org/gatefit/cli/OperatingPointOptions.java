@@ -82,6 +82,14 @@ final class OperatingPointOptions {
                     + " turns on at zero voltage (default: yes, printed).")
     String bridge;
 
+    @Option(names = "--power-loop", paramLabel = "nH",
+            description = "Power commutation loop inductance; with --load it gives the switch-node overshoot the"
+                    + " high-side rating must carry (default: none, the offset margin stands for it).")
+    String powerLoop;
+
+    @Option(names = "--load", paramLabel = "A", description = "Load current the switch turns off (for the overshoot).")
+    String load;
+
     @Option(names = "--tj", paramLabel = "°C",
             description = "Junction temperature of the hot corner, °C (default 125): the threshold falls and the driver's"
                     + " output resistance rises with it; rules that depend on them judge at 25 °C and here, the worse decides.")
@@ -102,7 +110,7 @@ final class OperatingPointOptions {
         {"--drive-neg", "v_drive_neg_v"}, {"--logic", "logic"}, {"--v-oh", "v_oh_v"}, {"--v-ol", "v_ol_v"},
         {"--pwm", "pwm_sense"}, {"--rg", "r_g_ohm"}, {"--rg-off", "r_g_off_ohm"}, {"--duty-max", "duty_max"},
         {"--parallel", "parallel"}, {"--loop", "loop_nh"}, {"--v-f-boot", "v_f_boot_v"}, {"--r-boot", "r_boot_ohm"},
-        {"--tj", "t_j_c"}, {"--bridge", "bridge"}};
+        {"--tj", "t_j_c"}, {"--bridge", "bridge"}, {"--power-loop", "power_loop_nh"}, {"--load", "i_load_a"}};
 
     /**
      * The values a shell may complete for an operating-point option: the choices of its stage-sheet
@@ -141,7 +149,7 @@ final class OperatingPointOptions {
     OperatingPoint.Spec spec(Row stage) throws BadValueException, UsageException {
         // Option, stage-sheet column, value as typed: one row each, so errors name the option.
         String[] typed = {side, bus, freq, edge, drive, driveNeg, logic, vOh, vOl, pwm, rg, rgOff, dutyMax, parallel, loop,
-            vfBoot, rBoot, tj, bridge};
+            vfBoot, rBoot, tj, bridge, powerLoop, load};
         String[][] cells = new String[COLUMNS.length][];
         for (int i = 0; i < COLUMNS.length; i++) {
             cells[i] = new String[] {COLUMNS[i][0], COLUMNS[i][1], typed[i]};

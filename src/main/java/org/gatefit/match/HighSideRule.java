@@ -21,8 +21,9 @@ import org.gatefit.match.Check.Comparison;
  *       unknown is unknown when the dv/dt is known (a level shifter's dv/dt immunity is judged
  *       where the catalog gives it).</li>
  * </ul>
- * No switch-node overshoot is estimated yet (there is no power-loop inductance among the inputs),
- * so the offset margin is the overshoot allowance of both the offset and the working-voltage check.
+ * The switch-node overshoot at turn-off is estimated where the stage gives its power-loop inductance
+ * and load current (L·I/t_fall, {@link org.gatefit.physics.SwitchNode}) and added to the bus; the
+ * offset margin then stands for what the estimate leaves out, and alone for the overshoot otherwise.
  */
 final class HighSideRule implements PairRule {
     enum Why implements Reason { LOW_SIDE, CANNOT_FLOAT, NO_ISOLATION, NO_BUS_ISOLATED, ISOLATION_BELOW_BUS, ISOLATION_THIN,
@@ -36,9 +37,14 @@ final class HighSideRule implements PairRule {
      */
     static final double WITHSTAND_ONLY_BUS = 60;
 
-    /** The peak the isolation or offset sees: the bus with the overshoot allowance (offset margin). */
+    /**
+     * The peak the isolation or offset must carry: the bus plus the switch-node overshoot where it is
+     * estimated ({@code power_loop_nh}, {@code i_load_a}: L·I/t_fall), with the offset margin on top
+     * (the margin alone stands for the overshoot when it is not estimated).
+     */
     private static double stress(PairFigures f) {
-        return f.op().bus() * (1 + f.m().offset());
+        double os = f.nodeOvershoot();
+        return (f.op().bus() + (Double.isNaN(os) ? 0 : os)) * (1 + f.m().offset());
     }
 
     @Override
@@ -152,7 +158,10 @@ final class HighSideRule implements PairRule {
         String dvdt = slew > 0 ? Eng.slew(slew) + (Double.isNaN(f.op().dvdt()) ? " (estimated, fastest edge and corner)" : "") : "";
         String cmtiOk = !Double.isNaN(cmti) && slew > 0 ? "; CMTI " + Eng.slew(cmti) + " against the " + dvdt
                 + " switch node" : "";
-        String overshoot = "the " + Eng.of(bus, "V") + " bus with " + Eng.pct(f.m().offset()) + " for overshoot";
+        String overshoot = Double.isNaN(f.nodeOvershoot()) ? "the " + Eng.of(bus, "V") + " bus with "
+                + Eng.pct(f.m().offset()) + " for overshoot" : "the " + Eng.of(bus, "V") + " bus plus "
+                + Eng.of(f.nodeOvershoot(), "V") + " turn-off overshoot (L·I/t_fall) with " + Eng.pct(f.m().offset())
+                + " margin";
         return switch ((Why) why) {
             case LOW_SIDE -> new Worded("low side: the source sits at ground, no floating output needed");
             case CANNOT_FLOAT -> new Worded("a " + d.topology() + " driver cannot float on the switch node of a high-side"
@@ -185,11 +194,15 @@ final class HighSideRule implements PairRule {
                     + Eng.of(rating, "V") + " offset rating");
             case OFFSET_BELOW_BUS -> new Worded("offset rating " + Eng.of(rating, "V") + " is below the " + Eng.of(bus, "V")
                     + " bus — pick a driver rated ≥ " + Eng.of(need, "V"), cmp);
-            case OFFSET_THIN -> new Worded("offset rating " + Eng.of(rating, "V") + " leaves less than "
-                    + Eng.pct(f.m().offset()) + " above the " + Eng.of(bus, "V") + " bus for switch-node overshoot — pick a"
-                    + " driver rated ≥ " + Eng.of(need, "V") + " or measure the overshoot", cmp);
+            case OFFSET_THIN -> new Worded(Double.isNaN(f.nodeOvershoot()) ? "offset rating " + Eng.of(rating, "V")
+                    + " leaves less than " + Eng.pct(f.m().offset()) + " above the " + Eng.of(bus, "V") + " bus for"
+                    + " switch-node overshoot — pick a driver rated ≥ " + Eng.of(need, "V") + " or measure the overshoot"
+                    : "offset rating " + Eng.of(rating, "V") + " is short of " + overshoot + " (" + Eng.of(need, "V")
+                    + ") — pick a driver rated ≥ " + Eng.of(need, "V") + ", or shorten the power loop", cmp);
             case OFFSET_OK -> new Worded("offset rating " + Eng.of(rating, "V") + " covers the "
-                    + Eng.of(bus, "V") + " bus with " + Eng.pct(rating / bus - 1) + " to spare" + cmtiOk, cmp);
+                    + Eng.of(bus, "V") + " bus with " + Eng.pct(rating / bus - 1) + " to spare"
+                    + (Double.isNaN(f.nodeOvershoot()) ? "" : " (" + overshoot + ": " + Eng.of(need, "V") + ")") + cmtiOk,
+                    cmp);
             case CMTI_BELOW -> new Worded("the switch node slews at " + dvdt + ", faster than this driver's CMTI "
                     + Eng.slew(cmti) + ", so the floating output may glitch (false turn-on, shoot-through) — pick a"
                     + " driver with CMTI ≥ " + Eng.slew(slew * f.m().cmti()) + " or slow the edge (larger R_g)", cmp);

@@ -37,13 +37,16 @@ import org.gatefit.physics.LogicFamily;
  * @param twin       the other switch of the half-bridge, when its edge is known apart from this pair
  *                   ({@code check} knows both stages of a bridge), or null: the twin is taken to be
  *                   the same pair at the same point
+ * @param powerLoop  power commutation loop inductance, H (NaN: unknown, the offset margin stands for the overshoot)
+ * @param iLoad      load current the switch turns off, A (NaN unknown)
  * @param tj         junction temperature of the hot corner, °C: the rules that depend on temperature
  *                   judge at 25 °C (where datasheets specify) and here, and the worse decides
  */
 public record OperatingPoint(boolean highSide, double bus, double fSw, double edge, double vDrive, double vDriveNeg,
                              LogicFamily logic, double vOh, double vOl, double vOhMax, boolean activeHigh, double rG,
                              double rGOff, double dutyMax, int parallel, double loop, double diodeDrop, double rBoot,
-                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed, boolean bridge, Twin twin, double tj) {
+                             double dvdt, boolean bootAssumed, List<String> assumed, int channelsUsed, boolean bridge, Twin twin, double powerLoop,
+                             double iLoad, double tj) {
 
     /**
      * The other switch of a half-bridge whose turn-on is what can lift this switch's off gate: its
@@ -141,6 +144,10 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
         public Boolean bridge;
         /** The twin's edge when known apart from this pair (set by {@code check} for a half-bridge), or null. */
         public Twin twin;
+        /** Power commutation loop inductance, H (null unknown). */
+        public Double powerLoop;
+        /** Load current turned off, A (null unknown). */
+        public Double iLoad;
 
         /**
          * What a stage-sheet row (or the same columns typed on the command line) gives; empty
@@ -173,6 +180,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.diodeDrop = si(r, "v_f_boot_v");
             s.rBoot = si(r, "r_boot_ohm");
             s.tj = si(r, "t_j_c");
+            s.powerLoop = si(r, "power_loop_nh");
+            s.iLoad = si(r, "i_load_a");
             if (r.text("bridge") != null) {
                 s.bridge = r.text("bridge").equals("yes");
             }
@@ -209,6 +218,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             s.tj = tj;
             s.bridge = bridge;
             s.twin = twin;
+            s.powerLoop = powerLoop;
+            s.iLoad = iLoad;
             return s;
         }
 
@@ -296,7 +307,8 @@ public record OperatingPoint(boolean highSide, double bus, double fSw, double ed
             return new OperatingPoint(hs, bus == null ? Double.NaN : bus, fSw, e, on, off, fam, oh, ol, ohMax,
                     activeHigh == null || activeHigh, rg, rgOff, dutyMax == null ? Double.NaN : dutyMax,
                     parallel == null ? 1 : parallel, l, vf, rb, dvdt == null ? Double.NaN : dvdt,
-                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed, bridge == null || bridge, twin, t);
+                    diodeDrop == null || rBoot == null, a, channelsUsed == null ? 0 : channelsUsed, bridge == null || bridge, twin,
+                    powerLoop == null ? Double.NaN : powerLoop, iLoad == null ? Double.NaN : iLoad, t);
         }
     }
 }

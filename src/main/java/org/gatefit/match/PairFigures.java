@@ -6,6 +6,7 @@ import org.gatefit.physics.DvDt;
 import org.gatefit.physics.GateLoop;
 import org.gatefit.physics.GatePower;
 import org.gatefit.physics.JunctionTemperature;
+import org.gatefit.physics.SwitchNode;
 import org.gatefit.physics.SwitchingTimes;
 
 /**
@@ -67,6 +68,7 @@ final class PairFigures {
     private double ringZetaOn;
     private double ringZetaOff;
     private double ringCornerC;
+    private double nodeOvershoot;
 
     private PairFigures() {
     }
@@ -164,6 +166,22 @@ final class PairFigures {
             }
         }
 
+        // Switch-node overshoot at turn-off: the load current through the power loop, L·I/t_fall, with the
+        // fastest fall — the fast corner's sink and the threshold nearest the plateau (V_th,max) — or an
+        // IGBT's datasheet fall time (its tail) where given.
+        double nodeOs = Double.NaN;
+        if (op.powerLoop() >= 0 && op.iLoad() >= 0 && q.plateau && !Double.isNaN(s.cIss())) {
+            double vTh = !Double.isNaN(s.vThMax()) ? s.vThMax() : s.vThMin();
+            double fall = Double.NaN;
+            if (s.technology() == Technology.IGBT && !Double.isNaN(s.ratings().tF())) {
+                fall = s.ratings().tF();
+            } else if (vTh > op.vDriveNeg() && vTh < s.vPlateau()) {
+                fall = SwitchingTimes.currentFall(kFast * rSnk + (op.rGOff() + rInt) / n, n * s.cIss(), vTh,
+                        s.vPlateau(), op.vDriveNeg());
+            }
+            nodeOs = fall > 0 ? SwitchNode.overshoot(op.powerLoop(), op.iLoad(), fall) : Double.NaN;
+        }
+
         // Gate ringing: the series R-L-C step at the fast corner (least damping).
         double zOn = Double.NaN;
         double zOff = Double.NaN;
@@ -258,6 +276,7 @@ final class PairFigures {
         this.ringZetaOn = zOn;
         this.ringZetaOff = zOff;
         this.ringCornerC = Double.isNaN(peak) ? Double.NaN : fastC;
+        this.nodeOvershoot = nodeOs;
     }
 
     /** Whether the edges' plateau times are computed: a plateau to cross and positive resistances on and off. */
@@ -506,6 +525,11 @@ final class PairFigures {
 
     double ringZetaOff() {
         return ringZetaOff;
+    }
+
+    /** Switch-node overshoot above the bus at turn-off, V (NaN: not estimated). */
+    double nodeOvershoot() {
+        return nodeOvershoot;
     }
 
     /** Junction temperature of the fast corner the ringing was judged at, °C. */

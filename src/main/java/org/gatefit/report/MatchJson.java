@@ -86,6 +86,8 @@ final class MatchJson {
         number(g, "r_boot_ohm", p.rBoot());
         number(g, "dv_dt_v_per_ns", p.dvdt() * 1e-9);
         g.writeBooleanField("bridge", p.bridge());
+        number(g, "power_loop_h", p.powerLoop());
+        number(g, "i_load_a", p.iLoad());
         number(g, "t_j_c", p.tj());
         g.writeEndObject();
         g.writeArrayFieldStart("assumed");
@@ -178,6 +180,9 @@ final class MatchJson {
         sb.append(", loop ").append(Eng.of(p.loop(), "H"));
         if (!Double.isNaN(p.dvdt())) {
             sb.append(", dv/dt ").append(Eng.slew(p.dvdt()));
+        }
+        if (!Double.isNaN(p.powerLoop()) || !Double.isNaN(p.iLoad())) {
+            sb.append(", power loop ").append(Eng.of(p.powerLoop(), "H")).append(" at ").append(Eng.of(p.iLoad(), "A"));
         }
         sb.append(p.bridge() ? ", in a bridge" : ", single switch");
         sb.append(", hot corner ").append(Eng.num(p.tj())).append(" °C");

@@ -33,7 +33,7 @@ class SavedPointCliTest {
         {"edge_ns", "--edge"}, {"v_drive_v", "--drive"}, {"v_drive_neg_v", "--drive-neg"}, {"logic", "--logic"},
         {"v_oh_v", "--v-oh"}, {"v_ol_v", "--v-ol"}, {"pwm_sense", "--pwm"}, {"r_g_ohm", "--rg"},
         {"r_g_off_ohm", "--rg-off"}, {"duty_max", "--duty-max"}, {"parallel", "--parallel"}, {"loop_nh", "--loop"},
-        {"bridge", "--bridge"}, {"t_j_c", "--tj"}};
+        {"bridge", "--bridge"}, {"t_j_c", "--tj"}, {"power_loop_nh", "--power-loop"}, {"i_load_a", "--load"}};
 
     @TempDir
     Path tmp;

@@ -358,6 +358,21 @@ class RulesTest {
                         "low-side", "pick a high-side, half-bridge or isolated driver"),
                 row(Verdict.UNKNOWN, "v_offset_max_v unknown", S0, d -> d.vOffsetMax = Double.NaN, HIGH,
                         "v_offset_max_v"),
+                // Switch-node overshoot L·I/t_fall (plain circuit theory, v = L·di/dt): the current falls as
+                // the gate goes from the 5 V plateau to V_th,max 4 V through 1 + 2 + 1 Ω and C_iss 3 nF at
+                // 25 °C (the fastest corner): 12 ns · ln(5/4) = 2.678 ns (REFERENCES §1's RC form).
+                row(Verdict.PASS, "100 V bus, 2 nH, 10 A: 20 nV·s / 2.678 ns = 7.47 V; (100 + 7.47)·1.2 = 129 V ≤ 200 V",
+                        S0, D0, HIGH.andThen(o -> {
+                            o.bus = 100.0;
+                            o.powerLoop = 2e-9;
+                            o.iLoad = 10.0;
+                        }), "7.47 V", "overshoot"),
+                row(Verdict.WARN, "150 V bus, 5 nH, 10 A: 18.7 V; (150 + 18.7)·1.2 = 202 V > 200 V ≥ the bus", S0, D0,
+                        HIGH.andThen(o -> {
+                            o.bus = 150.0;
+                            o.powerLoop = 5e-9;
+                            o.iLoad = 10.0;
+                        }), "18.7 V", "202 V"),
                 row(Verdict.UNKNOWN, "bus not given", S0, D0, HIGH.andThen(o -> o.bus = null), "--bus"),
                 // Isolated: V_IORM (peak working voltage, IEC 60747-17's definition; REFERENCES §9) against the
                 // bus plus the 20 % overshoot allowance (offset margin, common practice, no source). Turn-on

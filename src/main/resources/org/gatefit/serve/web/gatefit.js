@@ -88,7 +88,8 @@ const G = {
     ['v-ol', 'V_OL', 'V'], ['pwm', 'PWM sense', 'active-high|active-low'], ['rg', 'R_g on', '\u03A9'],
     ['rg-off', 'R_g off', '\u03A9'], ['duty-max', 'duty max', '0..1'], ['parallel', 'parallel', 'n'],
     ['loop', 'gate loop', 'nH'], ['v-f-boot', 'bootstrap diode', 'V'], ['r-boot', 'bootstrap R', '\u03A9'],
-    ['dvdt', 'dv/dt', 'V/ns'], ['tj', 'hot corner', '\u00B0C'], ['bridge', 'in a bridge', 'yes|no']],
+    ['dvdt', 'dv/dt', 'V/ns'], ['tj', 'hot corner', '\u00B0C'], ['bridge', 'in a bridge', 'yes|no'],
+    ['power-loop', 'power loop', 'nH'], ['load', 'load current', 'A']],
 
   /**
    * A stage's operating point (the JSON "operating_point" of check and explain) as the explain
@@ -102,7 +103,8 @@ const G = {
       ['pwm', op.pwm_sense], ['rg', n(op.r_g_ohm)], ['rg-off', n(op.r_g_off_ohm)], ['duty-max', n(op.duty_max)],
       ['parallel', n(op.parallel)], ['loop', n(op.loop_h * 1e9)], ['v-f-boot', n(op.v_f_boot_v)],
       ['r-boot', n(op.r_boot_ohm)], ['dvdt', n(op.dv_dt_v_per_ns)], ['tj', n(op.t_j_c)],
-      ['bridge', op.bridge === undefined ? null : (op.bridge ? 'yes' : 'no')]];
+      ['bridge', op.bridge === undefined ? null : (op.bridge ? 'yes' : 'no')],
+      ['power-loop', n(op.power_loop_h * 1e9)], ['load', n(op.i_load_a)]];
     if (op.logic) out.push(['logic', op.logic]);
     else out.push(['v-oh', n(op.v_oh_v)], ['v-ol', n(op.v_ol_v)]);
     return out.filter(([, v]) => v !== null && v !== undefined && v !== 'NaN');
