@@ -104,7 +104,8 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                     if (how.format() != Format.SPICE) {
                         throw e;
                     }
-                    throw new UsageException(e.getMessage()); // a deck needs C_iss, Q_gd, V_pl: nothing written
+                    OutputFile.abandon(w); // a deck needs C_iss, Q_gd, V_pl: nothing written, a file kept as it was
+                    throw new UsageException(e.getMessage());
                 }
             } else {
                 CompareReports.render(rs, drives, how, w);

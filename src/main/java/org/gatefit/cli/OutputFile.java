@@ -128,6 +128,16 @@ final class OutputFile extends Writer {
         }
     }
 
+    /**
+     * Gives up the file: when {@code w} is an output file, closing it removes the temporary file and
+     * leaves the target as it was (a command that refuses after opening its output writes nothing).
+     */
+    static void abandon(Writer w) {
+        if (w instanceof OutputFile f) {
+            f.failed = true;
+        }
+    }
+
     private WriteFailedException failure(IOException e) {
         failed = true;
         return e instanceof WriteFailedException w ? w : new WriteFailedException(shown, e);

@@ -103,6 +103,30 @@ class ExplainNetworkCliTest {
         assertTrue(help.out().contains("Output format: text, json, csv, markdown (default"), help.out());
     }
 
+    /**
+     * A deck needs C_iss, Q_gd and the plateau: without C_iss it is a usage error naming what is
+     * missing, and a file given with --output keeps what it held (nothing lost on a refusal).
+     */
+    @Test
+    void aSwitchWithoutCissGetsNoDeckAndTheOutputFileIsKept() throws Exception {
+        String[] fixture = CheckFixture.SWITCHES.strip().split("\n");
+        String heading = fixture[0];
+        String[] cells = fixture[1].split(",", -1);
+        java.util.List<String> cols = java.util.List.of(heading.split(","));
+        cells[cols.indexOf("c_iss_pf")] = "";
+        cells[cols.indexOf("part_number")] = "TST-NOCISS";
+        Path sw = CheckFixture.write(tmp.resolve("sw.csv"), heading + "\n" + String.join(",", cells) + "\n");
+        Path dr = CheckFixture.write(tmp.resolve("dr.csv"), CheckFixture.DRIVERS);
+        Path cat = tmp.resolve("cat-nociss");
+        assertEquals(ExitCode.OK, CliRun.on(cat, "import", sw.toString(), dr.toString()).exit());
+        Path kept = CheckFixture.write(tmp.resolve("deck.cir"), "* the user's own deck\n");
+        CliRun r = CliRun.on(cat, "explain", "--driver", "TST-DRV1", "--switch", "TST-NOCISS", "--freq", "20",
+                "--format", "spice", "--output", kept.toString());
+        assertEquals(ExitCode.USAGE, r.exit(), r.dump());
+        assertTrue(r.err().toLowerCase(java.util.Locale.ROOT).contains("c_iss"), r.dump());
+        assertEquals("* the user's own deck\n", java.nio.file.Files.readString(kept), "the file keeps what it held");
+    }
+
     @Test
     void theDemoShowsTheNetworkOfItsFirstChoice() {
         String out = CliRun.on(catalog, "demo").out();
