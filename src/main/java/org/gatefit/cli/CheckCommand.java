@@ -80,15 +80,18 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
         }
         try (Writer w = output.open(ctx)) {
             CheckReports.render(report, output.rendering(ctx, header), w);
+            OutputFile.finish(w);
         }
         if (junit != null) {
             try (Writer w = OutputOptions.open(ctx, junit)) {
                 CheckReports.junit(report, header, w);
+                OutputFile.finish(w);
             }
         }
         if (networkBom != null) {
             try (Writer w = OutputOptions.open(ctx, networkBom)) {
                 org.gatefit.report.NetworkReports.bom(networks, w);
+                OutputFile.finish(w);
             }
         }
         return report.failed() ? ExitCode.FAILED : ExitCode.OK;

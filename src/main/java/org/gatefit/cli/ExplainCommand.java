@@ -104,12 +104,13 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                     if (how.format() != Format.SPICE) {
                         throw e;
                     }
-                    OutputFile.abandon(w); // a deck needs C_iss, Q_gd, V_pl: nothing written, a file kept as it was
+                    // a deck needs C_iss, Q_gd, V_pl: nothing written, a file kept as it was (never finished)
                     throw new UsageException(e.getMessage());
                 }
             } else {
                 CompareReports.render(rs, drives, how, w);
             }
+            OutputFile.finish(w);
         }
         return rs.stream().anyMatch(r -> r.verdict() == Verdict.FAIL) ? ExitCode.FAILED : ExitCode.OK;
     }

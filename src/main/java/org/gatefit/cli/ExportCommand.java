@@ -48,6 +48,7 @@ final class ExportCommand extends CatalogCommand implements Callable<Integer> {
                 } else {
                     PartsReport.json(rows, w);
                 }
+                OutputFile.finish(w);
             }
         }
         return ExitCode.OK;

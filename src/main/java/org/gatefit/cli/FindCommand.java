@@ -63,6 +63,7 @@ final class FindCommand extends CatalogCommand implements Callable<Integer> {
             }
             try (Writer w = output.open(ctx)) {
                 PartsReport.list(rows, output.rendering(ctx, null), w);
+                OutputFile.finish(w);
             }
         }
         return ExitCode.OK;

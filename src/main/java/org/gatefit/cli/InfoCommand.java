@@ -23,6 +23,7 @@ final class InfoCommand extends CatalogCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         try (Catalog c = Catalog.openIfPresent(catalogDir()); Writer w = output.open(ctx)) {
             CatalogReports.info(c.directory(), c.contentSha256(), c.counts(), c.history(), output.rendering(ctx, null), w);
+            OutputFile.finish(w);
         }
         return ExitCode.OK;
     }

@@ -25,6 +25,7 @@ final class OutputFile extends Writer {
     private final Path tmp;
     private final String shown;
     private boolean failed;
+    private boolean finished;
     private boolean closed;
 
     private OutputFile(Writer out, Path target, Path tmp, String shown) {
@@ -103,7 +104,21 @@ final class OutputFile extends Writer {
         }
     }
 
-    /** Finishes the file: the temporary file takes the target's place, unless a write failed (then it is removed). */
+    /**
+     * Marks {@code w} written completely: only then does closing it move the file over the target. A
+     * command calls it as the last statement of its write, so an exception on the way (a refusal, a
+     * bug) leaves an earlier file of that name as it was. No effect on standard output.
+     */
+    static void finish(Writer w) {
+        if (w instanceof OutputFile f) {
+            f.finished = true;
+        }
+    }
+
+    /**
+     * Finishes the file: the temporary file takes the target's place when the command marked it
+     * written ({@link #finish}) and no write failed; otherwise it is removed.
+     */
     @Override
     public void close() throws IOException {
         if (closed) {
@@ -112,7 +127,7 @@ final class OutputFile extends Writer {
         closed = true;
         try {
             out.close();
-            if (!failed && tmp != null) {
+            if (!failed && finished && tmp != null) {
                 try {
                     Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
                 } catch (AtomicMoveNotSupportedException e) {
@@ -125,16 +140,6 @@ final class OutputFile extends Writer {
             if (tmp != null) {
                 Files.deleteIfExists(tmp);
             }
-        }
-    }
-
-    /**
-     * Gives up the file: when {@code w} is an output file, closing it removes the temporary file and
-     * leaves the target as it was (a command that refuses after opening its output writes nothing).
-     */
-    static void abandon(Writer w) {
-        if (w instanceof OutputFile f) {
-            f.failed = true;
         }
     }
 

@@ -124,6 +124,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
             ReplaceReports.render(r, how, w);
+            OutputFile.finish(w);
         }
         return ExitCode.OK;
     }

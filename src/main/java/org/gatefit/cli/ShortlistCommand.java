@@ -90,6 +90,7 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
             Rendering how = output.rendering(ctx, header("shortlist", c, input(ReportHeader.Role.STAGES, saved.stages)));
             try (Writer w = output.open(ctx)) {
                 MatchReports.shortlist(r, how, w);
+                OutputFile.finish(w);
             }
         }
         return ExitCode.OK;

@@ -42,6 +42,7 @@ final class ShowCommand extends CatalogCommand implements Callable<Integer> {
             }
             try (Writer w = output.open(ctx)) {
                 PartsReport.sheet(found.get(0), output.rendering(ctx, null), w);
+                OutputFile.finish(w);
             }
         }
         return ExitCode.OK;

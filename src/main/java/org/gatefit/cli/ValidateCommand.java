@@ -75,6 +75,7 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
             }
             try (Writer w = output.open(ctx)) {
                 w.write(org.gatefit.catalog.Mapping.json(headings, missing));
+                OutputFile.finish(w);
             }
             if (!missing.isEmpty()) {
                 ctx.err.println("note: no heading names the required column" + (missing.size() > 1 ? "s " : " ")
@@ -85,6 +86,7 @@ final class ValidateCommand extends CatalogCommand implements Callable<Integer> 
         }
         try (Writer w = output.open(ctx)) {
             CatalogReports.validation(results, output.rendering(ctx, null), w);
+            OutputFile.finish(w);
         }
         return results.stream().allMatch(SheetReader.Summary::clean) ? ExitCode.OK : ExitCode.BAD_DATA;
     }
