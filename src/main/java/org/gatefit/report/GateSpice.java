@@ -115,7 +115,8 @@ final class GateSpice {
         d.append("* Driver: pulse source behind its source resistance while high, its sink resistance while low (a\n"
                 + "* behavioural resistor; ideal diodes with a small emission coefficient do the same but slow the simulation)\n");
         d.append("Vdrv drv 0 PULSE({voff} {von} ").append(num(DELAY)).append(" 1p 1p {ton} ").append(num(4 * ton)).append(")\n");
-        d.append("Bdrv drv out I=(V(drv)-V(out))/(V(drv) > {(von+voff)/2} ? {rsrc*kdrv} : {rsnk*kdrv})\n");
+        // The unit step u() rather than "? :": ngspice reads it (SpiceDeckNgspiceTest) and, from memory, so does LTspice.
+        d.append("Bdrv drv out I=(V(drv)-V(out))/({rsnk*kdrv}+({rsrc*kdrv}-{rsnk*kdrv})*u(V(drv)-{(von+voff)/2}))\n");
         d.append("Lloop out gx {lloop}\n");
         d.append("* Gate-drive network (GateNetwork; explain's section)\n");
         // The operating point's resistors, which the figures were computed with; the network's parts
