@@ -48,7 +48,7 @@ public final class Eng {
      * significant digits: dv/dt and CMTI are said this way everywhere.
      */
     public static String slew(double voltsPerSecond) {
-        return num(voltsPerSecond * 1e-9) + " V/ns";
+        return of(voltsPerSecond * 1e-9, "V/ns");
     }
 
     /** Three significant digits, trailing zeros dropped; "unknown" for NaN, ∞ for an unbounded value. */

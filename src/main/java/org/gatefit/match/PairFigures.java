@@ -148,7 +148,7 @@ final class PairFigures {
             double fastest = Math.max(slewC, Math.max(offEdge, Double.isNaN(ownOn) ? slewC : ownOn));
             slMax = Double.isNaN(slMax) ? fastest : Math.max(slMax, fastest);
             double holdC = holdPath(q, d, k * rSnk);
-            double viC = millerKnown(q) && (op.bridge() || !Double.isNaN(op.dvdt())) ? DvDt.millerInjected(s.qGd(), op.bus(), slewC, holdC, s.cIss(), s.cRss())
+            double viC = millerKnown(q) && (op.bridge() || !Double.isNaN(op.dvdt())) ? inducedAt(q, slewC, holdC)
                     : Double.NaN;
             double th = thresholdAt(s, t);
             double badness = Double.isNaN(viC) || Double.isNaN(th) ? Double.NaN
@@ -346,6 +346,15 @@ final class PairFigures {
     static double holdPath(Question q, DriverPart d, double rSnkAt) {
         boolean clamp = Boolean.TRUE.equals(d.millerClamp());
         return q.n * rSnkAt + (clamp ? 0 : q.op.rGOff()) + q.rInt;
+    }
+
+    /**
+     * The gate voltage the switch-node edge {@code slew} induces in this switch held through
+     * {@code hold} ({@link DvDt#millerInjected} with the switch's charges and the bus), V: the one
+     * call the dv-dt rule and the resistor range's dv-dt floor share.
+     */
+    static double inducedAt(Question q, double slew, double hold) {
+        return DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, hold, q.s.cIss(), q.s.cRss());
     }
 
     /** Whether the charge-consistent Miller injection can be computed: a bus and the switch's Q_gd (a twin or a given dv/dt is checked apart). */

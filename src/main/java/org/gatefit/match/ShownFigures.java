@@ -3,7 +3,6 @@ package org.gatefit.match;
 import java.util.ArrayList;
 import java.util.List;
 import org.gatefit.physics.Bootstrap;
-import org.gatefit.physics.DvDt;
 import org.gatefit.physics.ESeries;
 import org.gatefit.physics.GateLoop;
 import org.gatefit.physics.GatePower;
@@ -170,8 +169,7 @@ final class ShownFigures {
             for (double t : new double[] {JunctionTemperature.DATASHEET_C, q.op.tj()}) {
                 double k = JunctionTemperature.driverResistanceFactor(t);
                 double slew = PairFigures.slewAt(q, f.d(), k * f.rSrc(), rg);
-                double v = DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, PairFigures.holdPath(q, f.d(), k * f.rSnk()),
-                        q.s.cIss(), q.s.cRss()) + q.op.vDriveNeg();
+                double v = PairFigures.inducedAt(q, slew, PairFigures.holdPath(q, f.d(), k * f.rSnk())) + q.op.vDriveNeg();
                 worst = Math.max(worst, v - PairFigures.thresholdAt(q.s, t));
             }
             return worst; // ≥ 0: the dv-dt rule fails
@@ -206,7 +204,7 @@ final class ShownFigures {
      */
     private static double allowedSlew(PairFigures f) {
         Question q = f.q();
-        return crossing(slew -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, f.rOffPath(), q.s.cIss(), q.s.cRss()),
+        return crossing(slew -> PairFigures.inducedAt(q, slew, f.rOffPath()),
                 f.vThSeen() - q.op.vDriveNeg(), Math.max(f.slew(), 1e6), 1e15);
     }
 
@@ -272,7 +270,7 @@ final class ShownFigures {
     /** The holding resistance at which the induced voltage reaches {@code limit} at the deciding slew, Ω. */
     private static double maxHold(PairFigures f, double limit) {
         Question q = f.q();
-        return crossing(r -> DvDt.millerInjected(q.s.qGd(), q.op.bus(), f.slew(), r, q.s.cIss(), q.s.cRss()), limit,
+        return crossing(r -> PairFigures.inducedAt(q, f.slew(), r), limit,
                 Math.max(f.rOffPath(), 1), 1e9);
     }
 
