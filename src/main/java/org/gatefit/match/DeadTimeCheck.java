@@ -176,7 +176,7 @@ final class DeadTimeCheck {
         OperatingPoint op = o.r().point();
         int n = q.n;
         double k = Math.max(1, f.kHot());
-        double rOff = k * f.rSnk() + (op.rGOff() + q.rInt) / n;
+        double rOff = PairFigures.loop(q, k * f.rSnk(), op.rGOff());
         double tHot = Math.max(op.tj(), JunctionTemperature.DATASHEET_C);
         double vTh = PairFigures.thresholdAt(s, tHot);
         double tf = s.ratings().tF();
@@ -209,7 +209,7 @@ final class DeadTimeCheck {
         double rSrc = DriveCurrent.outputOhms(in.d().rSource(), op.swing(), in.d().iSource());
         double best = Double.POSITIVE_INFINITY;
         for (double t : new double[] {JunctionTemperature.DATASHEET_C, op.tj()}) {
-            double r = JunctionTemperature.driverResistanceFactor(t) * rSrc + (op.rG() + q.rInt) / q.n;
+            double r = PairFigures.loop(q, JunctionTemperature.driverResistanceFactor(t) * rSrc, op.rG());
             double vTh = PairFigures.thresholdAt(s, t);
             if (Double.isNaN(vTh)) {
                 throw new IllegalArgumentException("V_th,min of " + s.partNumber() + " is unknown");

@@ -85,7 +85,7 @@ final class DriveCurrentRule implements PairRule {
     private static double loop(PairFigures f, boolean source) {
         double k = Math.max(1, f.kHot());
         Question q = f.q();
-        return source ? k * f.rSrc() + (f.op().rG() + q.rInt) / q.n : k * f.rSnk() + (f.op().rGOff() + q.rInt) / q.n;
+        return source ? PairFigures.loop(q, k * f.rSrc(), f.op().rG()) : PairFigures.loop(q, k * f.rSnk(), f.op().rGOff());
     }
 
     /** What would fix a short current: a smaller resistor when the driver's rating allows, else a stronger driver or a slower edge. */

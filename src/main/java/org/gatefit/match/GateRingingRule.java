@@ -133,7 +133,7 @@ final class GateRingingRule implements PairRule {
         double rDrv = kFast * (onWorse ? f.rSrc() : f.rSnk());
         double rTotal = 2 * zeta * Math.sqrt(op.loop() / cg);
         double rg = q.n * (rTotal - rDrv) - q.rInt;
-        double rNow = rDrv + ((onWorse ? op.rG() : op.rGOff()) + q.rInt) / q.n;
+        double rNow = PairFigures.loop(q, rDrv, onWorse ? op.rG() : op.rGOff());
         double lMax = Math.pow(rNow / (2 * zeta), 2) * cg;
         String res = rg > 1e-3 && rg <= 1e6 ? "raise " + (onWorse ? "R_g" : "R_g,off") + " to ≥ "
                 + Eng.of(ESeries.E24.roundUp(rg), "Ω") + " per switch or " : "";

@@ -99,8 +99,8 @@ final class PairFigures {
         double qTotal = q.qTotal;
         double rSrc = DriveCurrent.outputOhms(d.rSource(), swing, d.iSource());
         double rSnk = DriveCurrent.outputOhms(d.rSink(), swing, d.iSink());
-        double rOnTot = rSrc + (op.rG() + rInt) / n;
-        double rOffTot = rSnk + (op.rGOff() + rInt) / n;
+        double rOnTot = loop(q, rSrc, op.rG());
+        double rOffTot = loop(q, rSnk, op.rGOff());
         // Q_g is a required column, but a part built elsewhere may lack it: every figure that
         // needs it stays unknown (NaN) and the rules that use them say unknown.
         boolean qKnown = !Double.isNaN(qTotal);
@@ -119,7 +119,7 @@ final class PairFigures {
         // (REFERENCES.md §8), judged at the slow corner.
         boolean edges = q.plateau;
         double iPlOn = edges ? plateauCurrentOn(q, d, kSlow * rSrc, op.rG()) : Double.NaN;
-        double iPlOff = edges ? DriveCurrent.plateau(s.vPlateau() - op.vDriveNeg(), kSlow * rSnk + (op.rGOff() + rInt) / n,
+        double iPlOff = edges ? DriveCurrent.plateau(s.vPlateau() - op.vDriveNeg(), loop(q, kSlow * rSnk, op.rGOff()),
                 d.iSink()) : Double.NaN;
         double plateauOn = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOn) : Double.NaN;
         double plateauOff = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOff) : Double.NaN;
@@ -142,7 +142,7 @@ final class PairFigures {
                 continue;
             }
             double offEdge = edges && Double.isNaN(op.dvdt()) ? op.bus() * DriveCurrent.plateau(s.vPlateau()
-                    - op.vDriveNeg(), k * rSnk + (op.rGOff() + rInt) / n, d.iSink()) / (n * s.qGd()) : slewC;
+                    - op.vDriveNeg(), loop(q, k * rSnk, op.rGOff()), d.iSink()) / (n * s.qGd()) : slewC;
             // Every edge the switch node makes: the twin's turn-on, this switch's own turn-on and turn-off.
             double ownOn = op.twin() != null && Double.isNaN(op.dvdt()) ? slewAt(q, d, k * rSrc, op.rG()) : slewC;
             double fastest = Math.max(slewC, Math.max(offEdge, Double.isNaN(ownOn) ? slewC : ownOn));
@@ -176,7 +176,7 @@ final class PairFigures {
             if (s.technology() == Technology.IGBT && !Double.isNaN(s.ratings().tF())) {
                 fall = s.ratings().tF();
             } else if (vTh > op.vDriveNeg() && vTh < s.vPlateau()) {
-                fall = SwitchingTimes.currentFall(kFast * rSnk + (op.rGOff() + rInt) / n, n * s.cIss(), vTh,
+                fall = SwitchingTimes.currentFall(loop(q, kFast * rSnk, op.rGOff()), n * s.cIss(), vTh,
                         s.vPlateau(), op.vDriveNeg());
             }
             nodeOs = fall > 0 ? SwitchNode.overshoot(op.powerLoop(), op.iLoad(), fall) : Double.NaN;
@@ -189,8 +189,8 @@ final class PairFigures {
         double trough = Double.NaN;
         if (!Double.isNaN(s.cIss()) && s.cIss() > 0 && op.loop() > 0) {
             double cg = n * s.cIss();
-            double rOnFast = kFast * rSrc + (op.rG() + rInt) / n;
-            double rOffFast = kFast * rSnk + (op.rGOff() + rInt) / n;
+            double rOnFast = loop(q, kFast * rSrc, op.rG());
+            double rOffFast = loop(q, kFast * rSnk, op.rGOff());
             zOn = GateLoop.dampingRatio(rOnFast, op.loop(), cg);
             zOff = GateLoop.dampingRatio(rOffFast, op.loop(), cg);
             peak = GateLoop.extreme(rOnFast, op.loop(), cg, op.vDriveNeg(), op.vDrive());
@@ -315,11 +315,20 @@ final class PairFigures {
     }
 
     /**
+     * A gate loop's resistance as the switch sees it: the driver's output resistance (already at its
+     * corner) plus the external resistor and R_g,int of the n switches in parallel, R_drv + (R_g + R_g,int)/n.
+     * The one definition every loop total of the rules uses.
+     */
+    static double loop(Question q, double rDriverAt, double rGate) {
+        return rDriverAt + (rGate + q.rInt) / q.n;
+    }
+
+    /**
      * The gate current on the turn-on plateau, capped at the rated peak, with a driver source
      * resistance {@code rSrcAt} (already at its corner) and turn-on resistor {@code rG} per switch, A.
      */
     static double plateauCurrentOn(Question q, DriverPart d, double rSrcAt, double rG) {
-        return DriveCurrent.plateau(q.op.vDrive() - q.s.vPlateau(), rSrcAt + (rG + q.rInt) / q.n, d.iSource());
+        return DriveCurrent.plateau(q.op.vDrive() - q.s.vPlateau(), loop(q, rSrcAt, rG), d.iSource());
     }
 
     /**
