@@ -50,7 +50,10 @@ final class PairFigures {
     private boolean bootBelowFull;
     private double bootCMin;
     private double bootCRec;
-    private double bootDutyMax;
+    /** What the duty limit is solved from (NaN when the capacitor cannot be sized): C at its DC bias, Q_g + Q_ls, the drain. */
+    private double bootCEff;
+    private double bootQFixed;
+    private double bootDrain;
     private double nmHigh;
     private double nmLow;
     private double kHot;
@@ -209,7 +212,9 @@ final class PairFigures {
         boolean bBelow = false;
         double bCMin = Double.NaN;
         double bCRec = Double.NaN;
-        double bDuty = Double.NaN;
+        double bCEff = Double.NaN;
+        double bQFixed = Double.NaN;
+        double bDrain = Double.NaN;
         if (op.highSide() && d.topology().bootstrapped()) {
             double uv = Double.isNaN(d.uvloOff()) ? d.uvloOn() : d.uvloOff();
             double full = fullEnhancement(s);
@@ -232,8 +237,9 @@ final class PairFigures {
                     // that derated capacitance (REFERENCES §9), not a count of time constants.
                     bCMin = Bootstrap.minCapacitance(bCharge, bDroop);
                     bCRec = Bootstrap.recommended(bCMin / q.m.bootCapBias());
-                    bDuty = Bootstrap.maxDutyChargeBalance(op.vDrive() - op.diodeDrop(), bFloor, op.rBoot(),
-                            bCRec * q.m.bootCapBias(), qTotal + qLs, drain, op.fSw());
+                    bCEff = bCRec * q.m.bootCapBias();
+                    bQFixed = qTotal + qLs;
+                    bDrain = drain;
                 }
             }
         }
@@ -258,7 +264,9 @@ final class PairFigures {
         this.bootBelowFull = bBelow;
         this.bootCMin = bCMin;
         this.bootCRec = bCRec;
-        this.bootDutyMax = bDuty;
+        this.bootCEff = bCEff;
+        this.bootQFixed = bQFixed;
+        this.bootDrain = bDrain;
         this.nmHigh = Double.isNaN(d.vIh()) ? Double.NaN : op.vOh() - d.vIh();
         this.nmLow = Double.isNaN(d.vIl()) ? Double.NaN : d.vIl() - op.vOl();
         this.kHot = kHot;
@@ -475,8 +483,41 @@ final class PairFigures {
         return bootCRec;
     }
 
+    /**
+     * The largest duty the bootstrap allows by charge balance ({@link Bootstrap#maxDutyChargeBalance},
+     * REFERENCES §9); NaN when the capacitor cannot be sized. Solved when asked (a root), not for
+     * every driver ranked: the ranking asks {@link #bootDutyAllows} and {@link #bootDutyHeadroom}.
+     */
     double bootDutyMax() {
-        return bootDutyMax;
+        return Double.isNaN(bootCEff) ? Double.NaN : Bootstrap.maxDutyChargeBalance(q.op.vDrive() - q.op.diodeDrop(), bootFloor,
+                q.op.rBoot(), bootCEff, bootQFixed, bootDrain, q.op.fSw());
+    }
+
+    /** The capacitor's lowest steady-state voltage at {@code duty} (REFERENCES §9), V. */
+    private double bootLowestAt(double duty) {
+        double period = 1 / q.op.fSw();
+        return Bootstrap.steadyLowest(q.op.vDrive() - q.op.diodeDrop(), q.op.rBoot(), bootCEff,
+                bootQFixed + bootDrain * duty * period, bootDrain, (1 - duty) * period);
+    }
+
+    /**
+     * Whether the bootstrap holds the high side at or above its floor at {@code duty} (0 ≤ duty &lt; 1):
+     * duty ≤ {@link #bootDutyMax} without solving for the limit (the lowest voltage falls as the
+     * duty rises). False when the capacitor cannot be sized.
+     */
+    boolean bootDutyAllows(double duty) {
+        return !Double.isNaN(bootCEff) && bootLowestAt(duty) >= bootFloor;
+    }
+
+    /**
+     * {@code min(enough, bootDutyMax − duty)} for a duty the bootstrap allows: the limit is solved
+     * only when the headroom is less than {@code enough} (a rule's score saturates there).
+     */
+    double bootDutyHeadroom(double duty, double enough) {
+        if (duty + enough < 1 && bootDutyAllows(duty + enough)) {
+            return enough;
+        }
+        return Math.min(enough, bootDutyMax() - duty);
     }
 
     double nmHigh() {

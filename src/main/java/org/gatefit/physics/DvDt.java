@@ -59,7 +59,7 @@ public final class DvDt {
         }
         double tau = rOff * ciss;
         double ramp = swing / slewRate;
-        return cgd * slewRate * rOff * -Math.expm1(-ramp / tau);
+        return cgd * slewRate * rOff * Decay.oneMinusExp(ramp / tau);
     }
 
     /**

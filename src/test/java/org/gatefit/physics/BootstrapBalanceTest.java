@@ -3,6 +3,10 @@ package org.gatefit.physics;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.DoubleRange;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.junit.jupiter.api.Test;
 
@@ -85,5 +89,50 @@ class BootstrapBalanceTest {
         assertEquals(VS - QFIXED / C, Bootstrap.steadyLowest(VS, 0, C, QFIXED, I, 1e-6), 1e-12);
         assertEquals(Double.NEGATIVE_INFINITY, Bootstrap.steadyLowest(VS, R, C, QFIXED, I, 0));
         assertEquals(0, Bootstrap.maxDutyChargeBalance(VS, VS, R, C, QFIXED, I, F));
+    }
+
+    /** The duty at which the steady lowest voltage meets the floor, by commons-math3's Brent solver (the reference). */
+    private static double brentLimit(double vs, double floor, double r, double c, double q, double i, double f) {
+        return new BrentSolver(1e-13, 1e-13).solve(500, d -> Bootstrap.steadyLowest(vs, r, c, q + i * d / f, i, (1 - d) / f)
+                - floor, 0, 1 - 1e-12);
+    }
+
+    @Test
+    void theDutyLimitIsBrentsRootOfTheBalance() {
+        // The §9 values above at three floors, and a slow refresh (R_boot 20 Ω, 47 nF) that limits hard.
+        double[][] cases = {{10.8, R, C}, {10.5, R, C}, {10.2, R, C}, {10.0, 20, 47e-9}, {9.0, 20, 47e-9}};
+        for (double[] k : cases) {
+            double newton = Bootstrap.maxDutyChargeBalance(VS, k[0], k[1], k[2], QFIXED, I, F);
+            assertEquals(brentLimit(VS, k[0], k[1], k[2], QFIXED, I, F), newton, 1e-9, "floor " + k[0] + " V, R " + k[1]);
+            assertTrue(Bootstrap.steadyLowest(VS, k[1], k[2], QFIXED + I * (newton - 1e-9) / F, I, (1 - newton + 1e-9) / F)
+                    >= k[0], "just below the limit the high side stays up");
+        }
+        // Without resistance the balance is linear: d = (H·C − Q) / (I·T) with H = V_S − floor.
+        assertEquals(((VS - 10.8) * C - QFIXED) / (1e-3 / F), Bootstrap.maxDutyChargeBalance(VS, 10.8, 0, C, QFIXED, 1e-3, F),
+                1e-12);
+    }
+
+    @Property(tries = 300)
+    void newtonFindsTheSameLimitAsBrent(@ForAll @DoubleRange(min = 0.1, max = 47) double rOhm,
+            @ForAll @DoubleRange(min = 10, max = 2200) double cNf, @ForAll @DoubleRange(min = 1, max = 500) double qNc,
+            @ForAll @DoubleRange(min = 0, max = 5) double iMa, @ForAll @DoubleRange(min = 5, max = 1000) double fKhz,
+            @ForAll @DoubleRange(min = 0.05, max = 0.95) double floorShare) {
+        double vs = 11.3;
+        double floor = vs * floorShare;
+        double c = cNf * 1e-9;
+        double q = qNc * 1e-9;
+        double i = iMa * 1e-3;
+        double f = fKhz * 1e3;
+        double newton = Bootstrap.maxDutyChargeBalance(vs, floor, rOhm, c, q, i, f);
+        if (Bootstrap.steadyLowest(vs, rOhm, c, q, i, 1 / f) < floor) {
+            assertEquals(0, newton);
+            return;
+        }
+        double low = Bootstrap.steadyLowest(vs, rOhm, c, q + i * (1 - 1e-12) / f, i, 1e-12 / f);
+        if (low >= floor) {
+            assertEquals(1 - 1e-9, newton, 1e-9, "nothing limits the duty");
+            return;
+        }
+        assertEquals(brentLimit(vs, floor, rOhm, c, q, i, f), newton, 1e-8);
     }
 }
