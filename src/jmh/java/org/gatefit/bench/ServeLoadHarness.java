@@ -55,7 +55,7 @@ public final class ServeLoadHarness {
     /** The questions, as API query strings: ShortlistBench's question (48 V first) and at three other bus voltages. */
     static final List<String> QUESTIONS = Stream.of("48", "24", "80", "100").map(bus ->
             "/api/v1/shortlist?switch=TST-S0000000&side=high&bus=" + bus
-                    + "&freq=100k&rg=2.2&duty-max=0.6&drive=12&top=10").toList();
+                    + "&freq=100k&rg=15&rg-off=0.5&edge=100&duty-max=0.6&drive=12&top=10").toList();
 
     public static void main(String[] args) throws Exception {
         int clients = args.length > 0 ? Integer.parseInt(args[0]) : 16;
