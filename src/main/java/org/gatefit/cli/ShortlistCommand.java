@@ -27,7 +27,9 @@ import picocli.CommandLine.Option;
         header = "Rank the catalog's gate drivers for one switch at an operating point.",
         description = {"Checks every driver of the catalog against the switch with every rule (drive current, gate"
             + " voltage, negative bias, UVLO, logic levels, polarity, high side, bootstrap, driver power, dv/dt,"
-            + " lifecycle) and lists the best, best first: passing before warning, then by score, then by price."
+            + " lifecycle) and lists the best, best first: passing before warning, then by score (a high side that"
+            + " needs an isolated supply costs ×0.9), then by price. A check unknown only for a value not given"
+            + " (--duty-max, --bus) shows unknown but does not lower the rank; it is named once above the table."
             + " Drivers are skipped up front only when their topology or supply range makes them certain to fail."
             + " Defaults that were assumed are printed with the result. --topology, --in-stock, --max-price and"
             + " --maker narrow the drivers considered and are printed as what was asked; the switch's own lifecycle"

@@ -20,7 +20,13 @@ import org.gatefit.match.Check.Comparison;
  */
 final class BootstrapRule implements PairRule {
     enum Why implements Reason { LOW_SIDE, NO_FLOATING_SUPPLY, ISOLATED_SUPPLY, CANNOT_SIZE, NO_HEADROOM, FULL_DUTY,
-        DUTY_TOO_HIGH, NO_DUTY, BELOW_FULL, EXTERNAL_DIODE_NO_BUS, SIZED, GAN_OVERCHARGE, GAN_OVERCHARGE_NEAR }
+        DUTY_TOO_HIGH, NO_DUTY, BELOW_FULL, EXTERNAL_DIODE_NO_BUS, SIZED, GAN_OVERCHARGE, GAN_OVERCHARGE_NEAR;
+
+        @Override
+        public String asks() {
+            return this == NO_DUTY ? "duty-max" : null;
+        }
+    }
 
     /**
      * Reverse-conduction drop of an e-mode GaN switch at 0 V gate during dead time, V: 2–3 V with
@@ -48,6 +54,9 @@ final class BootstrapRule implements PairRule {
         return Math.min(limit, viaHigh);
     }
 
+    /** Duty headroom below the limit at which the pass sub-score saturates (20 points, common practice, no source). */
+    static final double SATURATES = 0.2;
+
     @Override
     public void judge(PairFigures f, Outcome out) {
         OperatingPoint op = f.op();
@@ -66,7 +75,7 @@ final class BootstrapRule implements PairRule {
             out.fail(Why.GAN_OVERCHARGE);
         } else if (!Double.isNaN(duty) && duty >= 1) {
             out.fail(Why.FULL_DUTY);
-        } else if (!Double.isNaN(duty) && duty > f.bootDutyMax()) {
+        } else if (!Double.isNaN(duty) && !f.bootDutyAllows(duty)) {
             out.fail(Why.DUTY_TOO_HIGH);
         } else if (Double.isNaN(duty)) {
             out.unknown(Why.NO_DUTY);
@@ -78,7 +87,7 @@ final class BootstrapRule implements PairRule {
         } else if (Boolean.FALSE.equals(f.d().bootstrapDiode()) && Double.isNaN(op.bus())) {
             out.warn(Why.EXTERNAL_DIODE_NO_BUS, 0.5);
         } else {
-            out.pass(Why.SIZED, (f.bootDutyMax() - duty) * 5);
+            out.pass(Why.SIZED, f.bootDutyHeadroom(duty, SATURATES) / SATURATES);
         }
     }
 

@@ -11,8 +11,16 @@ import java.util.Objects;
  * @param message  one sentence a person can act on
  * @param compared the figures and limits it compared
  * @param score    sub-score in [0,1] from the margin (saturating; 0 for a failure)
+ * @param notGiven for an unknown that waits only for an operating-point value the asker did not
+ *                 give, that option without its dashes ({@code duty-max}, {@code bus}); else null
  */
-public record Check(Rule rule, Verdict verdict, String message, List<Comparison> compared, double score) {
+public record Check(Rule rule, Verdict verdict, String message, List<Comparison> compared, double score,
+                    String notGiven) {
+    /** A check the parts' data decide. */
+    public Check(Rule rule, Verdict verdict, String message, List<Comparison> compared, double score) {
+        this(rule, verdict, message, compared, score, null);
+    }
+
     public Check {
         Objects.requireNonNull(rule, "rule");
         Objects.requireNonNull(verdict, "verdict");
@@ -20,6 +28,10 @@ public record Check(Rule rule, Verdict verdict, String message, List<Comparison>
         compared = List.copyOf(compared);
         if (!(score >= 0 && score <= 1)) {
             throw new IllegalArgumentException("expected a score in [0,1], got " + score);
+        }
+        if (notGiven != null && verdict != Verdict.UNKNOWN) {
+            throw new IllegalArgumentException("expected an unknown verdict for a check waiting for " + notGiven + ", got "
+                    + verdict);
         }
     }
 

@@ -15,7 +15,13 @@ import org.gatefit.match.Check.Comparison;
  * fail at V_th,min, warn above the dv-dt margin's fraction of it (common practice, no source).
  */
 final class DvDtRule implements PairRule {
-    enum Why implements Reason { NO_TWIN, NO_THRESHOLD, NO_CHARGE, NO_BUS, NO_SLEW, FALSE_TURN_ON, THIN, LOW }
+    enum Why implements Reason { NO_TWIN, NO_THRESHOLD, NO_CHARGE, NO_BUS, NO_SLEW, FALSE_TURN_ON, THIN, LOW;
+
+        @Override
+        public String asks() {
+            return this == NO_BUS ? "bus" : null;
+        }
+    }
 
     private static double seen(PairFigures f) {
         return f.vInduced() + f.op().vDriveNeg();

@@ -28,7 +28,13 @@ import org.gatefit.match.Check.Comparison;
 final class HighSideRule implements PairRule {
     enum Why implements Reason { LOW_SIDE, CANNOT_FLOAT, NO_ISOLATION, NO_BUS_ISOLATED, ISOLATION_BELOW_BUS, ISOLATION_THIN,
         ISOLATED_OK, NO_OFFSET, NO_BUS_OFFSET, OFFSET_BELOW_BUS, OFFSET_THIN, OFFSET_OK, WORKING_BELOW_BUS, WORKING_THIN,
-        WORKING_OK, WORKING_UNKNOWN, CMTI_BELOW, CMTI_THIN, NO_CMTI }
+        WORKING_OK, WORKING_UNKNOWN, CMTI_BELOW, CMTI_THIN, NO_CMTI;
+
+        @Override
+        public String asks() {
+            return this == NO_BUS_OFFSET || this == NO_BUS_ISOLATED ? "bus" : null;
+        }
+    }
 
     /**
      * The highest bus a one-minute withstand rating alone may pass: 60 V DC, the touch-safe limit of

@@ -36,8 +36,14 @@ final class Outcome {
         set(Verdict.FAIL, r, 0);
     }
 
+    /** Unknown: the parts' data are missing, or ({@link Reason#asks}) a value the asker did not give. */
     void unknown(Reason r) {
-        set(Verdict.UNKNOWN, r, Score.UNKNOWN);
+        set(Verdict.UNKNOWN, r, r.asks() == null ? Score.UNKNOWN : Score.OPEN);
+    }
+
+    /** Whether the verdict is an open question of the asker ({@link Reason#asks}), not of the parts. */
+    boolean open() {
+        return verdict == Verdict.UNKNOWN && why.asks() != null;
     }
 
     private void set(Verdict v, Reason r, double s) {

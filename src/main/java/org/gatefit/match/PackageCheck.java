@@ -71,7 +71,7 @@ final class PackageCheck {
         }
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
-                s.lifecycle().availability(s.stock()), v);
+                s.lifecycle().availability(s.stock()), r.point() == null ? 1 : Score.supplyCost(r.point(), d), v);
         return new StageResult(r.stage(), r.line(), r.driverRef(), r.driver(), r.switchRef(), r.switchPart(), v, score,
                 checks, r.figures(), r.point(), r.notes());
     }

@@ -28,6 +28,23 @@ public record PairResult(String driver, String switchPart, Verdict verdict, doub
         return new PairResult(driver, switchPart, verdict, score, checks, figures, point, margins, price);
     }
 
+    /**
+     * The verdict this pair ranks by: its checks' worst as {@link #verdict}, but an unknown that
+     * waits only for an operating-point value the asker did not give ({@link Check#notGiven}) counts
+     * as a pass — it is the same open question for every driver it touches and says nothing about the
+     * part. Shown verdicts stay {@link #verdict}.
+     */
+    public Verdict rankVerdict() {
+        if (checks.stream().noneMatch(c -> c.notGiven() != null)) {
+            return verdict;
+        }
+        Verdict v = Verdict.PASS;
+        for (Check c : checks) {
+            v = v.and(c.notGiven() != null ? Verdict.PASS : c.verdict());
+        }
+        return v.forPair();
+    }
+
     /** A figure by name. */
     public Optional<Figure> figure(String name) {
         return figures.stream().filter(f -> f.name().equals(name)).findFirst();

@@ -15,7 +15,13 @@ import org.gatefit.match.Check.Comparison;
  * shortens it: see {@code gate-voltage}), and the detection time excludes the blanking a designer sets.
  */
 final class ProtectionRule implements PairRule {
-    enum Why implements Reason { NOT_EXPECTED, LOW_BUS, NO_BUS, NO_DATA, NONE, NO_TIMES, TOO_SLOW, PROTECTED }
+    enum Why implements Reason { NOT_EXPECTED, LOW_BUS, NO_BUS, NO_DATA, NONE, NO_TIMES, TOO_SLOW, PROTECTED;
+
+        @Override
+        public String asks() {
+            return this == NO_BUS ? "bus" : null;
+        }
+    }
 
     private static boolean expected(SwitchPart s) {
         return s.technology() == Technology.IGBT || s.technology() == Technology.SIC_MOSFET;

@@ -57,14 +57,15 @@ public final class Rules {
                     ? new PairRule.Worded(refused != null ? "cannot estimate: " + refused : without)
                     : f == null ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
                     : e.rule().word(shown, out.why());
-            checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score()));
+            checks.add(new Check(e.id(), out.verdict(), said.message(), said.compared(), out.score(),
+                    out.open() ? out.why().asks() : null));
             v = v.and(out.verdict());
             sum += e.id().weight() * out.score();
             w += e.id().weight();
         }
         v = v.forPair();
         double score = Score.combine(sum, w, d.lifecycle().availability(d.stock()),
-                q.s.lifecycle().availability(q.s.stock()), v);
+                q.s.lifecycle().availability(q.s.stock()), Score.supplyCost(q.op, d), v);
         return new PairResult(d.partNumber(), q.s.partNumber(), v, score, checks, shown == null ? List.of() : shown.figures(), q.op,
                 q.m, Double.NaN);
     }
@@ -142,6 +143,7 @@ public final class Rules {
         private final Outcome out = new Outcome();
         private final PairFigures scratch = PairFigures.scratch();
         private Verdict verdict;
+        private Verdict rankVerdict;
         private double score;
 
         /** A ranking that scores every driver, failing ones included. */
@@ -167,13 +169,16 @@ public final class Rules {
         public void rank(DriverPart d) {
             PairFigures f = figuresOrNull(q, d, scratch);
             Verdict v = Verdict.PASS;
+            Verdict rv = Verdict.PASS;
             double sum = 0;
             int w = 0;
             for (Entry e : PAIR_RULES) {
                 judge(e, f, d, q, out);
                 v = v.and(out.verdict());
+                rv = out.open() ? rv : rv.and(out.verdict());
                 if (v == Verdict.FAIL && !scoreFailing) {
                     verdict = Verdict.FAIL;
+                    rankVerdict = Verdict.FAIL;
                     score = Double.NaN;
                     return;
                 }
@@ -181,12 +186,18 @@ public final class Rules {
                 w += e.id().weight();
             }
             verdict = v.forPair();
+            rankVerdict = rv.forPair();
             score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), q.s.lifecycle().availability(q.s.stock()),
-                    verdict);
+                    Score.supplyCost(q.op, d), verdict);
         }
 
         public Verdict verdict() {
             return verdict;
+        }
+
+        /** The verdict the driver ranks by: {@link #verdict()} with open questions left out ({@link PairResult#rankVerdict}). */
+        public Verdict rankVerdict() {
+            return rankVerdict;
         }
 
         public double score() {

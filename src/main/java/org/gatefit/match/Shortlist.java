@@ -15,9 +15,12 @@ import org.gatefit.catalog.RowCursor;
  */
 public final class Shortlist {
 
-    /** Best first: verdict (pass, warn, fail), then score, then price (unknown last), then part number. */
+    /**
+     * Best first: verdict (pass, warn, fail; open questions of the asker left out,
+     * {@link PairResult#rankVerdict}), then score, then price (unknown last), then part number.
+     */
     public static final Comparator<PairResult> RANKING = Comparator
-            .comparing((PairResult r) -> r.verdict().ordinal())
+            .comparing((PairResult r) -> r.rankVerdict().ordinal())
             .thenComparing(Comparator.comparingDouble(PairResult::score).reversed())
             .thenComparingDouble(r -> Double.isNaN(r.priceTieBreak()) ? Double.MAX_VALUE : r.priceTieBreak())
             .thenComparing(PairResult::driver);
@@ -44,6 +47,31 @@ public final class Shortlist {
             candidates = List.copyOf(candidates);
             prefilter = List.copyOf(prefilter);
             asked = List.copyOf(asked);
+        }
+
+        /**
+         * Each operating-point value the listed drivers' checks wait for ({@link Check#notGiven}),
+         * said once above the table: the option, the checks it leaves unknown and for how many of
+         * the drivers listed, and that they are ranked on their other checks.
+         */
+        public List<String> notGiven() {
+            java.util.Map<String, java.util.Map<String, Integer>> by = new java.util.TreeMap<>();
+            for (PairResult p : candidates) {
+                for (Check c : p.checks()) {
+                    if (c.notGiven() != null) {
+                        by.computeIfAbsent(c.notGiven(), k -> new java.util.LinkedHashMap<>()).merge(c.rule().id(), 1,
+                                Integer::sum);
+                    }
+                }
+            }
+            List<String> out = new ArrayList<>();
+            by.forEach((option, rules) -> {
+                List<String> what = new ArrayList<>();
+                rules.forEach((rule, n) -> what.add(rule + " (" + n + " of the " + candidates.size() + " listed)"));
+                out.add("--" + option + ": " + String.join(", ", what) + " unknown without it — said once here, and"
+                        + " those drivers are ranked on their other checks; give --" + option + " to settle it");
+            });
+            return out;
         }
 
         Result asked(List<String> conditions, int left) {
@@ -151,7 +179,7 @@ public final class Shortlist {
     private static final Comparator<Ranked> RANKED = (x, y) -> compare(x.verdict(), x.score(), x.driver(), y.verdict(),
             y.score(), y.driver());
 
-    /** A driver with its verdict and score, before its checks are worded. */
+    /** A driver with the verdict it ranks by and its score, before its checks are worded. */
     private record Ranked(DriverPart driver, Verdict verdict, double score) {
     }
 
@@ -242,6 +270,7 @@ public final class Shortlist {
             }
             t.ranking.rank(d);
             Verdict qv = t.ranking.verdict();
+            Verdict rank = t.ranking.rankVerdict();
             double qs = t.ranking.score();
             switch (qv) {
                 case PASS -> t.pass++;
@@ -253,11 +282,11 @@ public final class Shortlist {
             }
             if (best.size() == top) {
                 Ranked worst = best.peek();
-                if (compare(qv, qs, d, worst.verdict(), worst.score(), worst.driver()) >= 0) {
+                if (compare(rank, qs, d, worst.verdict(), worst.score(), worst.driver()) >= 0) {
                     return; // decided before allocating: most drivers end here once the heap is full
                 }
             }
-            keep(new Ranked(d, qv, qs));
+            keep(new Ranked(d, rank, qs));
         }
 
         /** Adds to the best {@code top}, dropping the worst when full. */

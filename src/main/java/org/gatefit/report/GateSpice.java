@@ -82,6 +82,9 @@ final class GateSpice {
         d.append("* gatefit gate-loop deck: driver ").append(p.driver()).append(" with switch ").append(p.switchPart()).append('\n');
         d.append("* operating point: ").append(MatchJson.pointLine(op)).append('\n');
         d.append("* ").append(Caution.TEXT).append('\n');
+        d.append("* Dialect: .param, B sources with u(), max() and exp(), and .meas, as ngspice reads them (gatefit's")
+                .append(" tests run such decks in ngspice; LTspice reads the same, from memory). A simulator without B sources")
+                .append(" needs the two B lines rewritten as its own behavioural current sources.\n");
         d.append("* One switch's share of the driver output: with ").append(n).append(" switch(es) in parallel the driver's")
                 .append(" resistances and the loop inductance are taken ").append(n).append(" times (the same damping and")
                 .append(" ring frequency as the whole output).\n");

@@ -31,6 +31,9 @@ final class MatchJson {
         g.writeStringField("verdict", c.verdict().id());
         g.writeStringField("message", c.message());
         g.writeNumberField("score", round(c.score()));
+        if (c.notGiven() != null) {
+            g.writeStringField("not_given", c.notGiven());
+        }
         g.writeArrayFieldStart("compared");
         for (Check.Comparison x : c.compared()) {
             g.writeStartObject();

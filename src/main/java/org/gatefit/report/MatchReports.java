@@ -121,6 +121,9 @@ public final class MatchReports {
             lines.add(new String[] {"Asked", String.join(", ", r.asked()) + " (" + r.filteredOut()
                     + " drivers left out, any lacking the value among them)"});
         }
+        for (String n : r.notGiven()) {
+            lines.add(new String[] {"Not given", n});
+        }
         return lines;
     }
 
@@ -166,11 +169,19 @@ public final class MatchReports {
     /**
      * The rule that decides the verdict: the worst check; among failures the most fundamental
      * ({@link org.gatefit.match.Rule#fundamental}: a high side the driver cannot float on before a
-     * drive current too small), among warnings the lowest sub-score.
+     * drive current too small), among warnings the lowest sub-score. A check waiting only for a value
+     * not given ({@link Check#notGiven}, said once above a shortlist) decides only when nothing else
+     * keeps the pair from passing.
      */
     static Check decidingCheck(PairResult p) {
         Check worst = null;
         for (Check c : p.checks()) {
+            if (worst != null && (c.notGiven() != null) != (worst.notGiven() != null)) {
+                if (worst.notGiven() != null && c.verdict() != Verdict.PASS) {
+                    worst = c; // a question of the part's own before an open one
+                }
+                continue;
+            }
             if (worst == null || c.verdict().ordinal() > worst.verdict().ordinal()
                     || (c.verdict() == worst.verdict() && c.verdict() == Verdict.FAIL
                         && c.rule().fundamental() < worst.rule().fundamental())
@@ -205,6 +216,11 @@ public final class MatchReports {
             if (r.switchStatus() != null) {
                 g.writeStringField("switch_status", r.switchStatus());
             }
+            g.writeArrayFieldStart("not_given");
+            for (String n : r.notGiven()) {
+                g.writeString(n);
+            }
+            g.writeEndArray();
             MatchJson.point(g, r.point());
             MatchJson.margins(g, r.margins());
             g.writeArrayFieldStart("prefilter");

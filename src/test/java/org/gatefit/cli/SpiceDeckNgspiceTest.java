@@ -77,6 +77,9 @@ class SpiceDeckNgspiceTest {
         String deck = CliRun.on(catalog, spice.toArray(String[]::new)).out();
         assertTrue(deck.startsWith("* gatefit gate-loop deck") && deck.strip().endsWith(".end"), deck);
         assertTrue(deck.chars().allMatch(c -> c < 128), "not ASCII:\n" + deck);
+        // The header tells users of other simulators that two B lines are all they rewrite.
+        assertEquals(2, deck.lines().filter(l -> l.startsWith("B")).count(), deck);
+        assertTrue(deck.contains("* Dialect: "), deck);
 
         double peak = meas(ngspice(name + "-fast", deck), "vg_peak_on");
         double swing = figure(a, "gate-peak-on");
