@@ -326,13 +326,21 @@ public final class ServeLoadHarness {
         }
     }
 
+    /**
+     * The answer's digest, without the report header's time ({@code report.generated}), which
+     * differs from answer to answer; the header's catalog content hash stays in: it names the
+     * catalog the answer came from.
+     */
     static String sha(byte[] b) {
+        byte[] timeless = GENERATED.matcher(new String(b, StandardCharsets.UTF_8)).replaceAll("").getBytes(StandardCharsets.UTF_8);
         try {
-            return HexFormat.of().formatHex(Arrays.copyOf(MessageDigest.getInstance("SHA-256").digest(b), 12));
+            return HexFormat.of().formatHex(Arrays.copyOf(MessageDigest.getInstance("SHA-256").digest(timeless), 12));
         } catch (java.security.NoSuchAlgorithmException e) {
             throw new IllegalStateException(e);
         }
     }
+
+    private static final java.util.regex.Pattern GENERATED = java.util.regex.Pattern.compile("\"generated\"\\s*:\\s*\"[^\"]*\"");
 
     static String load() {
         try {

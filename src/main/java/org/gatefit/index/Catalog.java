@@ -61,6 +61,12 @@ public final class Catalog implements AutoCloseable {
     private final Directory directory;
     private final DirectoryReader reader;
     private final IndexSearcher searcher;
+    /**
+     * {@link #contentSha256} of this view, computed when it is opened: later another process's
+     * import may delete the files of this commit from the folder (the view keeps reading them
+     * through its open files, but they can no longer be opened by name).
+     */
+    private final String contentSha256;
     /** Decoded columns per segment, when {@link #keepColumns} is on; null otherwise. */
     private volatile java.util.concurrent.ConcurrentHashMap<Long, Object> columns;
     /** Objects built from rows ({@link RowCursor#memo}) per segment and key, when {@link #keepColumns} is on. */
@@ -69,11 +75,16 @@ public final class Catalog implements AutoCloseable {
     /** Whether {@link #close} ran on this handle (a handle closes its share of the reader once). */
     private final java.util.concurrent.atomic.AtomicBoolean closed = new java.util.concurrent.atomic.AtomicBoolean();
 
-    private Catalog(Path dir, Directory directory, DirectoryReader reader) {
+    private Catalog(Path dir, Directory directory, DirectoryReader reader, String contentSha256) {
         this.dir = dir;
         this.directory = directory;
         this.reader = reader;
         this.searcher = reader == null ? null : new IndexSearcher(reader);
+        this.contentSha256 = contentSha256;
+    }
+
+    private static Catalog empty(Path dir) {
+        return new Catalog(dir, null, null, null);
     }
 
     /**
@@ -89,7 +100,7 @@ public final class Catalog implements AutoCloseable {
             throw noCatalog(dir);
         }
         reader.incRef();
-        Catalog c = new Catalog(dir, directory, reader);
+        Catalog c = new Catalog(dir, directory, reader, contentSha256);
         c.columns = columns;
         c.memos = memos;
         return c;
@@ -141,26 +152,36 @@ public final class Catalog implements AutoCloseable {
      */
     public static Catalog openIfPresent(Path dir) throws IOException {
         if (CatalogFolder.inspect(dir) == CatalogFolder.State.NONE) {
-            return new Catalog(dir, null, null);
+            return empty(dir);
         }
         Directory d = new CatalogFolder.Own(FSDirectory.open(dir), null);
         try {
             if (!DirectoryReader.indexExists(d)) {
                 d.close();
-                return new Catalog(dir, null, null);
+                return empty(dir);
             }
-            DirectoryReader r = DirectoryReader.open(d);
-            try {
-                checkFormat(dir, r.getIndexCommit().getUserData());
-                verifySmall(r);
-            } catch (IOException | RuntimeException e) {
-                r.close();
-                throw e;
+            for (int attempt = 1; ; attempt++) {
+                DirectoryReader r = DirectoryReader.open(d);
+                String sha;
+                try {
+                    checkFormat(dir, r.getIndexCommit().getUserData());
+                    verifySmall(r);
+                    sha = hash(d, r);
+                } catch (java.nio.file.NoSuchFileException | java.io.FileNotFoundException e) {
+                    r.close();
+                    if (attempt < OPEN_ATTEMPTS) {
+                        continue; // an import committed and removed this commit's files meanwhile: open its commit
+                    }
+                    throw e;
+                } catch (IOException | RuntimeException e) {
+                    r.close();
+                    throw e;
+                }
+                return new Catalog(dir, d, r, sha);
             }
-            return new Catalog(dir, d, r);
         } catch (IndexNotFoundException e) {
             d.close();
-            return new Catalog(dir, null, null);
+            return empty(dir);
         } catch (IOException e) {
             d.close();
             throw CatalogStorageException.reading(dir, e);
@@ -340,20 +361,20 @@ public final class Catalog implements AutoCloseable {
      * footer. Only the footers are read, so it costs the same on a catalog of any size. Each import
      * gives a new value (an import of the same files into another folder too: Lucene names every
      * segment with a random id); an unchanged catalog keeps its value. Whether the bytes still match
-     * their CRCs is {@link #verify}'s job. Null when nothing has been imported.
-     *
-     * @throws CatalogStorageException when a file of the commit cannot be read or has no footer
+     * their CRCs is {@link #verify}'s job. Null when nothing has been imported. Computed when the
+     * view is opened (a file of the commit that cannot be read or has no footer is refused then, as
+     * damage), so a view whose files another process's import has since removed still names itself.
      */
-    public String contentSha256() throws IOException {
-        if (reader == null) {
-            return null;
-        }
-        List<String> files;
-        try {
-            files = new ArrayList<>(reader.getIndexCommit().getFileNames());
-        } catch (IOException e) {
-            throw CatalogStorageException.reading(dir, e);
-        }
+    public String contentSha256() {
+        return contentSha256;
+    }
+
+    /** Times {@link #openIfPresent} opens the last commit again when an import replaces it while it is being opened. */
+    static final int OPEN_ATTEMPTS = 5;
+
+    /** {@link #contentSha256} of the commit {@code reader} reads, from the files' footers. */
+    private static String hash(Directory directory, DirectoryReader reader) throws IOException {
+        List<String> files = new ArrayList<>(reader.getIndexCommit().getFileNames());
         java.util.Collections.sort(files);
         java.security.MessageDigest sha = org.gatefit.catalog.Sha256.digest();
         for (String f : files) {
@@ -362,8 +383,6 @@ public final class Catalog implements AutoCloseable {
                 long crc = org.apache.lucene.codecs.CodecUtil.retrieveChecksum(in);
                 sha.update((f + "\t" + in.length() + "\t" + Long.toHexString(crc) + "\n")
                         .getBytes(java.nio.charset.StandardCharsets.UTF_8));
-            } catch (IOException e) {
-                throw CatalogStorageException.reading(dir, e);
             }
         }
         return org.gatefit.catalog.Sha256.hex(sha);

@@ -31,12 +31,20 @@ class CatalogHandleTest {
         Catalog view = Catalog.openIfPresent(cat);
         Catalog handle = view.handle();
         int before = handle.count(Kind.SWITCH);
+        String name = handle.contentSha256();
+        assertTrue(name.matches("[0-9a-f]{64}"), name);
         assertTrue(view.isCurrent());
         assertEquals(ExitCode.OK, CliRun.on(cat, "import", "--kind", "switch", more.toString()).exit());
         assertFalse(view.isCurrent(), "the view sees that another import committed");
         view.close();
         assertEquals(before, handle.count(Kind.SWITCH), "the handle still reads its own commit after the view closed");
         assertTrue(handle.get(Kind.SWITCH, "HDL-NEW1").isEmpty());
+        // The import removed the old commit's files from the folder; the handle's report header still
+        // names its own commit (a server answering from it must not fail as "damaged", as it once did).
+        assertEquals(name, handle.contentSha256());
+        try (Catalog now = Catalog.open(cat)) {
+            assertFalse(name.equals(now.contentSha256()), "the new commit has its own name");
+        }
         handle.close();
         handle.close(); // a second close is harmless
         try (Catalog now = Catalog.open(cat)) {
