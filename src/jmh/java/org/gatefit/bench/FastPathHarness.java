@@ -17,10 +17,8 @@ import org.gatefit.synth.BenchCatalogs;
  * …) so both see the same machine load: reading the CSV files alone (the sheet reader over
  * {@code CsvLexer} or Commons CSV; one thread, so its CPU time is the figure least disturbed by other
  * work on the machine) and the whole import (CSV reading and index writing, every thread: wall time
- * and the process's CPU time). The JSON reader matters only once per process: {@code json} as the
- * only argument prints how long the first load of the three bundled schemas takes in this (fresh)
- * JVM, the reader's classes loaded included; run it in fresh JVMs, with and without
- * {@code -Dgatefit.reference=json} (docs/PERFORMANCE.md).
+ * and the process's CPU time). (The JSON reader's fast path was deleted on 3 December 2026; its
+ * figures are in docs/PERFORMANCE.md.)
  *
  * <p>Arguments: rows (half switches, half drivers; default 100,000), rounds (default 6; the first
  * two are warm-up and not summarised). {@code java -cp target/benchmarks.jar org.gatefit.bench.FastPathHarness}
@@ -30,15 +28,6 @@ public final class FastPathHarness {
     }
 
     public static void main(String[] args) throws Exception {
-        if (args.length == 1 && args[0].equals("json")) {
-            long t0 = System.nanoTime();
-            for (org.gatefit.catalog.Kind k : org.gatefit.catalog.Kind.values()) {
-                org.gatefit.catalog.Schema.of(k);
-            }
-            System.out.printf("schemas loaded (%s reader) in %.1f ms%n", FastPath.JSON.reference() ? "Jackson" : "MiniJson",
-                    (System.nanoTime() - t0) / 1e6);
-            return;
-        }
         long rows = args.length > 0 ? Long.parseLong(args[0]) : 100_000;
         int rounds = args.length > 1 ? Integer.parseInt(args[1]) : 6;
         Path switches = BenchCatalogs.switchesCsv(rows / 2);

@@ -5,15 +5,14 @@ import java.util.Locale;
 /**
  * The hand-written fast paths, each behind a seam whose reference, a well-kept library, ships too:
  * the system property {@value #PROPERTY} selects the references instead ({@code true} or {@code all}
- * for every seam, or a comma-separated list of seam names: {@code csv}, {@code json}, {@code import}).
+ * for every seam, or a comma-separated list of seam names: {@code csv}, {@code import}; the former
+ * {@code json} seam's fast path was deleted and its name is ignored).
  * The fast paths are the default; tests run both on the same inputs and compare the results
  * (docs/PERFORMANCE.md, "Fast paths and their references", has what each one saves).
  */
 public enum FastPath {
     /** Reading CSV: {@link CsvLexer}, reference Commons CSV's parser ({@link CommonsCsvRecords}). */
     CSV,
-    /** Reading the bundled JSON Schema files: {@link MiniJson}, reference Jackson's parser ({@link JacksonJson}). */
-    JSON,
     /**
      * Writing an import: column segments added with {@code IndexWriter.addIndexes}, reference Lucene's
      * own {@code IndexWriter.updateDocument} per row. The index package also takes the reference by

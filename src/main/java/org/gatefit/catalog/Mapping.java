@@ -70,7 +70,7 @@ public final class Mapping {
         }
         Object doc;
         try {
-            doc = FastPath.JSON.reference() ? JacksonJson.parse(text) : MiniJson.parse(text);
+            doc = Json.parse(text);
         } catch (IllegalArgumentException e) {
             throw new BadValueException("--map-file " + shown + ": not a mapping file: " + e.getMessage()
                     + " (expected JSON as catalog-schema/mapping.schema.json describes)");

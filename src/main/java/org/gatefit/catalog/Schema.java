@@ -71,7 +71,7 @@ public final class Schema {
                 throw new IllegalStateException("schema resource missing from the build: " + res);
             }
             String text = new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
-            s = parse(k, FastPath.JSON.reference() ? JacksonJson.parse(text) : MiniJson.parse(text));
+            s = parse(k, Json.parse(text));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + res, e);
         }
@@ -79,7 +79,7 @@ public final class Schema {
         return s;
     }
 
-    /** Builds a schema from a parsed JSON Schema document ({@link MiniJson} values). */
+    /** Builds a schema from a parsed JSON Schema document ({@link Json} values). */
     @SuppressWarnings("unchecked")
     static Schema parse(Kind kind, Object document) {
         Map<String, Object> root = (Map<String, Object>) document;
@@ -105,7 +105,7 @@ public final class Schema {
     }
 
     private static Double number(Object v) {
-        return v instanceof MiniJson.Num n ? n.doubleValue() : Double.parseDouble(text(v));
+        return v instanceof Json.Num n ? n.doubleValue() : Double.parseDouble(text(v));
     }
 
     @SuppressWarnings("unchecked")
