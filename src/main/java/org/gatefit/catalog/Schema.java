@@ -19,11 +19,14 @@ import java.util.regex.Pattern;
  *
  * <p>Besides standard keywords ({@code type}, {@code enum}, {@code pattern}, {@code minimum},
  * {@code exclusiveMinimum}, {@code maximum}, {@code default}, {@code required}, {@code examples})
- * the files use two annotations of ours: {@code x-unit} (the unit of a number, e.g. {@code nC})
+ * the files use annotations of ours: {@code x-unit} (the unit of a number, e.g. {@code nC})
  * {@code x-default-from} (the column whose value fills an empty cell) and {@code x-words-only}
  * (a free text searched by its words, not compared or sorted, so the index keeps no exact term or
  * sort value for it), {@code x-headings} (the headings people's sheets name the column by, see
- * {@link Headings}) and {@code x-choice-words} (per choice, the other ways people write it).
+ * {@link Headings}), {@code x-choice-words} (per choice, the other ways people write it) and
+ * {@code x-replacement} (how {@code replace} compares a substitute's value: label, compare —
+ * same, higher, lower, yes, window-relative, window-absolute — essential, window; the one place
+ * that column knowledge lives, {@link Column.Substitute}).
  */
 public final class Schema {
     /** Classpath folder of the bundled schema files. */
@@ -155,9 +158,14 @@ public final class Schema {
                 words.put(text(w), e.getKey());
             }
         }
+        Column.Substitute replacement = null;
+        if (p.get("x-replacement") instanceof Map<?, ?> r) {
+            replacement = new Column.Substitute(text(r.get("label")), Column.Compare.of(text(r.get("compare"))),
+                    Boolean.TRUE.equals(r.get("essential")), r.containsKey("window") ? number(r.get("window")) : 0);
+        }
         return new Column(name, type, unit, required, choices, pattern, min, minEx, max, def, defFrom,
                 p.containsKey("description") ? text(p.get("description")) : "", example,
-                Boolean.TRUE.equals(p.get("x-words-only")), headings, words);
+                Boolean.TRUE.equals(p.get("x-words-only")), headings, words, replacement);
     }
 
     public Kind kind() {

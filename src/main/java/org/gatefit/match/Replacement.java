@@ -42,23 +42,20 @@ import org.gatefit.catalog.Schema;
  */
 public final class Replacement {
 
-    /** How a parameter is compared. */
-    enum Sense { SAME, HIGHER, LOWER, YES, WINDOW_REL, WINDOW_ABS }
-
+    /** How a parameter is compared: {@link Column.Compare}, read from the schema files. */
     /**
+     * One compared column, as the schema's {@code x-replacement} says ({@link Column.Substitute}).
+     *
      * @param column    catalog column
      * @param label     name for people
      * @param sense     comparison
      * @param essential whether worse means "not offered"
-     * @param window    half-width of the window: a fraction for WINDOW_REL, volts for WINDOW_ABS
+     * @param window    half-width of the window: a fraction for WINDOW_RELATIVE, the column's unit for WINDOW_ABSOLUTE
+     * @param unit      the column's unit symbol ("" when it has none)
      */
-    record Param(String column, String label, Sense sense, boolean essential, double window) {
+    record Param(String column, String label, Column.Compare sense, boolean essential, double window, String unit) {
     }
 
-    /** Window for gate charges, capacitances, peak currents, output resistances (common practice, no source). */
-    public static final double CHARGE_WINDOW = 0.20;
-    /** Window for threshold, plateau, recommended drive and UVLO levels, in volts (common practice, no source). */
-    public static final double LEVEL_WINDOW = 0.5;
     /**
      * How far an essential numeric rating (blocking voltage, V_GS limits, offset and isolation
      * ratings) may fall short of the original's, as a fraction of it, and still be offered with a
@@ -66,52 +63,32 @@ public final class Replacement {
      */
     public static final double RATING_TOLERANCE = 0.10;
 
-    static final List<Param> SWITCH = List.of(
-            new Param("technology", "technology", Sense.SAME, true, 0),
-            new Param("channel", "channel type", Sense.SAME, true, 0),
-            new Param("v_block_v", "blocking voltage", Sense.HIGHER, true, 0),
-            new Param("v_gs_max_v", "V_GS max", Sense.HIGHER, true, 0),
-            new Param("v_gs_min_v", "V_GS min", Sense.LOWER, true, 0),
-            new Param("i_cont_a", "continuous current", Sense.HIGHER, false, 0),
-            new Param("r_on_mohm", "R_DS(on)", Sense.LOWER, false, 0),
-            new Param("v_ce_sat_v", "V_CE(sat)", Sense.LOWER, false, 0),
-            new Param("r_on_vgs_v", "full-enhancement V_GS", Sense.LOWER, false, 0),
-            new Param("v_th_min_v", "V_th min", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("v_th_max_v", "V_th max", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("v_gate_on_v", "recommended on level", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("v_gate_off_v", "recommended off level", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("q_g_nc", "gate charge Q_g", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("q_gs_nc", "Q_gs", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("q_gd_nc", "Q_gd", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("v_plateau_v", "plateau voltage", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("c_iss_pf", "C_iss", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("c_rss_pf", "C_rss", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("r_g_int_ohm", "internal gate resistance", Sense.WINDOW_REL, false, 0.5));
+    static final List<Param> SWITCH = params(Kind.SWITCH);
+    static final List<Param> DRIVER = params(Kind.DRIVER);
 
-    static final List<Param> DRIVER = List.of(
-            new Param("topology", "topology", Sense.SAME, true, 0),
-            new Param("input_polarity", "input polarity", Sense.SAME, true, 0),
-            new Param("channels", "channels", Sense.SAME, true, 0),
-            new Param("v_offset_max_v", "offset rating", Sense.HIGHER, true, 0),
-            new Param("isolation_vrms", "isolation rating", Sense.HIGHER, true, 0),
-            new Param("v_supply_min_v", "minimum supply", Sense.LOWER, false, 0),
-            new Param("v_supply_max_v", "maximum supply", Sense.HIGHER, false, 0),
-            new Param("v_in_max_v", "input maximum", Sense.HIGHER, false, 0),
-            new Param("v_ih_v", "V_IH", Sense.LOWER, false, 0),
-            new Param("v_il_v", "V_IL", Sense.HIGHER, false, 0),
-            new Param("v_neg_min_v", "negative rail", Sense.LOWER, false, 0),
-            new Param("p_max_w", "package power", Sense.HIGHER, false, 0),
-            new Param("bootstrap_diode", "bootstrap diode", Sense.YES, false, 0),
-            new Param("miller_clamp", "Miller clamp", Sense.YES, false, 0),
-            new Param("t_match_ns", "delay matching", Sense.LOWER, false, 0),
-            new Param("i_qbs_ua", "high-side quiescent", Sense.LOWER, false, 0),
-            new Param("uvlo_on_v", "UVLO rising", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("uvlo_off_v", "UVLO falling", Sense.WINDOW_ABS, false, LEVEL_WINDOW),
-            new Param("i_source_a", "peak source current", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("i_sink_a", "peak sink current", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("r_source_ohm", "source resistance", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("r_sink_ohm", "sink resistance", Sense.WINDOW_REL, false, CHARGE_WINDOW),
-            new Param("t_prop_ns", "propagation delay", Sense.WINDOW_REL, false, CHARGE_WINDOW));
+    /**
+     * The columns {@code replace} compares for a kind, from the schema files' {@code x-replacement}
+     * (the one place this knowledge lives): essentials first, then ratings, then windows, each in
+     * the schema's column order.
+     */
+    private static List<Param> params(Kind kind) {
+        List<Param> out = new ArrayList<>();
+        for (int group = 0; group < 3; group++) {
+            for (Column c : Schema.of(kind).columns()) {
+                Column.Substitute r = c.replacement();
+                if (r == null) {
+                    continue;
+                }
+                boolean window = r.compare() == Column.Compare.WINDOW_RELATIVE || r.compare() == Column.Compare.WINDOW_ABSOLUTE;
+                int g = r.essential() ? 0 : window ? 2 : 1;
+                if (g == group) {
+                    out.add(new Param(c.name(), r.label(), r.compare(), r.essential(), r.window(),
+                            c.unit() == null ? "" : c.unit().symbol()));
+                }
+            }
+        }
+        return List.copyOf(out);
+    }
 
     /** Grades, best first. */
     public enum Grade {
@@ -240,14 +217,19 @@ public final class Replacement {
      */
     public static Prefilter prefilter(Row original, boolean includeObsolete) {
         Prefilter.Builder b = new Prefilter.Builder();
-        if (original.kind() == Kind.SWITCH) {
-            b.require(Prefilter.Condition.is("technology", Op.EQ, original.text("technology")));
-            b.require(Prefilter.Condition.of("v_block_v", Op.GE, tolerated(Sense.HIGHER, original.number("v_block_v"))));
-            b.require(Prefilter.Condition.of("v_gs_max_v", Op.GE, tolerated(Sense.HIGHER, original.number("v_gs_max_v"))));
-            b.require(Prefilter.Condition.of("v_gs_min_v", Op.LE, tolerated(Sense.LOWER, original.number("v_gs_min_v"))));
-        } else {
-            b.require(Prefilter.Condition.is("topology", Op.EQ, original.text("topology")));
-            b.require(Prefilter.Condition.is("input_polarity", Op.EQ, original.text("input_polarity")));
+        for (Param p : original.kind() == Kind.SWITCH ? SWITCH : DRIVER) {
+            Column c = Schema.of(original.kind()).column(p.column()).orElseThrow();
+            if (!p.essential() || !c.required()) {
+                continue; // a candidate lacking the value is not certain to be left out
+            }
+            boolean text = c.type() == org.gatefit.catalog.ColumnType.TEXT || c.type() == org.gatefit.catalog.ColumnType.CHOICE;
+            switch (p.sense()) {
+                case SAME -> b.require(text ? Prefilter.Condition.is(p.column(), Op.EQ, original.text(p.column()))
+                        : Prefilter.Condition.of(p.column(), Op.EQ, original.number(p.column())));
+                case HIGHER -> b.require(Prefilter.Condition.of(p.column(), Op.GE, tolerated(p.sense(), original.number(p.column()))));
+                case LOWER -> b.require(Prefilter.Condition.of(p.column(), Op.LE, tolerated(p.sense(), original.number(p.column()))));
+                default -> throw new IllegalStateException("essential " + p.column() + " compared as " + p.sense());
+            }
         }
         if (!includeObsolete) {
             b.require(Prefilter.Condition.is("lifecycle", Op.NE, Lifecycle.OBSOLETE.id()));
@@ -456,11 +438,11 @@ public final class Replacement {
             String assessment = assess(p, a, b);
             String unit = col.unitSymbol();
             if (p.essential() && assessment.equals("worse")) {
-                return Evaluation.no(wordRejection, () -> p.sense() == Sense.SAME
+                return Evaluation.no(wordRejection, () -> p.sense() == Column.Compare.SAME
                         ? p.label() + " " + show(b) + ", not " + show(a) + " (must be equal)"
                         : p.label() + " " + show(b) + suffix(unit) + " against " + show(a) + suffix(unit)
                         + ": short by more than the " + Eng.pct(RATING_TOLERANCE) + " tolerance (must be equal or "
-                        + (p.sense() == Sense.HIGHER ? "higher" : "lower") + ")");
+                        + (p.sense() == Column.Compare.HIGHER ? "higher" : "lower") + ")");
             }
             if (p.essential() && assessment.equals("re-verify") && b != null) {
                 shortOf.add(p.label() + " " + show(a) + " → " + show(b) + suffix(unit));
@@ -586,9 +568,9 @@ public final class Replacement {
      * original's value less {@link #RATING_TOLERANCE} of its magnitude. The prefilter and
      * {@link #assess} use this one expression, so they agree at the edge.
      */
-    static double tolerated(Sense sense, double original) {
+    static double tolerated(Column.Compare sense, double original) {
         double slack = RATING_TOLERANCE * Math.abs(original);
-        return sense == Sense.HIGHER ? original - slack : original + slack;
+        return sense == Column.Compare.HIGHER ? original - slack : original + slack;
     }
 
     /**
@@ -624,10 +606,10 @@ public final class Replacement {
             return "equal";
         }
         return switch (p.sense()) {
-            case HIGHER -> y > x ? "better" : p.essential() && y >= tolerated(Sense.HIGHER, x) ? "re-verify" : "worse";
-            case LOWER -> y < x ? "better" : p.essential() && y <= tolerated(Sense.LOWER, x) ? "re-verify" : "worse";
-            case WINDOW_REL -> Math.abs(y - x) <= p.window() * Math.abs(x) ? "within-window" : "re-verify";
-            case WINDOW_ABS -> Math.abs(y - x) <= p.window() ? "within-window" : "re-verify";
+            case HIGHER -> y > x ? "better" : p.essential() && y >= tolerated(Column.Compare.HIGHER, x) ? "re-verify" : "worse";
+            case LOWER -> y < x ? "better" : p.essential() && y <= tolerated(Column.Compare.LOWER, x) ? "re-verify" : "worse";
+            case WINDOW_RELATIVE -> Math.abs(y - x) <= p.window() * Math.abs(x) ? "within-window" : "re-verify";
+            case WINDOW_ABSOLUTE -> Math.abs(y - x) <= p.window() ? "within-window" : "re-verify";
             case SAME, YES -> throw new IllegalStateException();
         };
     }
@@ -646,7 +628,7 @@ public final class Replacement {
             for (int i = 0; i < ps.size(); i++) {
                 Param p = ps.get(i);
                 String cls = p.essential() ? "essential" : switch (p.sense()) {
-                    case WINDOW_REL, WINDOW_ABS -> "window";
+                    case WINDOW_RELATIVE, WINDOW_ABSOLUTE -> "window";
                     default -> "rating";
                 };
                 sb.append("| `").append(p.column()).append("` | ").append(cls).append(" | ").append(how.get(i).getValue())
@@ -666,8 +648,8 @@ public final class Replacement {
                 case HIGHER -> p.essential() ? "must be equal or higher" : "higher is better";
                 case LOWER -> p.essential() ? "must be equal or lower" : "lower is better";
                 case YES -> "yes is better";
-                case WINDOW_REL -> "re-verify outside ±" + Eng.pct(p.window());
-                case WINDOW_ABS -> "re-verify outside ±" + Eng.num(p.window()) + " V";
+                case WINDOW_RELATIVE -> "re-verify outside ±" + Eng.pct(p.window());
+                case WINDOW_ABSOLUTE -> "re-verify outside ±" + Eng.num(p.window()) + " " + p.unit();
             };
             out.add(Map.entry(p.column(), how));
         }
