@@ -70,6 +70,10 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
+    /** How the stage sheet of --stages is read (as check reads its sheet). */
+    @Mixin
+    SheetOptions sheet;
+
     ReplaceCommand(Context ctx) {
         super(ctx);
     }
@@ -89,8 +93,11 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
         List<Row> stageRows = List.of();
         Bom b = null;
         if (stages != null) {
-            stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString(),
-                    new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println));
+            // The stage sheet is read as check reads it: the same reading options (--map, --map-file,
+            // --encoding, --header-row, --sheet); the BOM has headings of its own, so only the encoding applies to it.
+            org.gatefit.catalog.SheetReader.Options options = sheet == null
+                    ? new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println) : sheet.options(ctx);
+            stageRows = CheckCommand.readStages(ctx.path(stages), stages.toString(), options);
             if (stage != null) {
                 stageRows = List.of(StageRowOptions.find(stageRows, stages.toString(), stage));
             }
@@ -99,7 +106,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                     throw new NoSuchFileException(bom.toString());
                 }
                 b = Bom.read(ctx.path(bom), bom.toString(),
-                        new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println));
+                        new org.gatefit.catalog.SheetReader.Options(options.encoding(), 0, null, null, options.notes()));
             }
         }
         Replacement.Result r;
@@ -119,7 +126,8 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                 throw new UsageException("--stage " + stage + ": that row of " + stages + " does not use " + part
                         + "; name a stage it sits in");
             }
-            header = header("replace", c, input(ReportHeader.Role.STAGES, stages), input(ReportHeader.Role.BOM, bom));
+            header = header("replace", c, input(ReportHeader.Role.STAGES, stages), input(ReportHeader.Role.BOM, bom),
+                    input(ReportHeader.Role.MAP_FILE, sheet == null || stages == null ? null : sheet.mapFile));
         }
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {

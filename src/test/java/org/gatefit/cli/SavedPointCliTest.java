@@ -156,4 +156,32 @@ class SavedPointCliTest {
         assertEquals(ExitCode.BAD_DATA, missing.exit(), missing.dump());
         assertTrue(missing.err().contains("nope.csv"), missing.dump());
     }
+
+    /**
+     * replace reads its stage sheet through the same front end as check (issue 18, "One front end"):
+     * the example sheet saved as a European office saves it — a title row, semicolons, decimal
+     * commas, Windows-1252, and a heading of the office's own ("Stufe" for stage) — is read with
+     * --encoding, --header-row and --map, and gives the same re-checked stages as the original sheet.
+     */
+    @Test
+    void replaceReadsItsStageSheetWithTheSheetOptionsCheckTakes() throws Exception {
+        List<String> lines = Files.readAllLines(STAGES, StandardCharsets.UTF_8);
+        StringBuilder office = new StringBuilder("Stufenliste Antrieb, Rev. B (Entwurf für Prüfung)\r\n");
+        office.append(lines.get(0).replace("stage,", "Stufe,").replace(',', ';')).append("\r\n");
+        for (String l : lines.subList(1, lines.size())) {
+            office.append(l.replace(',', ';').replaceAll("(\\d)\\.(\\d)", "$1,$2")).append("\r\n");
+        }
+        Path sheet = tmp.resolve("stufen.csv");
+        Files.write(sheet, office.toString().getBytes(java.nio.charset.Charset.forName("windows-1252")));
+        String bom = Project.file("examples/bom.csv").toString();
+        JsonNode want = json(list("replace", "CVL-1025TL", "--stages", STAGES.toString(), "--bom", bom, "--format", "json"));
+        JsonNode got = json(list("replace", "CVL-1025TL", "--stages", sheet.toString(), "--bom", bom, "--encoding",
+                "windows-1252", "--header-row", "2", "--map", "Stufe=stage", "--format", "json"));
+        assertEquals(want.get("stages"), got.get("stages"));
+        assertTrue(want.get("stages").size() >= 3, want.get("stages").toString());
+        assertEquals(want.get("candidates").toString().replace(STAGES.toString(), "SHEET"),
+                got.get("candidates").toString().replace(sheet.toString(), "SHEET"));
+        CliRun plain = CliRun.on(catalog, "replace", "CVL-1025TL", "--stages", sheet.toString(), "--bom", bom);
+        assertTrue(plain.exit() != ExitCode.OK, "without the options the title row is no header: " + plain.dump());
+    }
 }
