@@ -181,4 +181,34 @@ class ShortlistSupplyCostCliTest {
         assertTrue(note > 0 && note < table, r.dump());
         assertEquals(note, r.out().lastIndexOf("Not given: --duty-max"), r.dump());
     }
+
+    /**
+     * The deciding column names a check of the pair's own before an open question: with 15 Ω and a
+     * hard-switched bridge the bootstrapped drivers warn on dv-dt as well as waiting for the duty.
+     */
+    @Test
+    void decidingNamesThePairsOwnWarningBeforeTheOpenQuestion() throws IOException {
+        JsonNode j = JSON.readTree(CliRun.on(catalog, "shortlist", "--switch", SWITCH, "--side", "high", "--bus", "48",
+                "--freq", "100", "--drive", "12", "--rg", "15", "--rg-off", "0.5", "--edge", "100", "--format", "json").out());
+        String both = null;
+        for (JsonNode p : j.get("candidates")) {
+            boolean open = check(p, "bootstrap").has("not_given");
+            boolean ownWarn = false;
+            for (JsonNode c : p.get("checks")) {
+                ownWarn |= !c.has("not_given") && !c.get("verdict").asText().equals("pass");
+            }
+            if (open && ownWarn) {
+                both = p.get("driver").asText();
+                break;
+            }
+        }
+        assertTrue(both != null, "a driver both waiting for the duty and warning on its own: " + j);
+        CliRun text = CliRun.on(catalog, "shortlist", "--switch", SWITCH, "--side", "high", "--bus", "48", "--freq", "100",
+                "--drive", "12", "--rg", "15", "--rg-off", "0.5", "--edge", "100");
+        String row = text.out().lines()
+                .filter(l -> l.matches("\\s*\\d+\\s+" + java.util.regex.Pattern.quote(both) + "\\s+(pass|warn|fail)\\s.*"))
+                .findFirst().orElseThrow(() -> new AssertionError("no table row for " + both + ":\n" + text.dump()));
+        assertFalse(row.endsWith("bootstrap unknown"), row);
+        assertTrue(row.matches(".*\\S+ (warn|unknown)$"), row);
+    }
 }
