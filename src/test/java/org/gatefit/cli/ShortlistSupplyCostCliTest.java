@@ -203,11 +203,12 @@ class ShortlistSupplyCostCliTest {
             }
         }
         assertTrue(both != null, "a driver both waiting for the duty and warning on its own: " + j);
+        String driver = both;
         CliRun text = CliRun.on(catalog, "shortlist", "--switch", SWITCH, "--side", "high", "--bus", "48", "--freq", "100",
                 "--drive", "12", "--rg", "15", "--rg-off", "0.5", "--edge", "100");
         String row = text.out().lines()
-                .filter(l -> l.matches("\\s*\\d+\\s+" + java.util.regex.Pattern.quote(both) + "\\s+(pass|warn|fail)\\s.*"))
-                .findFirst().orElseThrow(() -> new AssertionError("no table row for " + both + ":\n" + text.dump()));
+                .filter(l -> l.matches("\\s*\\d+\\s+" + java.util.regex.Pattern.quote(driver) + "\\s+(pass|warn|fail)\\s.*"))
+                .findFirst().orElseThrow(() -> new AssertionError("no table row for " + driver + ":\n" + text.dump()));
         assertFalse(row.endsWith("bootstrap unknown"), row);
         assertTrue(row.matches(".*\\S+ (warn|unknown)$"), row);
     }
