@@ -107,7 +107,15 @@ const G = {
       ['power-loop', n(op.power_loop_h * 1e9)], ['load', n(op.i_load_a)]];
     if (op.logic) out.push(['logic', op.logic]);
     else out.push(['v-oh', n(op.v_oh_v)], ['v-ol', n(op.v_ol_v)]);
+    // A bridge stage's dv-dt is judged on its partner's turn-on edge (check): carried in full
+    // precision, so the pair page judges the same edge.
+    if (op.twin) out.push(['twin-edge', G.twinEdge(op.twin)]);
     return out.filter(([, v]) => v !== null && v !== undefined && v !== 'NaN');
+  },
+
+  /** The JSON operating_point.twin as explain's --twin-edge value NAME=COLD,HOT (V/ns). */
+  twinEdge(t) {
+    return t.name + '=' + String(t.dv_dt_25c_v_per_ns) + ',' + String(t.dv_dt_tj_v_per_ns);
   },
 
   /** Fills the operating-point fieldset, values from the page's query. */
