@@ -331,6 +331,20 @@ class ServeApiTest {
             assertTrue(doc.get("paths").has(p), "documents " + p);
         }
         assertTrue(doc.get("paths").get("/api/v1/replace").has("post"), "documents POST /api/v1/replace");
+        // Every explain parameter documented is one the command takes (named as its long option), and
+        // the partner's edge the design page's links carry is among them.
+        picocli.CommandLine.Model.CommandSpec explain = Cli.create(new java.io.PrintWriter(java.io.Writer.nullWriter()),
+                new java.io.PrintWriter(java.io.Writer.nullWriter()), Map.of(), CliRun.CLOCK).getSubcommands()
+                .get("explain").getCommandSpec();
+        List<String> known = Answers.known(explain, "explain");
+        List<String> documented = new ArrayList<>();
+        for (JsonNode p : doc.get("paths").get("/api/v1/explain").get("get").get("parameters")) {
+            documented.add(p.get("name").asText());
+        }
+        for (String name : documented) {
+            assertTrue(known.contains(name) || name.equals("download"), "explain takes the documented " + name);
+        }
+        assertTrue(documented.contains("twin-edge"), documented.toString());
     }
 
     @Test
