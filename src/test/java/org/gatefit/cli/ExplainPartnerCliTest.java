@@ -181,5 +181,8 @@ class ExplainPartnerCliTest {
         CliRun r = CliRun.on(catalog, pair("TI-VH", "--freq", "10", "--bom", BOM.toString()).toArray(String[]::new));
         assertEquals(ExitCode.USAGE, r.exit(), r.dump());
         assertTrue(r.err().contains("--bom needs --stages and --stage"), r.dump());
+        String help = CliRun.on(catalog, "explain", "--help").out().replaceAll("\\s+", " ");
+        assertTrue(help.contains("--twin-edge=NAME=COLD,HOT The turn-on edge of the other switch of the bridge")
+                && help.contains("--bom=BOM.csv BOM to resolve the designators of the --stages sheet"), help);
     }
 }
