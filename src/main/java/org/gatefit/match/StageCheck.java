@@ -168,6 +168,55 @@ public final class StageCheck {
         return out;
     }
 
+    /**
+     * A stage's bridge partner as {@code check} finds it ({@link DeadTimeCheck#bridges}, the one pairing
+     * rule) and the partner's turn-on edge as {@code check} judges the stage's dv-dt on it.
+     *
+     * @param partner    the partner's stage id, or null when the stage has no partner in the sheet
+     * @param twin       the partner's turn-on edge, or null when there is no partner or its edge cannot be
+     *                   computed (then, as in {@code check}, the pair itself stands in for the twin)
+     * @param unresolved the stages whose parts or operating point could not be resolved, as
+     *                   {@code check} reports them (such a stage is no one's partner)
+     */
+    public record Partner(String partner, OperatingPoint.Twin twin, List<String> unresolved) {
+        public Partner {
+            unresolved = List.copyOf(unresolved);
+        }
+    }
+
+    /**
+     * The bridge partner of {@code stage}, one of {@code stages}, found exactly as {@link #run} finds it:
+     * every stage resolved as {@code check} resolves it, then paired by {@link DeadTimeCheck#bridges}.
+     */
+    public static Partner partner(List<Row> stages, Row stage, Bom bom, PartSource parts, Margins m) {
+        int self = stages.indexOf(stage);
+        if (self < 0) {
+            throw new IllegalArgumentException("expected a row of the stage sheet, got line " + stage.line());
+        }
+        Map<String, Optional<Row>> driverCache = new HashMap<>();
+        Map<String, Optional<Row>> switchCache = new HashMap<>();
+        Function<String, Optional<Row>> drivers = pn -> driverCache.computeIfAbsent(pn,
+                p -> Replacement.lookup(parts, org.gatefit.catalog.Kind.DRIVER, p));
+        Function<String, Optional<Row>> switches = pn -> switchCache.computeIfAbsent(pn,
+                p -> Replacement.lookup(parts, org.gatefit.catalog.Kind.SWITCH, p));
+        List<StageResult> results = new ArrayList<>(stages.size());
+        List<String> unresolved = new ArrayList<>();
+        for (Row st : stages) {
+            StageResult r = one(st, bom, drivers, switches, m);
+            results.add(r);
+            if (r.point() == null) {
+                unresolved.add(r.stage());
+            }
+        }
+        for (int[] g : DeadTimeCheck.bridges(results, stages)) {
+            if (g[0] == self || g[1] == self) {
+                StageResult other = results.get(g[0] == self ? g[1] : g[0]);
+                return new Partner(other.stage(), twin(other, drivers, switches, m), unresolved);
+            }
+        }
+        return new Partner(null, null, unresolved);
+    }
+
     /** The switch-node dv/dt of a stage's own turn-on at 25 °C and at its hot corner, as a twin; null when unknown. */
     private static OperatingPoint.Twin twin(StageResult r, Function<String, Optional<Row>> drivers,
                                             Function<String, Optional<Row>> switches, Margins m) {

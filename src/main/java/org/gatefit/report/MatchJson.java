@@ -92,6 +92,14 @@ final class MatchJson {
         number(g, "power_loop_h", p.powerLoop());
         number(g, "i_load_a", p.iLoad());
         number(g, "t_j_c", p.tj());
+        if (p.twin() != null) {
+            // The other switch's turn-on edge the dv-dt rule judged (explain --twin-edge NAME=COLD,HOT).
+            g.writeObjectFieldStart("twin");
+            g.writeStringField("name", p.twin().name());
+            number(g, "dv_dt_25c_v_per_ns", p.twin().slewCold() * 1e-9);
+            number(g, "dv_dt_tj_v_per_ns", p.twin().slewHot() * 1e-9);
+            g.writeEndObject();
+        }
         g.writeEndObject();
         g.writeArrayFieldStart("assumed");
         for (String a : p.assumed()) {

@@ -72,7 +72,7 @@ public final class NetworkReports {
         return sb.toString();
     }
 
-    /** {@code network}: [{role, value, unit, rating, why}] and {@code network_left_out}: [notes]. */
+    /** {@code network}: [{role, value, unit, value_text (as the other formats show it), rating, why}] and {@code network_left_out}: [notes]. */
     static void json(JsonGenerator g, GateNetwork n) throws IOException {
         g.writeArrayFieldStart("network");
         for (GateNetwork.Part p : n.parts()) {
@@ -80,6 +80,7 @@ public final class NetworkReports {
             g.writeStringField("role", p.role());
             MatchJson.number(g, "value", p.value());
             g.writeStringField("unit", p.unit());
+            g.writeStringField("value_text", value(p));
             g.writeStringField("rating", p.rating());
             g.writeStringField("why", p.why());
             g.writeEndObject();

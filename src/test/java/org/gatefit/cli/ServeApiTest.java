@@ -126,6 +126,52 @@ class ServeApiTest {
         }
     }
 
+    /**
+     * The design page links a bridge stage to the pair page with its partner's edge ({@code twin-edge},
+     * from check's {@code operating_point.twin}): the explain API then answers as the command line
+     * with {@code --twin-edge}, and its dv-dt check is the one check gave the stage (GC-CLAMP of the
+     * example, judged on GC-MAIN's turn-on; a stage of unlike halves).
+     */
+    @Test
+    void explainTakesThePartnersEdgeSoThePairPageJudgesAsCheck() throws Exception {
+        CliRun c = CliRun.on(cat, "check", Project.file("examples/stages.csv").toString(), "--bom",
+                Project.file("examples/bom.csv").toString(), "--format", "json");
+        JsonNode stage = null;
+        for (JsonNode s : JSON.readTree(c.out()).get("results")) {
+            if (s.get("stage").asText().equals("GC-CLAMP")) {
+                stage = s;
+            }
+        }
+        JsonNode t = stage.get("operating_point").get("twin");
+        String edge = t.get("name").asText() + "=" + t.get("dv_dt_25c_v_per_ns").asText() + ","
+                + t.get("dv_dt_tj_v_per_ns").asText();
+        // GC-CLAMP's row of examples/stages.csv as parameters.
+        String point = "&side=high&bus=375&freq=200&edge=10&drive=6&drive-neg=0&v-oh=4.6&v-ol=0.2&pwm=active-high"
+                + "&rg=10&rg-off=0.5&duty-max=0.6&parallel=1&loop=4&bridge=yes&tj=125";
+        String path = "/api/v1/explain?driver=" + stage.get("driver").asText() + "&switch=" + stage.get("switch").asText()
+                + point + "&twin-edge=" + q(edge);
+        same(path, "explain", "--driver", stage.get("driver").asText(), "--switch", stage.get("switch").asText(),
+                "--side", "high", "--bus", "375", "--freq", "200", "--edge", "10", "--drive", "6", "--drive-neg", "0",
+                "--v-oh", "4.6", "--v-ol", "0.2", "--pwm", "active-high", "--rg", "10", "--rg-off", "0.5", "--duty-max",
+                "0.6", "--parallel", "1", "--loop", "4", "--bridge", "yes", "--tj", "125", "--twin-edge", edge);
+        JsonNode api = JSON.readTree(get(path).body());
+        JsonNode want = null;
+        for (JsonNode ch : stage.get("checks")) {
+            if (ch.get("rule").asText().equals("dv-dt")) {
+                want = ch;
+            }
+        }
+        JsonNode got = null;
+        for (JsonNode ch : api.get("checks")) {
+            if (ch.get("rule").asText().equals("dv-dt")) {
+                got = ch;
+            }
+        }
+        assertEquals(want.get("verdict"), got.get("verdict"));
+        assertEquals(want.get("message"), got.get("message"));
+        assertTrue(got.get("message").asText().contains("(GC-MAIN's turn-on)"), got.toString());
+    }
+
     @Test
     void theWebJarsArePartOfTheServer() throws Exception {
         HttpResponse<String> js = get("/webjars/uplot/1.6.30/dist/uPlot.iife.min.js");
@@ -285,6 +331,20 @@ class ServeApiTest {
             assertTrue(doc.get("paths").has(p), "documents " + p);
         }
         assertTrue(doc.get("paths").get("/api/v1/replace").has("post"), "documents POST /api/v1/replace");
+        // Every explain parameter documented is one the command takes (named as its long option), and
+        // the partner's edge the design page's links carry is among them.
+        picocli.CommandLine.Model.CommandSpec explain = Cli.create(new java.io.PrintWriter(java.io.Writer.nullWriter()),
+                new java.io.PrintWriter(java.io.Writer.nullWriter()), Map.of(), CliRun.CLOCK).getSubcommands()
+                .get("explain").getCommandSpec();
+        List<String> known = Answers.known(explain, "explain");
+        List<String> documented = new ArrayList<>();
+        for (JsonNode p : doc.get("paths").get("/api/v1/explain").get("get").get("parameters")) {
+            documented.add(p.get("name").asText());
+        }
+        for (String name : documented) {
+            assertTrue(known.contains(name) || name.equals("download"), "explain takes the documented " + name);
+        }
+        assertTrue(documented.contains("twin-edge"), documented.toString());
     }
 
     @Test

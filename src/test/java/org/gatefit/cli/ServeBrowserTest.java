@@ -155,6 +155,44 @@ class ServeBrowserTest {
             String legend = plot.findElement(By.cssSelector(".u-legend")).getText();
             assertTrue(legend.contains("QND-D06L") && legend.contains("QND-D06H"), legend);
         }
+        // The gate-drive network of each pair on the page, as explain sizes it: a row per part, a
+        // column per driver with the value as the sheet shows it and its rating.
+        waiting().until(d -> !d.findElements(By.cssSelector("#network table.network")).isEmpty());
+        WebElement net = browser.findElement(By.cssSelector("#network table.network"));
+        String head = net.findElement(By.tagName("thead")).getText();
+        assertTrue(head.contains("QND-D06L") && head.contains("QND-D06H"), head);
+        for (String d : List.of("QND-D06L", "QND-D06H")) {
+            CliRun e = CliRun.on(cat, "explain", "--driver", d, "--switch", "QND-65G150D", "--freq", "200", "--bus", "375",
+                    "--format", "json");
+            JsonNode parts;
+            try {
+                parts = new ObjectMapper().readTree(e.out()).get("network");
+            } catch (java.io.IOException ex) {
+                throw new AssertionError(e.dump(), ex);
+            }
+            assertTrue(parts.size() >= 3, e.out());
+            int column = d.equals("QND-D06L") ? 1 : 2;
+            for (JsonNode p : parts) {
+                WebElement row = null;
+                for (WebElement tr : net.findElements(By.cssSelector("tbody tr"))) {
+                    if (tr.findElements(By.tagName("td")).get(0).getText().equals(p.get("role").asText())) {
+                        row = tr;
+                    }
+                }
+                assertTrue(row != null, "a row for " + p.get("role") + ": " + net.getText());
+                String cell = row.findElements(By.tagName("td")).get(column).getText();
+                assertTrue(cell.startsWith(p.get("value_text").asText()) && cell.contains("rating: " + p.get("rating")
+                        .asText()), d + " " + p.get("role") + ": " + cell);
+            }
+            String box = browser.findElement(By.id("network")).getText();
+            try {
+                for (JsonNode note : new ObjectMapper().readTree(e.out()).get("network_left_out")) {
+                    assertTrue(box.contains(d + ": left out \u2014 " + note.asText()), box);
+                }
+            } catch (java.io.IOException ex) {
+                throw new AssertionError(e.dump(), ex);
+            }
+        }
         WebElement frame = browser.findElements(By.cssSelector("#sheets iframe")).get(0);
         browser.switchTo().frame(frame);
         waiting().until(d -> d.findElements(By.tagName("svg")).size() >= 3);
@@ -217,6 +255,93 @@ class ServeBrowserTest {
         onlyOwnOrigin();
     }
 
+    /**
+     * A stage of a bridge of unlike halves (GC-CLAMP, QND-65G300D, against GC-MAIN, QND-65G150D): its
+     * link carries the partner's edge, so the pair page's sheet says check's own dv-dt sentence.
+     */
+    @Test
+    void designPageOpensABridgeStageJudgedOnItsPartnersEdge() throws Exception {
+        Path stages = Project.file("examples/stages.csv");
+        Path bom = Project.file("examples/bom.csv");
+        CliRun c = CliRun.on(cat, "check", stages.toString(), "--bom", bom.toString(), "--format", "json");
+        String message = null;
+        for (JsonNode s : new ObjectMapper().readTree(c.out()).get("results")) {
+            if (s.get("stage").asText().equals("GC-CLAMP")) {
+                for (JsonNode ch : s.get("checks")) {
+                    if (ch.get("rule").asText().equals("dv-dt")) {
+                        message = ch.get("message").asText();
+                    }
+                }
+            }
+        }
+        assertTrue(message != null && message.contains("(GC-MAIN's turn-on)"), message);
+        browser.get(server.url() + "design");
+        browser.findElement(By.name("stages")).sendKeys(stages.toAbsolutePath().toString());
+        browser.findElement(By.name("bom")).sendKeys(bom.toAbsolutePath().toString());
+        browser.findElement(By.cssSelector("#q button")).click();
+        waiting().until(d -> !tableText().isEmpty());
+        WebElement clamp = null;
+        for (WebElement r : browser.findElements(By.cssSelector("#out tbody tr"))) {
+            if (r.findElements(By.tagName("td")).get(0).getText().equals("GC-CLAMP")) {
+                clamp = r;
+            }
+        }
+        assertTrue(clamp != null, "a GC-CLAMP row");
+        assertTrue(clamp.getText().contains("calculation sheet (dv-dt on GC-MAIN\u2019s turn-on)"), clamp.getText());
+        String href = clamp.findElement(By.linkText("calculation sheet")).getAttribute("href");
+        assertTrue(href.contains("twin-edge=GC-MAIN"), href);
+        assertFalse(href.contains("power-loop"), "a value check left unknown stays unsaid: " + href);
+        browser.get(href);
+        assertTrue(browser.findElement(By.id("twin-edge")).getAttribute("value").startsWith("GC-MAIN="),
+                "the partner's edge in the form, to see and to clear");
+        waiting().until(d -> d.findElements(By.cssSelector("#sheets iframe")).size() == 1);
+        browser.switchTo().frame(browser.findElement(By.cssSelector("#sheets iframe")));
+        String want = message;
+        waiting().until(d -> d.findElement(By.tagName("body")).getText().contains(want));
+        browser.switchTo().defaultContent();
+        onlyOwnOrigin();
+    }
+
+    /**
+     * A stage id with markup (a user's sheet is text too) names the partner's edge on the design page
+     * and in the pair page's sheet: as text, no element made of it (the policy would stop its handler
+     * from running, so the test looks for the element and the literal text).
+     */
+    @Test
+    void aStageIdWithMarkupShowsAsTextOnTheDesignAndPairPages() throws Exception {
+        String id = "<img src=x onerror=\"window.pwned=3\">HI";
+        Path sheet = Files.createTempFile("stages", ".csv");
+        Files.writeString(sheet, "stage,driver,switch,side,bus_v,f_sw_khz,v_drive_v,leg\n\"" + id.replace("\"", "\"\"")
+                + "\",PGL-HB1046,CVL-1025TL,high,48,20,12,L1\nLO,PGL-HB1046,CVL-1045D8,low,48,20,12,L1\n");
+        try {
+            browser.get(server.url() + "design");
+            browser.findElement(By.name("stages")).sendKeys(sheet.toAbsolutePath().toString());
+            browser.findElement(By.cssSelector("#q button")).click();
+            waiting().until(d -> tableText().contains("LO"));
+            WebElement lo = null;
+            for (WebElement r : browser.findElements(By.cssSelector("#out tbody tr"))) {
+                if (r.findElements(By.tagName("td")).get(0).getText().equals("LO")) {
+                    lo = r;
+                }
+            }
+            assertTrue(lo != null, tableText());
+            assertTrue(lo.getText().contains("(dv-dt on " + id + "\u2019s turn-on)"), lo.getText());
+            assertTrue(tableText().contains(id), tableText());
+            assertTrue(browser.findElements(By.cssSelector("#out img")).isEmpty(), "no element made of a stage id");
+            browser.get(lo.findElement(By.linkText("calculation sheet")).getAttribute("href"));
+            waiting().until(d -> d.findElements(By.cssSelector("#sheets iframe")).size() == 1);
+            assertTrue(browser.findElements(By.cssSelector("main img")).isEmpty());
+            browser.switchTo().frame(browser.findElement(By.cssSelector("#sheets iframe")));
+            waiting().until(d -> d.findElement(By.tagName("body")).getText().contains("(" + id + "'s turn-on)"));
+            assertTrue(browser.findElements(By.cssSelector("img[src=x]")).isEmpty(), "no element made of it in the sheet");
+            browser.switchTo().defaultContent();
+            assertEquals(Boolean.TRUE, ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;"));
+            onlyOwnOrigin();
+        } finally {
+            Files.delete(sheet);
+        }
+    }
+
     @Test
     void catalogTextWithMarkupShowsAsText() {
         browser.get(server.url() + "part?kind=switch&part=XSS-1");
@@ -229,6 +354,18 @@ class ServeBrowserTest {
         waiting().until(d -> tableText().contains("XSS-1"));
         assertTrue(tableText().contains(HOSTILE));
         assertEquals(Boolean.TRUE, ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;"));
+        onlyOwnOrigin();
+
+        // A partner's name with markup in the pair page's link: shown as text on the page and in its sheet.
+        browser.get(server.url() + "pair?switch=QND-65G150D&driver=QND-D06L&freq=200&bus=375&twin-edge="
+                + java.net.URLEncoder.encode(HOSTILE + "=100,90", java.nio.charset.StandardCharsets.UTF_8));
+        waiting().until(d -> !d.findElements(By.cssSelector("#network table.network")).isEmpty());
+        assertEquals(HOSTILE + "=100,90", browser.findElement(By.id("twin-edge")).getAttribute("value"));
+        assertEquals(Boolean.TRUE, ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;"));
+        browser.switchTo().frame(browser.findElement(By.cssSelector("#sheets iframe")));
+        waiting().until(d -> d.findElement(By.tagName("body")).getText().contains(HOSTILE + "'s turn-on"));
+        assertEquals(Boolean.TRUE, ((JavascriptExecutor) browser).executeScript("return window.pwned === undefined;"));
+        browser.switchTo().defaultContent();
         onlyOwnOrigin();
     }
 }

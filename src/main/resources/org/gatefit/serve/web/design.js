@@ -49,6 +49,13 @@
           const q = new URLSearchParams([['switch', x.switch], ['driver', x.driver]].concat(G.opParams(x.operating_point)));
           const a = G.el('a', 'calculation sheet');
           a.href = 'pair?' + q.toString();
+          if (x.operating_point.twin) {
+            // The sheet judges dv-dt on the bridge partner's edge, as this check did (twin-edge above).
+            const span = G.el('span');
+            span.appendChild(a);
+            span.appendChild(G.el('span', ' (dv-dt on ' + x.operating_point.twin.name + '\u2019s turn-on)', 'note'));
+            return span;
+          }
           return a;
         } },
         { key: 'problems', cell: x => {

@@ -98,16 +98,27 @@ const G = {
   opParams(op) {
     if (!op) return [];
     const n = v => (v === null || v === undefined ? null : String(+(+v).toPrecision(6)));
-    const out = [['side', op.side], ['bus', n(op.bus_v)], ['freq', n(op.f_sw_hz / 1e3)], ['edge', n(op.edge_s * 1e9)],
+    // A value the JSON leaves null stays unsaid (null * 1e9 would be 0 in JavaScript: a power loop of
+    // 0 nH instead of an unknown one).
+    const scaled = (v, k) => (v === null || v === undefined ? null : n(v * k));
+    const out = [['side', op.side], ['bus', n(op.bus_v)], ['freq', scaled(op.f_sw_hz, 1e-3)], ['edge', scaled(op.edge_s, 1e9)],
       ['drive', n(op.v_drive_v)], ['drive-neg', n(op.v_drive_neg_v)],
       ['pwm', op.pwm_sense], ['rg', n(op.r_g_ohm)], ['rg-off', n(op.r_g_off_ohm)], ['duty-max', n(op.duty_max)],
-      ['parallel', n(op.parallel)], ['loop', n(op.loop_h * 1e9)], ['v-f-boot', n(op.v_f_boot_v)],
+      ['parallel', n(op.parallel)], ['loop', scaled(op.loop_h, 1e9)], ['v-f-boot', n(op.v_f_boot_v)],
       ['r-boot', n(op.r_boot_ohm)], ['dvdt', n(op.dv_dt_v_per_ns)], ['tj', n(op.t_j_c)],
       ['bridge', op.bridge === undefined ? null : (op.bridge ? 'yes' : 'no')],
-      ['power-loop', n(op.power_loop_h * 1e9)], ['load', n(op.i_load_a)]];
+      ['power-loop', scaled(op.power_loop_h, 1e9)], ['load', n(op.i_load_a)]];
     if (op.logic) out.push(['logic', op.logic]);
     else out.push(['v-oh', n(op.v_oh_v)], ['v-ol', n(op.v_ol_v)]);
+    // A bridge stage's dv-dt is judged on its partner's turn-on edge (check): carried in full
+    // precision, so the pair page judges the same edge.
+    if (op.twin) out.push(['twin-edge', G.twinEdge(op.twin)]);
     return out.filter(([, v]) => v !== null && v !== undefined && v !== 'NaN');
+  },
+
+  /** The JSON operating_point.twin as explain's --twin-edge value NAME=COLD,HOT (V/ns). */
+  twinEdge(t) {
+    return t.name + '=' + String(t.dv_dt_25c_v_per_ns) + ',' + String(t.dv_dt_tj_v_per_ns);
   },
 
   /** Fills the operating-point fieldset, values from the page's query. */

@@ -6,18 +6,20 @@
   form.elements.switch.value = p.get('switch') || '';
   form.elements.drivers.value = p.getAll('driver').join('\n');
   if (!form.elements.freq.value) form.elements.freq.value = '100';
+  form.elements['twin-edge'].value = p.get('twin-edge') || '';
 
   async function explain() {
     const sw = form.elements.switch.value.trim();
     const drivers = form.elements.drivers.value.split('\n').map(s => s.trim()).filter(s => s);
     if (!sw || !drivers.length) { G.status('name a switch and up to four drivers'); return; }
     if (drivers.length > 4) { G.status('compare up to four drivers at once', true); return; }
-    const op = G.formParams(form).filter(([k]) => G.OP.some(o => o[0] === k));
+    const op = G.formParams(form).filter(([k]) => k === 'twin-edge' || G.OP.some(o => o[0] === k));
     G.status('explaining\u2026');
     const compare = document.getElementById('compare');
     const sheets = document.getElementById('sheets');
     compare.replaceChildren();
     document.getElementById('overlay').replaceChildren();
+    document.getElementById('network').replaceChildren();
     sheets.replaceChildren();
     const results = [];
     try {
@@ -55,6 +57,7 @@
     compare.appendChild(G.el('h2', sw + ': ' + results.map(x => x.driver + ' ' + (G.SYMBOL[x.r.verdict] || '') + ' '
       + x.r.verdict + ' (' + x.r.score + ')').join(' \u00B7 ')));
     compare.appendChild(G.table(cols, rows));
+    network(results);
     overlay(results);
     // Each pair's calculation sheet with its gate waveforms, step response and margin bars: the
     // command line's own HTML report, framed without scripts.
@@ -72,6 +75,40 @@
       sheets.appendChild(sec);
     }
     G.status(results.length + (results.length === 1 ? ' pair' : ' pairs'));
+  }
+  // The gate-drive network of each pair, as explain sizes it (the JSON "network": one row per part,
+  // a column per driver with the value as the sheet shows it, its rating and why; then what was
+  // left out). Only shown here: every figure comes from the answer.
+  function network(results) {
+    const box = document.getElementById('network');
+    const roles = [];
+    for (const x of results) {
+      for (const p of x.r.network || []) if (!roles.includes(p.role)) roles.push(p.role);
+    }
+    if (!roles.length) return;
+    box.appendChild(G.el('h2', 'Gate-drive network'));
+    const cols = [{ key: 'part' }].concat(results.map(x => ({
+      key: x.driver,
+      cell: row => {
+        const p = (x.r.network || []).find(n => n.role === row.part);
+        const div = G.el('div');
+        if (!p) { div.textContent = '\u2014'; return div; }
+        div.appendChild(G.el('strong', p.value_text));
+        div.appendChild(G.el('div', 'rating: ' + p.rating));
+        div.appendChild(G.el('div', 'why: ' + p.why, 'note'));
+        return div;
+      }
+    })));
+    const t = G.table(cols, roles.map(r => ({ part: r })));
+    t.className = 'network';
+    box.appendChild(t);
+    for (const x of results) {
+      const left = x.r.network_left_out || [];
+      if (!left.length) continue;
+      const ul = G.el('ul', null, 'network-notes');
+      for (const n of left) ul.appendChild(G.el('li', x.driver + ': left out \u2014 ' + n));
+      box.appendChild(ul);
+    }
   }
   // The drivers' gate waveforms in one plot per edge (uPlot, served by this server from its
   // WebJar), from the explain JSON's waveforms; each driver a colour and a dash pattern, so the
