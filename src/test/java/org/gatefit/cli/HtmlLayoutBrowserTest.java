@@ -150,6 +150,77 @@ class HtmlLayoutBrowserTest {
         Files.write(keep.resolve(report + "-" + width + ".png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
     }
 
+    /** Invented long part numbers (no such parts exist), with hyphens a browser may break after. */
+    static final String LONG_SWITCH = "QZX-9999-ABCD-LONGNAME-01";
+    static final String LONG_SWITCH_2 = "QZX-9999-ABCD-LONGNAME-02";
+    static final String LONG_DRIVER = "QZX-9999-ABCD-LONGNAME-D1";
+
+    /**
+     * Each occurrence of a long part number outside the charts, as the number of line boxes its text
+     * takes ({@code Range.getClientRects}: one rectangle per line it spans), where it stands, and the
+     * height of its one line against the line height of its element.
+     */
+    private static final String PART_LINES = """
+            const re = /QZX-9999-ABCD-LONGNAME-[0-9A-Z]+/g;
+            const out = [];
+            const walk = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT);
+            for (let n; (n = walk.nextNode());) {
+              if (n.parentElement.closest('svg')) continue;
+              for (const m of n.data.matchAll(re)) {
+                const range = document.createRange();
+                range.setStart(n, m.index);
+                range.setEnd(n, m.index + m[0].length);
+                const rects = range.getClientRects();
+                out.push(rects.length + ' ' + n.parentElement.closest('td,th,h1,h2,h3,li,p,dd,figcaption,a,span')
+                    .tagName.toLowerCase() + ' ' + m[0]);
+              }
+            }
+            return out;""";
+
+    /**
+     * Part numbers never break across lines: in a phone-wide window (360 px) the shortlist and replace
+     * reports of parts with long, hyphenated invented numbers show every one of them on one line — in
+     * the headings, the summary, the tables and the lists.
+     */
+    @ParameterizedTest
+    @CsvSource({"shortlist, 360", "replace, 360", "shortlist, 800", "replace, 800"})
+    void longPartNumbersStayOnOneLine(String report, int width) throws Exception {
+        Path dir = fx.dir.resolve("long");
+        if (!Files.exists(dir.resolve("replace.html"))) {
+            Files.createDirectories(dir);
+            for (String f : List.of("switches.csv", "drivers.csv", "stages.csv")) {
+                Files.writeString(dir.resolve(f), Files.readString(fx.dir.resolve(f)).replace("TST-G650A", LONG_SWITCH)
+                        .replace("TST-G650B", LONG_SWITCH_2).replace("TST-D06A", LONG_DRIVER));
+            }
+            Path cat = dir.resolve("catalog");
+            CliRun imp = CliRun.on(cat, "import", dir.resolve("switches.csv").toString(),
+                    dir.resolve("drivers.csv").toString());
+            assertEquals(0, imp.exit(), imp.dump());
+            List<String> shortlist = new java.util.ArrayList<>(List.of("shortlist", "--switch", LONG_SWITCH, "--all",
+                    "--format", "html", "--output", dir.resolve("shortlist.html").toString()));
+            shortlist.addAll(List.of(HtmlFixture.POINT));
+            CliRun s = CliRun.on(cat, shortlist.toArray(String[]::new));
+            assertEquals(0, s.exit(), s.dump());
+            CliRun r = CliRun.on(cat, "replace", LONG_SWITCH, "--stages", dir.resolve("stages.csv").toString(),
+                    "--format", "html", "--output", dir.resolve("replace.html").toString());
+            assertEquals(0, r.exit(), r.dump());
+        }
+        browser.manage().window().setSize(new Dimension(width, 1600));
+        browser.get(dir.resolve(report + ".html").toUri().toString());
+        List<String> found = ((List<?>) js(PART_LINES)).stream().map(Object::toString).toList();
+        // The switch in the heading and summary; the driver (shortlist) or the substitute (replace) in the table.
+        String other = report.equals("shortlist") ? LONG_DRIVER : LONG_SWITCH_2;
+        assertTrue(found.stream().anyMatch(f -> f.endsWith(LONG_SWITCH)) && found.stream().anyMatch(f -> f.endsWith(other)),
+                report + ": the long part numbers are on the page: " + found);
+        List<String> broken = found.stream().filter(f -> !f.startsWith("1 ")).toList();
+        assertTrue(broken.isEmpty(), report + " at " + width + " px: part numbers broken across lines (lines, element,"
+                + " part):\n" + String.join("\n", broken));
+        Path keep = Path.of("target", "browser-screenshots");
+        Files.createDirectories(keep);
+        Files.write(keep.resolve(report + "-long-parts-" + width + ".png"),
+                ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
+    }
+
     private Object js(String script) {
         return ((JavascriptExecutor) browser).executeScript(script);
     }
