@@ -221,6 +221,115 @@ class HtmlLayoutBrowserTest {
                 ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
     }
 
+    /**
+     * The charts as laid out: per {@code <svg>}, its name, its texts (box, whether rotated, text), its
+     * bars (filled rectangles other than the white backgrounds, which are the two largest) and the plot
+     * area (the second white rectangle), all in page pixels.
+     */
+    private static final String CHART_LAYOUT = """
+            const box = e => { const r = e.getBoundingClientRect(); return [r.left, r.top, r.right, r.bottom]; };
+            const out = [];
+            for (const svg of document.querySelectorAll('svg')) {
+              const rects = [...svg.querySelectorAll('rect')];
+              const white = rects.filter(r => /fill:\\s*rgb\\(255,\\s*255,\\s*255\\)/.test(r.getAttribute('style') || ''));
+              const bars = rects.filter(r => !white.includes(r) && r.getAttribute('style')
+                  && /fill:\\s*rgb\\(/.test(r.getAttribute('style')) && !/fill-opacity:\\s*0\\./.test(r.getAttribute('style')))
+                  .map(box);
+              const texts = [...svg.querySelectorAll('text')].filter(t => t.textContent.trim() !== '')
+                  .map(t => ({box: box(t), rotated: !!t.getAttribute('transform') && /matrix|rotate/.test(t.getAttribute('transform'))
+                      && !/matrix\\(1,0,0,1/.test(t.getAttribute('transform').replace(/\\s/g, '')), text: t.textContent}));
+              out.push({name: svg.getAttribute('aria-label'), plot: white.length > 1 ? box(white[1]) : null, bars, texts});
+            }
+            return out;""";
+
+    private static double[] rect(Object o) {
+        List<?> l = (List<?>) o;
+        return new double[] {((Number) l.get(0)).doubleValue(), ((Number) l.get(1)).doubleValue(),
+            ((Number) l.get(2)).doubleValue(), ((Number) l.get(3)).doubleValue()};
+    }
+
+    private static boolean overlap(double[] a, double[] b) {
+        double tol = 0.5;
+        return a[0] < b[2] - tol && b[0] < a[2] - tol && a[1] < b[3] - tol && b[1] < a[3] - tol;
+    }
+
+    /**
+     * The charts of every report, as the browser draws them: no two labels overlap and no label lies
+     * on a bar (nothing hidden under another bar); in the horizontal margin charts each value stands
+     * level with its own bar's label, the bar labels end at one edge beside the axis (the browser's
+     * font need not be Java's, which laid them out), and the axis is fitted to the bars (the longest
+     * takes at least 45 % of the plot's width, not a fixed −1 … 3).
+     */
+    @ParameterizedTest
+    @CsvSource({"explain", "check", "shortlist", "replace", "compare"})
+    void chartLabelsSitWithTheirBarsAndNeverOverlap(String report) throws Exception {
+        browser.manage().window().setSize(new Dimension(1200, 1600));
+        browser.get(fx.reports.get(report).toUri().toString());
+        List<String> problems = new java.util.ArrayList<>();
+        int margins = 0;
+        for (Object o : (List<?>) js(CHART_LAYOUT)) {
+            Map<?, ?> chart = (Map<?, ?>) o;
+            String name = (String) chart.get("name");
+            List<Map<?, ?>> texts = ((List<?>) chart.get("texts")).stream().<Map<?, ?>>map(t -> (Map<?, ?>) t).toList();
+            List<double[]> bars = ((List<?>) chart.get("bars")).stream().map(HtmlLayoutBrowserTest::rect).toList();
+            boolean barChart = name.contains("argin") || name.startsWith("Score") || name.startsWith("Compared");
+            for (int i = 0; i < texts.size(); i++) {
+                double[] a = rect(texts.get(i).get("box"));
+                for (int j = i + 1; j < texts.size(); j++) {
+                    if (Boolean.TRUE.equals(texts.get(i).get("rotated")) || Boolean.TRUE.equals(texts.get(j).get("rotated"))) {
+                        continue; // parallel slanted labels: their upright boxes overlap while the text does not
+                    }
+                    if (overlap(a, rect(texts.get(j).get("box")))) {
+                        problems.add(name + ": '" + texts.get(i).get("text") + "' overlaps '" + texts.get(j).get("text") + "'");
+                    }
+                }
+                if (barChart) {
+                    for (double[] b : bars) {
+                        if (overlap(a, b)) {
+                            problems.add(name + ": '" + texts.get(i).get("text") + "' lies on a bar");
+                        }
+                    }
+                }
+            }
+            if (!name.contains("argin") || chart.get("plot") == null || name.startsWith("Margins against")) {
+                continue; // the horizontal margin charts (explain, check) below
+            }
+            margins++;
+            double[] plot = rect(chart.get("plot"));
+            List<double[]> cats = texts.stream().map(t -> rect(t.get("box")))
+                    .filter(b -> b[2] <= plot[0] + 1 && b[1] >= plot[1] - 1).toList();
+            List<Map<?, ?>> values = texts.stream().filter(t -> {
+                double[] b = rect(t.get("box"));
+                return b[0] >= plot[0] - 1 && b[1] >= plot[1] + 1 && b[3] <= plot[3] + 1;
+            }).toList();
+            if (cats.isEmpty() || values.isEmpty()) {
+                problems.add(name + ": no bar labels or values found");
+                continue;
+            }
+            double right = cats.stream().mapToDouble(b -> b[2]).max().orElseThrow();
+            double left = cats.stream().mapToDouble(b -> b[2]).min().orElseThrow();
+            if (right - left > 2) {
+                problems.add(name + ": bar labels end between " + Math.round(left) + " and " + Math.round(right) + " px");
+            }
+            for (Map<?, ?> v : values) {
+                double[] b = rect(v.get("box"));
+                double mid = (b[1] + b[3]) / 2;
+                if (cats.stream().noneMatch(c -> Math.abs((c[1] + c[3]) / 2 - mid) <= 2)) {
+                    problems.add(name + ": value '" + v.get("text") + "' is not level with any bar's label");
+                }
+            }
+            double longest = bars.stream().mapToDouble(b -> b[2] - b[0]).max().orElse(0);
+            if (longest < 0.45 * (plot[2] - plot[0])) {
+                problems.add(name + ": the longest bar takes " + Math.round(100 * longest / (plot[2] - plot[0]))
+                        + " % of the plot's width: the axis is not fitted to the bars");
+            }
+        }
+        if (report.equals("explain") || report.equals("check")) {
+            assertTrue(margins > 0, report + ": a margin chart was checked");
+        }
+        assertTrue(problems.isEmpty(), report + ":\n" + String.join("\n", problems));
+    }
+
     private Object js(String script) {
         return ((JavascriptExecutor) browser).executeScript(script);
     }

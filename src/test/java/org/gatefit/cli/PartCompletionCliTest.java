@@ -42,7 +42,7 @@ class PartCompletionCliTest {
     private static List<String> examplePartsStartingWith(String file, String prefix) throws IOException {
         TreeSet<String> out = new TreeSet<>();
         try (CSVParser p = CSVParser.parse(Project.file("examples/" + file), StandardCharsets.UTF_8,
-                CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).build())) {
+                CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get())) {
             for (CSVRecord r : p) {
                 String pn = r.get("part_number").strip();
                 if (pn.toUpperCase(Locale.ROOT).startsWith(prefix.toUpperCase(Locale.ROOT))) {
