@@ -43,7 +43,7 @@ public final class Cli {
 
     /** The subcommands, by name, in the order help lists them. */
     private static final List<String> COMMANDS = List.of("import", "validate", "info", "find", "show", "export",
-            "shortlist", "explain", "check", "replace", "verify", "serve", "demo", "completion");
+            "shortlist", "explain", "check", "replace", "verify", "serve", "demo", "completion", "part-numbers");
 
     private static Object command(String name, Context ctx) {
         return switch (name) {
@@ -61,6 +61,7 @@ public final class Cli {
             case "serve" -> new ServeCommand(ctx);
             case "demo" -> new DemoCommand(ctx);
             case "completion" -> new CompletionCommand(ctx);
+            case "part-numbers" -> new PartNumbersCommand(ctx);
             default -> throw new IllegalArgumentException("no command " + name);
         };
     }

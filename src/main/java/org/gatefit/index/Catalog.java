@@ -465,6 +465,45 @@ public final class Catalog implements AutoCloseable {
         return out;
     }
 
+    /**
+     * The part numbers, as written, of the parts of {@code kind} (null: switches and drivers) whose
+     * part number starts with {@code prefix}, case not mattering as in {@link #get}: a prefix query on
+     * the {@link Fields#ID} terms, sorted by the part number's doc value, so no stored record is read
+     * (shell completion asks this on every Tab). Sorted, each once, at most {@code limit}.
+     */
+    public List<String> partNumbers(Kind kind, String prefix, int limit) throws IOException {
+        if (limit < 1) {
+            throw new IllegalArgumentException("expected a limit of at least 1, got " + limit);
+        }
+        try {
+            if (searcher == null) {
+                return List.of();
+            }
+            BooleanQuery.Builder q = new BooleanQuery.Builder();
+            for (Kind k : Kind.values()) {
+                if (k.isPart() && (kind == null || kind == k)) {
+                    q.add(new org.apache.lucene.search.PrefixQuery(new Term(Fields.ID, Fields.id(k.id(), prefix))),
+                            BooleanClause.Occur.SHOULD);
+                }
+            }
+            // Both kinds may hold one part number: ask for twice the limit, keep each once.
+            int n = Math.max(1, Math.min(2 * limit, reader.maxDoc()));
+            TopDocs td = searcher.search(q.build(), n,
+                    new Sort(new org.apache.lucene.search.SortField(PartNumberQuery.FIELD,
+                            org.apache.lucene.search.SortField.Type.STRING)));
+            java.util.LinkedHashSet<String> out = new java.util.LinkedHashSet<>();
+            for (ScoreDoc hit : td.scoreDocs) {
+                BytesRef v = (BytesRef) ((org.apache.lucene.search.FieldDoc) hit).fields[0];
+                if (v != null && out.size() < limit) {
+                    out.add(v.utf8ToString());
+                }
+            }
+            return List.copyOf(out);
+        } catch (IOException e) {
+            throw CatalogStorageException.reading(dir, e);
+        }
+    }
+
     /** Runs a query and loads the matching parts, in the order of {@code sort} (null: by score). */
     public List<Row> search(Query query, Sort sort, int limit) throws IOException {
         try {

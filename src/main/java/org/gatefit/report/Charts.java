@@ -12,6 +12,8 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.CategoryAxis;
 import org.jfree.chart.axis.CategoryLabelPositions;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.labels.ItemLabelAnchor;
+import org.jfree.chart.labels.ItemLabelPosition;
 import org.jfree.chart.labels.StandardCategoryItemLabelGenerator;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
@@ -85,10 +87,15 @@ final class Charts {
         NumberAxis time = axis("time (" + timeUnit + ")");
         CombinedDomainXYPlot plot = new CombinedDomainXYPlot(time);
         plot.setGap(12);
+        plot.setAxisOffset(new RectangleInsets(0, 4, 4, 0));
         XYPlot vp = xy(List.of(new Line("V_GS", t, v, false)), "V_GS (V)");
-        for (Level l : levels) {
-            vp.addRangeMarker(level(l));
+        double lo = 0;
+        double hi = 0;
+        for (double x : v) {
+            lo = Math.min(lo, x);
+            hi = Math.max(hi, x);
         }
+        addLevels(vp, levels, lo, hi, 0.6 * (460 - 110));
         XYPlot ip = xy(List.of(new Line("I_G", t, i, false)), "I_G (" + currentUnit + ")");
         ip.getRenderer().setSeriesPaint(0, SERIES[1]);
         ip.addRangeMarker(new ValueMarker(0, Color.GRAY, new BasicStroke(0.8f)));
@@ -122,10 +129,10 @@ final class Charts {
             }
         }
         for (Level l : levels) {
-            plot.addRangeMarker(level(l));
             lo = Math.min(lo, l.value());
             hi = Math.max(hi, l.value());
         }
+        addLevels(plot, levels, lo, hi, 380 - 120);
         if (hi > lo) {
             double pad = 0.06 * (hi - lo);
             plot.getRangeAxis().setRange(Math.min(0, lo - pad), hi + pad);
@@ -167,8 +174,23 @@ final class Charts {
         });
         r.setDefaultItemLabelsVisible(true);
         r.setDefaultItemLabelFont(TICK);
+        // Each value beside the end of its own bar (right of a bar inside its limit, left of one beyond
+        // it), level with the bar: never above it, where it would sit on the neighbouring bar.
+        r.setDefaultPositiveItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE3, TextAnchor.CENTER_LEFT));
+        r.setDefaultNegativeItemLabelPosition(new ItemLabelPosition(ItemLabelAnchor.OUTSIDE9, TextAnchor.CENTER_RIGHT));
+        r.setItemLabelInsets(new RectangleInsets(4, 4, 4, 4));
         CategoryPlot plot = category(data, r, valueLabel, PlotOrientation.HORIZONTAL);
-        plot.getRangeAxis().setRange(-1.1, 3.3);
+        double lo = 0;
+        double hi = 0;
+        for (Bar b : bars) {
+            double v = Math.max(-1, Math.min(3, b.value()));
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
+        }
+        // Fitted to the bars, 0 (the limit) always in view, with room beside the outermost bars for
+        // their values (a label of about 12 characters, against a plot about half the chart wide).
+        double span = Math.max(hi - lo, 0.5);
+        plot.getRangeAxis().setRange(lo - (lo < 0 ? 0.3 : 0.05) * span, hi + 0.3 * span);
         plot.addRangeMarker(new ValueMarker(0, Color.BLACK, new BasicStroke(1.4f)), Layer.FOREGROUND);
         JFreeChart chart = new JFreeChart(title, TITLE, plot, false);
         return svg(chart, WIDTH, Math.max(200, 90 + 30 * bars.size()), title);
@@ -187,8 +209,35 @@ final class Charts {
         }
         BarRenderer r = new BarRenderer();
         r.setItemMargin(0.05);
+        // A bar cut at the edge of the scale says its value above (or below) its end.
+        r.setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public String generateLabel(org.jfree.data.category.CategoryDataset dataset, int row, int column) {
+                double v = values[row][column];
+                return v > hi || v < lo ? org.gatefit.match.Eng.num(v) : null;
+            }
+        });
+        r.setDefaultItemLabelsVisible(true);
+        r.setDefaultItemLabelFont(TICK);
         CategoryPlot plot = category(data, r, valueLabel, PlotOrientation.VERTICAL);
-        plot.getRangeAxis().setRange(lo, hi);
+        double top = 0;
+        double bottom = 0;
+        boolean clipped = false;
+        for (double[] row : values) {
+            for (double v : row) {
+                if (!Double.isNaN(v)) {
+                    top = Math.max(top, Math.min(hi, v));
+                    bottom = Math.min(bottom, Math.max(lo, v));
+                    clipped |= v > hi || v < lo;
+                }
+            }
+        }
+        // Fitted to the bars (0 in view), within the scale [lo, hi]; room for the values of cut bars.
+        double span = Math.max(top - bottom, 1e-9 + (hi - lo) * 0.1);
+        double pad = (clipped ? 0.1 : 0.05) * span;
+        plot.getRangeAxis().setRange(bottom < 0 ? bottom - pad : bottom, top + pad);
         plot.addRangeMarker(new ValueMarker(0, Color.BLACK, new BasicStroke(1.4f)), Layer.FOREGROUND);
         JFreeChart chart = new JFreeChart(title, TITLE, plot, true);
         chart.getLegend().setItemFont(LABEL);
@@ -226,8 +275,9 @@ final class Charts {
                 r.setSeriesPaint(s, SERIES[s]);
             }
         }
-        CategoryAxis cats = new CategoryAxis();
+        CategoryAxis cats = o == PlotOrientation.VERTICAL ? new WholeLabels() : new CategoryAxis();
         cats.setTickLabelFont(TICK);
+        cats.setMaximumCategoryLabelLines(2);
         cats.setMaximumCategoryLabelWidthRatio(o == PlotOrientation.HORIZONTAL ? 0.45f : 1f);
         if (o == PlotOrientation.VERTICAL && data.getColumnCount() > 6) {
             cats.setCategoryLabelPositions(CategoryLabelPositions.UP_45);
@@ -239,6 +289,24 @@ final class Charts {
         plot.setRangeGridlinesVisible(true);
         plot.setOutlineVisible(false);
         return plot;
+    }
+
+    /**
+     * A category axis whose labels are never wrapped or cut short: the vertical charts' categories
+     * are part numbers ("1 QZX-…"), which JFreeChart would otherwise break after a hyphen or end with
+     * an ellipsis when the space between ticks is narrow (they are drawn at 45 degrees when many).
+     */
+    static final class WholeLabels extends CategoryAxis {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        @SuppressWarnings("rawtypes") // JFreeChart declares the raw Comparable
+        protected org.jfree.chart.text.TextBlock createLabel(Comparable category, float width,
+                                                             org.jfree.chart.ui.RectangleEdge edge,
+                                                             java.awt.Graphics2D g2) {
+            return org.jfree.chart.text.TextUtils.createTextBlock(category.toString(), getTickLabelFont(category),
+                    getTickLabelPaint(category));
+        }
     }
 
     private static XYPlot xy(List<Line> lines, String yLabel) {
@@ -264,7 +332,8 @@ final class Charts {
         plot.setDomainGridlinePaint(GRID);
         plot.setRangeGridlinePaint(GRID);
         plot.setOutlineVisible(false);
-        plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
+        // A few pixels between the axes and the data, so the tick labels at the corner (0 and 0.0) stay apart.
+        plot.setAxisOffset(new RectangleInsets(0, 4, 4, 0));
         return plot;
     }
 
@@ -276,14 +345,40 @@ final class Charts {
         return a;
     }
 
-    private static ValueMarker level(Level l) {
+    /** Height of a level's label with its box, in pixels (11 px type). */
+    private static final double LEVEL_LABEL_PX = 16;
+
+    /**
+     * The levels as dashed lines, each labelled at the right above its line; a level closer than a
+     * label's height below the one above it (on a plot about {@code plotPx} high showing about
+     * {@code lo} to {@code hi} with the levels) has its label below its line instead, so two labels
+     * never overlap.
+     */
+    private static void addLevels(XYPlot plot, List<Level> levels, double lo, double hi, double plotPx) {
+        double min = lo;
+        double max = hi;
+        for (Level l : levels) {
+            min = Math.min(min, l.value());
+            max = Math.max(max, l.value());
+        }
+        double labelUnits = max > min ? LEVEL_LABEL_PX * 1.1 * (max - min) / plotPx : 0;
+        List<Level> down = levels.stream().sorted(java.util.Comparator.comparingDouble(Level::value).reversed()).toList();
+        double above = Double.POSITIVE_INFINITY; // the lowest edge taken by a label so far
+        for (Level l : down) {
+            boolean under = l.value() + labelUnits > above;
+            plot.addRangeMarker(level(l, under));
+            above = under ? l.value() - labelUnits : l.value();
+        }
+    }
+
+    private static ValueMarker level(Level l, boolean under) {
         ValueMarker m = new ValueMarker(l.value(), l.colour(), new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
                 BasicStroke.JOIN_ROUND, 1f, new float[] {5f, 3f}, 0f));
         m.setLabel(l.label());
         m.setLabelFont(TICK);
         m.setLabelPaint(l.colour().darker());
-        m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        m.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+        m.setLabelAnchor(under ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
+        m.setLabelTextAnchor(under ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
         return m;
     }
 
@@ -302,6 +397,48 @@ final class Charts {
         return s.equals("-0") ? "0" : s;
     }
 
+    private static final java.util.regex.Pattern TEXT = java.util.regex.Pattern.compile(
+            "<text ([^>]*?style='([^']*)'[^>]*)>([^<]*)</text>");
+    private static final java.util.regex.Pattern SIZE = java.util.regex.Pattern.compile("font-size: ?([0-9.]+)px");
+    private static final java.util.regex.Pattern FAMILY = java.util.regex.Pattern.compile("font-family: ?([^;]+)");
+
+    /**
+     * Every text of the chart given the width JFreeChart laid it out with ({@code textLength}, glyphs
+     * and spacing adjusted): the layout measures text with Java's fonts, the browser draws it with its
+     * own, often narrower or wider, and without this a right-aligned label ends short of its bar, a
+     * centred one drifts and a label's box no longer fits its text.
+     */
+    static String fitText(SVGGraphics2D g, String svg) {
+        java.util.regex.Matcher m = TEXT.matcher(svg);
+        StringBuilder sb = new StringBuilder(svg.length() + svg.length() / 8);
+        while (m.find()) {
+            String style = m.group(2);
+            java.util.regex.Matcher size = SIZE.matcher(style);
+            java.util.regex.Matcher family = FAMILY.matcher(style);
+            String text = m.group(3).replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"")
+                    .replace("&apos;", "'").replace("&amp;", "&");
+            if (!size.find() || text.isBlank() || m.group(1).contains("textLength")) {
+                m.appendReplacement(sb, java.util.regex.Matcher.quoteReplacement(m.group()));
+                continue;
+            }
+            String fam = family.find() ? family.group(1).strip() : "sans-serif";
+            String javaFamily = switch (fam) {
+                case "sans-serif" -> Font.SANS_SERIF;
+                case "serif" -> Font.SERIF;
+                case "monospace" -> Font.MONOSPACED;
+                default -> fam.replace("'", "").replace("\"", "");
+            };
+            int styleBits = (style.contains("font-weight: bold") ? Font.BOLD : 0)
+                    | (style.contains("font-style: italic") ? Font.ITALIC : 0);
+            Font f = new Font(javaFamily, styleBits, 1).deriveFont(Float.parseFloat(size.group(1)));
+            double width = g.getFontMetrics(f).getStringBounds(text, g).getWidth();
+            m.appendReplacement(sb, java.util.regex.Matcher.quoteReplacement("<text " + m.group(1) + " textLength='"
+                    + twoDecimals(width) + "' lengthAdjust='spacingAndGlyphs'>" + m.group(3) + "</text>"));
+        }
+        m.appendTail(sb);
+        return sb.toString();
+    }
+
     static String svg(JFreeChart chart, int w, int h, String name) {
         chart.setBackgroundPaint(Color.WHITE);
         chart.setPadding(new RectangleInsets(6, 6, 6, 12));
@@ -314,7 +451,7 @@ final class Charts {
         g.setGeomDoubleConverter(Charts::twoDecimals);
         g.setTransformDoubleConverter(Charts::twoDecimals);
         chart.draw(g, new Rectangle2D.Double(0, 0, w, h));
-        String svg = g.getSVGElement(null, false, new ViewBox(0, 0, w, h), null, null);
+        String svg = fitText(g, g.getSVGElement(null, false, new ViewBox(0, 0, w, h), null, null));
         svg = svg.replaceAll("\\s+xmlns(:[a-z]+)?=(\"[^\"]*\"|'[^']*')", "");
         return Html.xmlChars(svg).replaceFirst("<svg", "<svg role=\"img\" aria-label=\"" + Html.esc(name) + "\"");
     }

@@ -46,8 +46,8 @@ final class CheckHtml {
             }
             out.write("<tr><td><a href=\"#" + anchor(i) + "\">" + Html.esc(s.stage()) + "</a></td><td>"
                     + Html.verdict(s.verdict()) + "</td><td class=\"num\">" + Eng.num(s.score()) + "</td><td>"
-                    + Html.esc(CheckReports.ref(s.driverRef(), s.driver())) + "</td><td>"
-                    + Html.esc(CheckReports.ref(s.switchRef(), s.switchPart())) + "</td><td>"
+                    + Html.withParts(CheckReports.ref(s.driverRef(), s.driver()), s.driver()) + "</td><td>"
+                    + Html.withParts(CheckReports.ref(s.switchRef(), s.switchPart()), s.switchPart()) + "</td><td>"
                     + Html.esc(String.join(", ", bad)) + "</td></tr>\n");
         }
         out.write("</tbody>\n</table>\n");
@@ -93,7 +93,7 @@ final class CheckHtml {
             for (String n : s.notes()) {
                 lines.add(new String[] {"Note", n});
             }
-            out.write(Html.context(lines));
+            out.write(Html.context(lines, s.driver(), s.switchPart()));
             out.write("<h3>Checks</h3>\n" + Html.checks(s.checks()));
             out.write(Html.marginChart("Stage " + s.stage() + ": margins", s.checks()));
             if (!s.figures().isEmpty()) {

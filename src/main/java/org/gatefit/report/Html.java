@@ -40,6 +40,7 @@ final class Html {
             code.hash { font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: .95em; overflow-wrap: anywhere; }
             figure { margin: 1rem 0; } figure svg { width: 100%; height: auto; display: block; }
             figcaption { font-size: .85rem; color: #444; margin-top: .25rem; }
+            .pn { white-space: nowrap; }
             .est { color: #8a4500; font-size: .8rem; } .note { color: #444; font-size: .9rem; }
             .caution { border: 2px solid #b71c1c; background: #fff8f7; padding: .6rem .8rem; margin: 1.5rem 0;
               font-weight: 600; }
@@ -115,6 +116,40 @@ final class Html {
         return i;
     }
 
+    /**
+     * A part number, escaped, in a {@code span.pn} that never breaks across lines (CSS
+     * {@code white-space: nowrap}: a browser would otherwise break after any hyphen); the text is the
+     * part number as written, so copying it gives the real one.
+     */
+    static String part(String partNumber) {
+        return "<span class=\"pn\">" + esc(partNumber) + "</span>";
+    }
+
+    /** {@code text}, escaped, with each occurrence of the given part numbers as {@link #part}. */
+    static String withParts(String text, String... partNumbers) {
+        if (text == null) {
+            return "";
+        }
+        StringBuilder sb = new StringBuilder();
+        int from = 0;
+        while (true) {
+            int at = -1;
+            String found = null;
+            for (String pn : partNumbers) {
+                int i = pn == null || pn.isEmpty() ? -1 : text.indexOf(pn, from);
+                if (i >= 0 && (at < 0 || i < at || i == at && pn.length() > found.length())) {
+                    at = i;
+                    found = pn;
+                }
+            }
+            if (found == null) {
+                return sb.append(esc(text.substring(from))).toString();
+            }
+            sb.append(esc(text.substring(from, at))).append(part(found));
+            from = at + found.length();
+        }
+    }
+
     /** The document head and the start of the body, with the report header when there is one. */
     static void begin(Writer out, String title, ReportHeader header) throws IOException {
         out.write("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
@@ -136,18 +171,23 @@ final class Html {
         return "<span class=\"v v-" + v.id() + "\">" + esc(CheckReports.symbol(v)) + "</span>";
     }
 
-    /** A definition list of context lines (label, text). */
-    static String context(List<String[]> lines) {
+    /** A definition list of context lines (label, text), the given part numbers kept whole ({@link #part}). */
+    static String context(List<String[]> lines, String... partNumbers) {
         StringBuilder sb = new StringBuilder("<dl class=\"ctx\">\n");
         for (String[] l : lines) {
-            sb.append("<dt>").append(esc(l[0])).append("</dt><dd>").append(esc(l[1])).append("</dd>\n");
+            sb.append("<dt>").append(esc(l[0])).append("</dt><dd>").append(withParts(l[1], partNumbers)).append("</dd>\n");
         }
         return sb.append("</dl>\n").toString();
     }
 
     /** A figure with an inline chart and a caption. */
     static String figure(String svg, String caption) {
-        return "<figure>\n" + svg + "\n<figcaption>" + esc(caption) + "</figcaption>\n</figure>\n";
+        return figureHtml(svg, esc(caption));
+    }
+
+    /** A figure with an inline chart and a caption already in HTML. */
+    static String figureHtml(String svg, String captionHtml) {
+        return "<figure>\n" + svg + "\n<figcaption>" + captionHtml + "</figcaption>\n</figure>\n";
     }
 
     /** The checks: rule, verdict (badge), what was compared, message. */

@@ -45,8 +45,8 @@ final class MatchHtml {
     static void shortlist(Shortlist.Result r, ReportHeader header, Writer out) throws IOException {
         SwitchPart s = r.switchPart();
         Html.begin(out, "Drivers for " + s.partNumber(), header);
-        out.write("<h1>Drivers for " + Html.esc(s.partNumber()) + "</h1>\n");
-        out.write("<p class=\"summary\">" + Html.esc(MatchReports.switchLine(s)) + (s.maker() == null ? ""
+        out.write("<h1>Drivers for " + Html.part(s.partNumber()) + "</h1>\n");
+        out.write("<p class=\"summary\">" + Html.withParts(MatchReports.switchLine(s), s.partNumber()) + (s.maker() == null ? ""
                 : " by " + Html.esc(s.maker())) + ": " + r.evaluated() + " evaluated, " + Html.verdict(Verdict.PASS) + " "
                 + r.passing() + ", " + Html.verdict(Verdict.WARN) + " " + r.warning() + ", " + Html.verdict(Verdict.FAIL)
                 + " " + r.failing() + (r.skipped() > 0 ? "; " + r.skipped() + " more skipped by the prefilter (each certain"
@@ -65,7 +65,7 @@ final class MatchHtml {
                 + "<th>I_pl/I_req</th><th>NM min</th><th>P_driver</th><th>price</th><th>deciding</th></tr></thead>\n<tbody>\n");
         int i = 1;
         for (PairResult p : r.candidates()) {
-            out.write("<tr><td class=\"num\">" + i++ + "</td><td>" + Html.esc(p.driver()) + "</td><td>"
+            out.write("<tr><td class=\"num\">" + i++ + "</td><td>" + Html.part(p.driver()) + "</td><td>"
                     + Html.verdict(p.verdict()) + "</td><td class=\"num\">" + Eng.num(p.score()) + "</td><td class=\"num\">"
                     + Html.esc(MatchReports.driveRatio(p)) + "</td><td class=\"num\">" + Html.esc(MatchReports.noiseMin(p))
                     + "</td><td class=\"num\">" + Html.esc(MatchReports.fig(p, "driver-power", "W")) + "</td><td class=\"num\">"
@@ -86,7 +86,7 @@ final class MatchHtml {
             for (Check c : p.checks()) {
                 if (c.verdict() != Verdict.PASS) {
                     any = true;
-                    out.write("<li>" + i + " " + Html.esc(p.driver()) + " " + Html.verdict(c.verdict()) + " "
+                    out.write("<li>" + i + " " + Html.part(p.driver()) + " " + Html.verdict(c.verdict()) + " "
                             + Html.esc(c.rule().id() + ": " + c.message()) + "</li>\n");
                 }
             }
@@ -127,9 +127,9 @@ final class MatchHtml {
     static void explain(PairResult p, GateDrive g, org.gatefit.match.GateNetwork network, ReportHeader header, Writer out)
             throws IOException {
         Html.begin(out, "Driver " + p.driver() + " with switch " + p.switchPart(), header);
-        out.write("<h1>Driver " + Html.esc(p.driver()) + " with switch " + Html.esc(p.switchPart()) + "</h1>\n");
+        out.write("<h1>Driver " + Html.part(p.driver()) + " with switch " + Html.part(p.switchPart()) + "</h1>\n");
         out.write("<p class=\"summary\">Verdict " + Html.verdict(p.verdict()) + ", score " + Eng.num(p.score())
-                + (g == null ? "" : " · " + Html.esc(MatchReports.switchLine(g.switchPart()))
+                + (g == null ? "" : " · " + Html.withParts(MatchReports.switchLine(g.switchPart()), g.switchPart().partNumber())
                 + (g.switchPart().maker() == null ? "" : " by " + Html.esc(g.switchPart().maker()))) + "</p>\n");
         out.write(Html.context(context(p.point(), p.margins(), null)));
         out.write("<h2>Checks</h2>\n" + Html.checks(p.checks()));
@@ -161,7 +161,7 @@ final class MatchHtml {
         out.write(Html.context(context(pairs.get(0).point(), pairs.get(0).margins(), null)));
         StringBuilder head = new StringBuilder("<thead><tr><th></th>");
         for (PairResult p : pairs) {
-            head.append("<th>").append(Html.esc(p.driver())).append("</th>");
+            head.append("<th>").append(Html.part(p.driver())).append("</th>");
         }
         head.append("</tr></thead>\n");
         out.write("<h2>Checks</h2>\n<table class=\"compare\">\n" + head + "<tbody>\n<tr><td>verdict</td>");

@@ -32,8 +32,8 @@ final class ReplaceHtml {
 
     static void render(Replacement.Result r, ReportHeader header, Writer out) throws IOException {
         Html.begin(out, "Substitutes for " + r.part(), header);
-        out.write("<h1>Substitutes for " + Html.esc(r.kind().id()) + " " + Html.esc(r.part()) + "</h1>\n");
-        out.write("<p class=\"summary\">" + Html.esc(ReplaceReports.head(r)) + "</p>\n");
+        out.write("<h1>Substitutes for " + Html.esc(r.kind().id()) + " " + Html.part(r.part()) + "</h1>\n");
+        out.write("<p class=\"summary\">" + Html.withParts(ReplaceReports.head(r), r.part()) + "</p>\n");
         List<String[]> ctx = new ArrayList<>();
         String maker = r.original().text("maker");
         if (maker != null) {
@@ -48,7 +48,7 @@ final class ReplaceHtml {
         ctx.add(new String[] {"Margins", MatchJson.marginsLine(r.margins())});
         out.write(Html.context(ctx));
         if (!r.standing().isEmpty()) {
-            out.write("<h2>With " + Html.esc(r.part()) + " in place</h2>\n<p>Said once: each candidate below lists"
+            out.write("<h2>With " + Html.part(r.part()) + " in place</h2>\n<p>Said once: each candidate below lists"
                     + " only what it changes.</p>\n<table class=\"stage-notes\">\n<thead><tr><th>stages</th>"
                     + "<th>check</th></tr></thead>\n<tbody>\n");
             for (java.util.Map.Entry<String, List<String>> e : ReplaceReports.standing(r).entrySet()) {
@@ -72,7 +72,7 @@ final class ReplaceHtml {
             for (Replacement.StageOutcome o : c.stages()) {
                 worst = worst.and(o.verdict());
             }
-            out.write("<tr><td class=\"num\">" + i + "</td><td><a href=\"#cand-" + i + "\">" + Html.esc(c.partNumber())
+            out.write("<tr><td class=\"num\">" + i + "</td><td><a href=\"#cand-" + i + "\">" + Html.part(c.partNumber())
                     + "</a></td><td><span class=\"v v-grade\">" + Html.esc(c.grade().id()) + "</span></td><td class=\"num\">"
                     + Eng.num(c.score()) + "</td><td>" + Html.esc(c.maker()) + "</td><td>" + Html.esc(c.pinout())
                     + "</td><td>" + Html.esc(c.lifecycle()) + "</td><td class=\"num\">" + (c.stock() < 0 ? ""
@@ -100,16 +100,16 @@ final class ReplaceHtml {
         out.write("<h2>Comparison of the top candidates</h2>\n");
         out.write(Html.figure(Charts.grouped("Score of each substitute", "score (0 … 1)", cats, List.of("score"), score,
                 0, 1), "The ranking score of each candidate (grade first, then score, then price decides the order)."));
-        out.write(Html.figure(Charts.stacked("Compared parameters by assessment", "parameters", cats, ASSESSMENTS,
-                counts, ASSESSMENT_COLOURS), "How each candidate's parameters compare with " + r.part()
-                + ": better, equal, within the window, to re-verify, worse."));
+        out.write(Html.figureHtml(Charts.stacked("Compared parameters by assessment", "parameters", cats, ASSESSMENTS,
+                counts, ASSESSMENT_COLOURS), Html.withParts("How each candidate's parameters compare with " + r.part()
+                + ": better, equal, within the window, to re-verify, worse.", r.part())));
         out.write("<h2>Differences per candidate</h2>\n");
         i = 1;
         for (Replacement.Candidate c : r.candidates()) {
-            out.write("<section class=\"candidate\" id=\"cand-" + i + "\">\n<h3>" + i + ". " + Html.esc(c.partNumber())
+            out.write("<section class=\"candidate\" id=\"cand-" + i + "\">\n<h3>" + i + ". " + Html.part(c.partNumber())
                     + " <span class=\"v v-grade\">" + Html.esc(c.grade().id()) + "</span></h3>\n");
-            out.write("<table class=\"differences\">\n<thead><tr><th>parameter</th><th>" + Html.esc(r.part())
-                    + "</th><th>" + Html.esc(c.partNumber()) + "</th><th>unit</th><th>assessment</th></tr></thead>\n<tbody>\n");
+            out.write("<table class=\"differences\">\n<thead><tr><th>parameter</th><th>" + Html.part(r.part())
+                    + "</th><th>" + Html.part(c.partNumber()) + "</th><th>unit</th><th>assessment</th></tr></thead>\n<tbody>\n");
             for (Replacement.Difference d : c.differences()) {
                 out.write("<tr><td>" + Html.esc(d.label()) + " <span class=\"muted\">" + Html.esc(d.parameter())
                         + "</span></td><td class=\"num\">" + Html.esc(d.original()) + "</td><td class=\"num\">"
@@ -118,8 +118,8 @@ final class ReplaceHtml {
             }
             out.write("</tbody>\n</table>\n");
             if (!c.stages().isEmpty()) {
-                out.write("<table class=\"stage-results\">\n<thead><tr><th>stage</th><th>with " + Html.esc(c.partNumber())
-                        + "</th><th>with " + Html.esc(r.part()) + "</th><th>against the original</th></tr></thead>\n<tbody>\n");
+                out.write("<table class=\"stage-results\">\n<thead><tr><th>stage</th><th>with " + Html.part(c.partNumber())
+                        + "</th><th>with " + Html.part(r.part()) + "</th><th>against the original</th></tr></thead>\n<tbody>\n");
                 for (Replacement.StageOutcome o : c.stages()) {
                     out.write("<tr><td>" + Html.esc(o.stage()) + "</td><td>" + Html.verdict(o.verdict()) + "</td><td>"
                             + Html.verdict(o.was()) + "</td><td>" + change(o.change()) + "</td></tr>\n");
@@ -183,7 +183,7 @@ final class ReplaceHtml {
         out.write("<h2>Not offered</h2>\n<table class=\"not-offered\">\n<thead><tr><th>part</th><th>reason</th></tr>"
                 + "</thead>\n<tbody>\n");
         for (Replacement.NotOffered n : r.notOfferedParts()) {
-            out.write("<tr><td>" + Html.esc(n.partNumber()) + "</td><td>" + Html.esc(n.reason()) + "</td></tr>\n");
+            out.write("<tr><td>" + Html.part(n.partNumber()) + "</td><td>" + Html.esc(n.reason()) + "</td></tr>\n");
         }
         out.write("</tbody>\n</table>\n");
     }

@@ -23,7 +23,7 @@ class CliReachableTest {
         assertEquals(Set.of("shortlist"), Cli.reachable("--catalog", "x", "shortlist", "--switch", "A"));
         assertEquals(Set.of("find", "show"), Cli.reachable("--catalog", "find", "show", "TST-1"));
         Set<String> all = Cli.reachable("--help");
-        assertEquals(14, all.size());
+        assertEquals(15, all.size());
         assertEquals(all, Cli.reachable("shortlst"));
         assertEquals(all, Cli.reachable("completion"));
         assertEquals(all, Cli.reachable("demo"));

@@ -107,7 +107,7 @@ class HtmlReportsTest {
         String shortlist = fx.html("shortlist");
         assertTrue(shortlist.contains("Margins against the limits, top 3"));
         for (String d : List.of("TST-D06A", "TST-D06B", "TST-D06C")) {
-            assertTrue(shortlist.contains("<td>" + d + "</td>"), d);
+            assertTrue(shortlist.contains("<td><span class=\"pn\">" + d + "</span></td>"), d);
         }
         String replace = fx.html("replace");
         assertTrue(replace.contains("Score of each substitute") && replace.contains("Compared parameters by assessment"));
