@@ -75,6 +75,7 @@ public final class ServeLoadHarness {
 
         Process server = new ProcessBuilder(java, "-jar", jar.toString(), "serve", "--catalog", catalog.toString(),
                 "--port", "0").redirectErrorStream(true).start();
+        int exit;
         try {
             BufferedReader lines = new BufferedReader(new InputStreamReader(server.getInputStream(),
                     StandardCharsets.UTF_8));
@@ -135,11 +136,13 @@ public final class ServeLoadHarness {
             System.out.println(ok ? "OK: no errors, every answer from the old or the new catalog"
                     : "FAILED: see the counts above");
             Files2.delete(work);
-            System.exit(ok ? 0 : 1);
+            exit = ok ? 0 : 1;
         } finally {
+            // Before exiting: System.exit in the try would skip this and leave the server running.
             server.destroy();
             server.waitFor(10, TimeUnit.SECONDS);
         }
+        System.exit(exit);
     }
 
     /** The clients: each asks the questions in turn, as fast as answers come, and keeps what it saw. */
