@@ -148,7 +148,7 @@ final class Charts {
 
     /**
      * Horizontal bars of margins against their limits (0 at the limit, positive inside it),
-     * coloured by verdict, clipped to [−1, 3] with the true value printed.
+     * coloured by verdict, clipped to [-1, 3] with the true value printed.
      */
     static String margins(String title, String valueLabel, List<Bar> bars) {
         DefaultCategoryDataset data = new DefaultCategoryDataset();
@@ -169,7 +169,7 @@ final class Charts {
             @Override
             public String generateLabel(org.jfree.data.category.CategoryDataset dataset, int row, int column) {
                 double v = bars.get(column).value();
-                return (v > 3 ? "> 3 · " : v < -1 ? "< −1 · " : "") + org.gatefit.match.Eng.num(v);
+                return (v > 3 ? "> 3 · " : v < -1 ? "< -1 · " : "") + org.gatefit.match.Eng.num(v); // one minus sign: Eng.num writes ASCII
             }
         });
         r.setDefaultItemLabelsVisible(true);
