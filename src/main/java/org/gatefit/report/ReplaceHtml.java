@@ -89,17 +89,14 @@ final class ReplaceHtml {
         for (Replacement.Candidate c : top) {
             cats.add(i++ + " " + c.partNumber());
         }
-        double[][] score = new double[1][top.size()];
         double[][] counts = new double[ASSESSMENTS.size()][top.size()];
         for (int c = 0; c < top.size(); c++) {
-            score[0][c] = top.get(c).score();
             for (int a = 0; a < ASSESSMENTS.size(); a++) {
                 counts[a][c] = ReplaceReports.count(top.get(c), ASSESSMENTS.get(a));
             }
         }
         out.write("<h2>Comparison of the top candidates</h2>\n");
-        out.write(Html.figure(Charts.grouped("Score of each substitute", "score (0 … 1)", cats, List.of("score"), score,
-                0, 1), "The ranking score of each candidate (grade first, then score, then price decides the order)."));
+        // No chart of the scores: it would only repeat the table's score column (issue 19).
         out.write(Html.figureHtml(Charts.stacked("Compared parameters by assessment", "parameters", cats, ASSESSMENTS,
                 counts, ASSESSMENT_COLOURS), Html.withParts("How each candidate's parameters compare with " + r.part()
                 + ": better, equal, within the window, to re-verify, worse.", r.part())));
