@@ -345,6 +345,23 @@ class ServeApiTest {
             assertTrue(known.contains(name) || name.equals("download"), "explain takes the documented " + name);
         }
         assertTrue(documented.contains("twin-edge"), documented.toString());
+        // And the other way: every option of shortlist and explain that a question over HTTP can use
+        // is documented (files on the server's disk, output files and terminal settings are not).
+        List<String> notOverHttp = List.of("catalog", "output", "csv-style", "verbose", "help", "version", "stages",
+                "stage", "bom");
+        for (String command : List.of("shortlist", "explain")) {
+            picocli.CommandLine.Model.CommandSpec spec = Cli.create(new java.io.PrintWriter(java.io.Writer.nullWriter()),
+                    new java.io.PrintWriter(java.io.Writer.nullWriter()), Map.of(), CliRun.CLOCK).getSubcommands()
+                    .get(command).getCommandSpec();
+            List<String> names = new ArrayList<>();
+            for (JsonNode p : doc.get("paths").get("/api/v1/" + command).get("get").get("parameters")) {
+                names.add(p.get("name").asText());
+            }
+            for (String option : Answers.known(spec, command)) {
+                assertTrue(notOverHttp.contains(option) || names.contains(option),
+                        "/api/v1/" + command + " documents --" + option + ": " + names);
+            }
+        }
     }
 
     @Test
