@@ -1,27 +1,17 @@
 package org.gatefit.cli;
 
-import java.io.IOException;
 import java.io.Writer;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.gatefit.catalog.BadValueException;
-import org.gatefit.catalog.Bom;
-import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Kind;
 import org.gatefit.catalog.Row;
-import org.gatefit.catalog.SheetReader;
-import org.gatefit.index.CatalogParts;
 import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.GateNetwork;
 import org.gatefit.match.OperatingPoint;
 import org.gatefit.match.Rules;
 import org.gatefit.match.PairResult;
-import org.gatefit.match.StageCheck;
 import org.gatefit.match.SwitchPart;
 import org.gatefit.match.Verdict;
 import org.gatefit.report.CompareReports;
@@ -62,17 +52,8 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
     @Mixin
     StageRowOptions saved;
 
-    @Option(names = "--bom", paramLabel = "BOM.csv",
-            description = "BOM to resolve the designators of the --stages sheet, as check --bom does, so that the"
-                    + " stage's bridge partner is found among stages named by designator.")
-    Path bom;
-
-    @Option(names = "--twin-edge", paramLabel = "NAME=COLD,HOT",
-            description = "The turn-on edge of the other switch of the bridge, which the dv-dt rule judges instead of"
-                    + " this pair's own: its name and the switch-node dv/dt it makes at 25 °C and at the hot corner,"
-                    + " V/ns (e.g. LOW=28.5,26.9; check's JSON gives them as operating_point.twin). Default: the"
-                    + " --stage row's bridge partner as check finds it, else this pair itself.")
-    String twinEdge;
+    @Mixin
+    PartnerOptions partner;
 
     @Mixin
     MarginOptions margins;
@@ -94,11 +75,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
             throw new UsageException("--format spice: one --driver (a deck models one gate loop), got " + driverPns.size());
         }
         Row row = saved.row(ctx);
-        if (bom != null && row == null) {
-            throw new UsageException("--bom needs --stages and --stage (the BOM resolves the stage sheet's designators)");
-        }
         OperatingPoint.Spec spec = point.spec(row);
-        OperatingPoint.Twin given = twinEdge == null ? null : twin(twinEdge);
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
         List<GateNetwork> networks = new ArrayList<>();
@@ -113,11 +90,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 }
                 drs.add(dr);
             }
-            if (given != null) {
-                spec.twin = given;
-            } else if (row != null) {
-                spec.twin = partnerEdge(c, row);
-            }
+            spec.twin = partner.twin(ctx, c, saved, row, margins.margins());
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);
             for (DriverPart dr : drs) {
@@ -126,7 +99,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 drives.add(GateDrive.of(sw, r));
                 networks.add(GateNetwork.of(dr, sw, r));
             }
-            header = header("explain", c, input(ReportHeader.Role.STAGES, saved.stages), input(ReportHeader.Role.BOM, bom));
+            header = header("explain", c, input(ReportHeader.Role.STAGES, saved.stages), input(ReportHeader.Role.BOM, partner.bom));
         }
         Rendering how = output.rendering(ctx, header);
         try (Writer w = output.open(ctx)) {
@@ -148,55 +121,4 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         return rs.stream().anyMatch(r -> r.verdict() == Verdict.FAIL) ? ExitCode.FAILED : ExitCode.OK;
     }
 
-    /**
-     * The turn-on edge of the --stage row's bridge partner, found and computed as {@code check} does
-     * ({@link StageCheck#partner}); null (the pair stands in for its twin) when there is none, with a
-     * warning when a partner may have been missed or its edge cannot be computed.
-     */
-    private OperatingPoint.Twin partnerEdge(Catalog c, Row row) throws IOException, CatalogDataException,
-            UsageException {
-        List<Row> rows = CheckCommand.readStages(ctx.path(saved.stages), saved.stages.toString());
-        Row self = rows.stream().filter(r -> r.line() == row.line()).findFirst().orElseThrow();
-        Bom b = null;
-        if (bom != null) {
-            if (!Files.isRegularFile(ctx.path(bom))) {
-                throw new NoSuchFileException(bom.toString());
-            }
-            b = Bom.read(ctx.path(bom), bom.toString(), new SheetReader.Options(null, 0, null, null, ctx.err::println));
-        }
-        StageCheck.Partner p = StageCheck.partner(rows, self, b, new CatalogParts(c), margins.margins());
-        if (p.partner() != null && p.twin() == null) {
-            ctx.err.println("warning: --stage " + self.key() + ": the turn-on edge of its bridge partner " + p.partner()
-                    + " cannot be estimated, so the dv-dt rule judges this pair's own edge (as check does)");
-        } else if (p.partner() == null && !p.unresolved().isEmpty()) {
-            List<String> u = p.unresolved();
-            ctx.err.println("warning: --stage " + self.key() + ": " + u.size() + (u.size() == 1 ? " stage" : " stages")
-                    + " of " + saved.stages + " could not be resolved as check resolves them (" + String.join(", ",
-                    u.size() <= 5 ? u : u.subList(0, 5)) + (u.size() > 5 ? ", …" : "") + (bom == null ? "; give --bom for"
-                    + " designators" : "") + "), so a bridge partner among them is not known: the dv-dt rule judges"
-                    + " this pair's own turn-on edge");
-        }
-        return p.twin();
-    }
-
-    /** {@code --twin-edge NAME=COLD,HOT} (V/ns) as a twin, or a bad value naming the option. */
-    static OperatingPoint.Twin twin(String typed) throws BadValueException {
-        int eq = typed.lastIndexOf('=');
-        String[] v = eq < 0 ? new String[0] : typed.substring(eq + 1).split(",", -1);
-        String bad = "--twin-edge: '" + typed + "' is not NAME=COLD,HOT (the other switch's name and its switch-node"
-                + " dv/dt at 25 °C and at the hot corner, V/ns, both above 0; e.g. LOW=28.5,26.9)";
-        if (eq <= 0 || typed.substring(0, eq).isBlank() || v.length != 2) {
-            throw new BadValueException(bad);
-        }
-        try {
-            double cold = Double.parseDouble(v[0].strip());
-            double hot = Double.parseDouble(v[1].strip());
-            if (!(cold > 0) || !(hot > 0) || Double.isInfinite(cold) || Double.isInfinite(hot)) {
-                throw new BadValueException(bad);
-            }
-            return new OperatingPoint.Twin(typed.substring(0, eq).strip(), cold * 1e9, hot * 1e9);
-        } catch (NumberFormatException e) {
-            throw new BadValueException(bad);
-        }
-    }
 }

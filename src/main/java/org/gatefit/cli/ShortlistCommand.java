@@ -66,6 +66,9 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
     StageRowOptions saved;
 
     @Mixin
+    PartnerOptions partner;
+
+    @Mixin
     MarginOptions margins;
 
     @Mixin
@@ -80,16 +83,20 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         if (top < 1) {
             throw new UsageException("--top: expected at least 1, got " + top);
         }
-        OperatingPoint.Spec spec = point.spec(saved.row(ctx));
+        org.gatefit.catalog.Row row = saved.row(ctx);
+        OperatingPoint.Spec spec = point.spec(row);
         Margins m = margins.margins();
         List<Prefilter.Condition> asked = filters();
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
+            // The other half of a bridge is fixed whichever driver is chosen here: its edge is judged as check judges it.
+            spec.twin = partner.twin(ctx, c, saved, row, m);
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);
             Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,
                     Runtime.getRuntime().availableProcessors(), asked);
-            Rendering how = output.rendering(ctx, header("shortlist", c, input(ReportHeader.Role.STAGES, saved.stages)));
+            Rendering how = output.rendering(ctx, header("shortlist", c, input(ReportHeader.Role.STAGES, saved.stages),
+                    input(ReportHeader.Role.BOM, partner.bom)));
             try (Writer w = output.open(ctx)) {
                 MatchReports.shortlist(r, how, w);
                 OutputFile.finish(w);

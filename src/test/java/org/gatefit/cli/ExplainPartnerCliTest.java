@@ -185,4 +185,24 @@ class ExplainPartnerCliTest {
         assertTrue(help.contains("--twin-edge=NAME=COLD,HOT The turn-on edge of the other switch of the bridge")
                 && help.contains("--bom=BOM.csv BOM to resolve the designators of the --stages sheet"), help);
     }
+
+    /**
+     * shortlist --stages --stage judges the same partner's edge (the other half of the bridge is fixed
+     * whichever driver is chosen here): the stage's own driver, listed among the candidates, gets
+     * check's dv-dt check and figures.
+     */
+    @Test
+    void shortlistOfAStageJudgesItsPartnersEdgeToo() throws Exception {
+        for (String[] s : new String[][] {{"TI-VH", "TI-VL"}, {"GC-CLAMP", "GC-MAIN"}}) {
+            String id = s[0];
+            JsonNode st = stage(id);
+            CliRun r = CliRun.on(catalog, "shortlist", "--switch", st.get("switch").asText(), "--stages", STAGES.toString(),
+                    "--bom", BOM.toString(), "--stage", id, "--all", "--top", "60", "--format", "json");
+            assertEquals(ExitCode.OK, r.exit(), r.dump());
+            JsonNode j = JSON.readTree(r.out());
+            assertEquals(s[1], j.get("operating_point").get("twin").get("name").asText(), id);
+            JsonNode own = named(j.get("candidates"), "driver", st.get("driver").asText());
+            sameDvDt(st, own, id);
+        }
+    }
 }
