@@ -57,15 +57,15 @@ final class PartnerOptions {
      * warning when a partner may have been missed or its edge cannot be computed.
      */
     private OperatingPoint.Twin partnerEdge(Context ctx, Catalog c, StageRowOptions saved, Row row, Margins m)
-            throws IOException, CatalogDataException, UsageException {
-        List<Row> rows = CheckCommand.readStages(ctx.path(saved.stages), saved.stages.toString());
+            throws IOException, CatalogDataException, UsageException, BadValueException {
+        List<Row> rows = saved.rows(ctx);
         Row self = rows.stream().filter(r -> r.line() == row.line()).findFirst().orElseThrow();
         Bom b = null;
         if (bom != null) {
             if (!Files.isRegularFile(ctx.path(bom))) {
                 throw new NoSuchFileException(bom.toString());
             }
-            b = Bom.read(ctx.path(bom), bom.toString(), new SheetReader.Options(null, 0, null, null, ctx.err::println));
+            b = Bom.read(ctx.path(bom), bom.toString(), saved.bomOptions(ctx));
         }
         StageCheck.Partner p = StageCheck.partner(rows, self, b, new CatalogParts(c), m);
         if (p.partner() != null && p.twin() == null) {

@@ -10,9 +10,14 @@ import picocli.CommandLine.Option;
 /**
  * A saved operating point: {@code --stages FILE --stage ID} takes the operating point of
  * {@code shortlist} and {@code explain} from one row of a stage sheet; the operating-point options
- * given on the command line override the row's cells.
+ * given on the command line override the row's cells. The sheet is read as {@code check} reads its
+ * own: the same reading options ({@link SheetOptions}: --map, --map-file, --encoding, --header-row,
+ * --sheet).
  */
 final class StageRowOptions {
+    @picocli.CommandLine.Mixin
+    SheetOptions sheet;
+
     @Option(names = "--stages", paramLabel = "STAGES.csv",
             description = "Stage sheet to take the operating point from (with --stage).")
     Path stages;
@@ -22,7 +27,7 @@ final class StageRowOptions {
     String stage;
 
     /** The row named, or null when neither option is given. */
-    Row row(Context ctx) throws IOException, CatalogDataException, UsageException {
+    Row row(Context ctx) throws IOException, CatalogDataException, UsageException, org.gatefit.catalog.BadValueException {
         if (stages == null && stage == null) {
             return null;
         }
@@ -33,7 +38,22 @@ final class StageRowOptions {
         if (stages == null) {
             throw new UsageException("--stage " + stage + " needs --stages FILE, the stage sheet it is a row of");
         }
-        return find(CheckCommand.readStages(ctx.path(stages), stages.toString()), stages.toString(), stage);
+        return find(rows(ctx), stages.toString(), stage);
+    }
+
+    /** Every row of the --stages sheet, read with the reading options given. */
+    List<Row> rows(Context ctx) throws IOException, CatalogDataException, UsageException,
+            org.gatefit.catalog.BadValueException {
+        return CheckCommand.readStages(ctx.path(stages), stages.toString(), sheet == null
+                ? org.gatefit.catalog.SheetReader.Options.DEFAULT : sheet.options(ctx));
+    }
+
+    /** How a BOM given with the sheet is read: the sheet's encoding and notes (its headings are its own). */
+    org.gatefit.catalog.SheetReader.Options bomOptions(Context ctx) throws IOException, UsageException,
+            org.gatefit.catalog.BadValueException {
+        org.gatefit.catalog.SheetReader.Options o = sheet == null
+                ? new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println) : sheet.options(ctx);
+        return new org.gatefit.catalog.SheetReader.Options(o.encoding(), 0, null, null, o.notes());
     }
 
     /** The row of {@code rows} whose stage id is {@code id} (case ignored), or a usage error listing the ids. */

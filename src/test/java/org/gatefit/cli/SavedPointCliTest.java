@@ -163,8 +163,8 @@ class SavedPointCliTest {
      * commas, Windows-1252, and a heading of the office's own ("Stufe" for stage) — is read with
      * --encoding, --header-row and --map, and gives the same re-checked stages as the original sheet.
      */
-    @Test
-    void replaceReadsItsStageSheetWithTheSheetOptionsCheckTakes() throws Exception {
+    /** The example stage sheet as a European office saves it (see below), written to {@code tmp}. */
+    private Path officeCopy() throws IOException {
         List<String> lines = Files.readAllLines(STAGES, StandardCharsets.UTF_8);
         StringBuilder office = new StringBuilder("Stufenliste Antrieb, Rev. B (Entwurf für Prüfung)\r\n");
         office.append(lines.get(0).replace("stage,", "Stufe,").replace(',', ';')).append("\r\n");
@@ -173,6 +173,12 @@ class SavedPointCliTest {
         }
         Path sheet = tmp.resolve("stufen.csv");
         Files.write(sheet, office.toString().getBytes(java.nio.charset.Charset.forName("windows-1252")));
+        return sheet;
+    }
+
+    @Test
+    void replaceReadsItsStageSheetWithTheSheetOptionsCheckTakes() throws Exception {
+        Path sheet = officeCopy();
         String bom = Project.file("examples/bom.csv").toString();
         JsonNode want = json(list("replace", "CVL-1025TL", "--stages", STAGES.toString(), "--bom", bom, "--format", "json"));
         JsonNode got = json(list("replace", "CVL-1025TL", "--stages", sheet.toString(), "--bom", bom, "--encoding",
@@ -183,5 +189,28 @@ class SavedPointCliTest {
                 got.get("candidates").toString().replace(sheet.toString(), "SHEET"));
         CliRun plain = CliRun.on(catalog, "replace", "CVL-1025TL", "--stages", sheet.toString(), "--bom", bom);
         assertTrue(plain.exit() != ExitCode.OK, "without the options the title row is no header: " + plain.dump());
+    }
+
+    /** explain and shortlist read a --stages sheet with the same options too (and the partner search with them). */
+    @Test
+    void explainAndShortlistReadTheirStageSheetWithTheSheetOptions() throws Exception {
+        Path sheet = officeCopy();
+        String bom = Project.file("examples/bom.csv").toString();
+        List<String> options = List.of("--encoding", "windows-1252", "--header-row", "2", "--map", "Stufe=stage");
+        List<String> explain = list("explain", "--driver", "CRW-GI5712", "--switch", "OBP-12M016K4", "--bom", bom,
+                "--stage", "TI-VL", "--format", "json");
+        List<String> original = new ArrayList<>(explain);
+        original.addAll(List.of("--stages", STAGES.toString()));
+        List<String> office = new ArrayList<>(explain);
+        office.addAll(List.of("--stages", sheet.toString()));
+        office.addAll(options);
+        assertEquals(json(original).get("checks"), json(office).get("checks"));
+        assertEquals("TI-VH", json(office).get("operating_point").get("twin").get("name").asText());
+        List<String> shortlist = list("shortlist", "--switch", "OBP-12M016K4", "--stage", "ti-vl", "--top", "5",
+                "--format", "json", "--stages", sheet.toString());
+        shortlist.addAll(options);
+        List<String> typed = list("shortlist", "--switch", "OBP-12M016K4", "--stage", "ti-vl", "--top", "5",
+                "--format", "json", "--stages", STAGES.toString());
+        assertEquals(json(typed).get("candidates"), json(shortlist).get("candidates"));
     }
 }

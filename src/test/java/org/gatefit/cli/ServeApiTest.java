@@ -348,7 +348,7 @@ class ServeApiTest {
         // And the other way: every option of shortlist and explain that a question over HTTP can use
         // is documented (files on the server's disk, output files and terminal settings are not).
         List<String> notOverHttp = List.of("catalog", "output", "csv-style", "verbose", "help", "version", "stages",
-                "stage", "bom");
+                "stage", "bom", "map", "map-file", "encoding", "header-row", "sheet");
         for (String command : List.of("shortlist", "explain")) {
             picocli.CommandLine.Model.CommandSpec spec = Cli.create(new java.io.PrintWriter(java.io.Writer.nullWriter()),
                     new java.io.PrintWriter(java.io.Writer.nullWriter()), Map.of(), CliRun.CLOCK).getSubcommands()
