@@ -146,6 +146,29 @@ public final class Cli {
                 c.getErr().println("gatefit: not understood: " + String.join(" ", unmatched.getUnmatched()));
             }
             unmatched.printSuggestions(c.getErr());
+        } else if (unmatched != null) {
+            // picocli suggests by its own similarity, which misses a swapped pair of letters (--bsu):
+            // the nearest option by edit distance, as the nearest part numbers are found.
+            List<String> options = new java.util.ArrayList<>();
+            for (CommandLine.Model.OptionSpec o : c.getCommandSpec().options()) {
+                for (String n : o.names()) {
+                    if (n.startsWith("--")) {
+                        options.add(n.substring(2));
+                    }
+                }
+            }
+            java.util.Set<String> near = new java.util.LinkedHashSet<>();
+            for (String arg : unmatched.getUnmatched()) {
+                if (arg.startsWith("--") && arg.length() > 3) {
+                    String n = Answers.nearest(arg.substring(2).replaceFirst("=.*", ""), options);
+                    if (n != null) {
+                        near.add("--" + n);
+                    }
+                }
+            }
+            if (!near.isEmpty()) {
+                c.getErr().println("Did you mean: " + String.join(" or ", near) + "?");
+            }
         }
     }
 

@@ -75,6 +75,12 @@ class DailyTrapsCliTest {
         CliRun o = CliRun.on(catalog, "shortlist", "--swich", SIC, "--freq", "10");
         assertEquals(ExitCode.USAGE, o.exit(), o.dump());
         assertTrue(o.err().contains("--swich") && o.err().contains("Possible solutions: --switch"), o.dump());
+        // Two letters swapped, which picocli's own similarity misses: the nearest by edit distance.
+        CliRun swapped = CliRun.on(catalog, "shortlist", "--switch", SIC, "--freq", "10", "--bsu", "800");
+        assertEquals(ExitCode.USAGE, swapped.exit(), swapped.dump());
+        assertTrue(swapped.err().contains("Did you mean: --bus?"), swapped.dump());
+        CliRun far = CliRun.on(catalog, "shortlist", "--switch", SIC, "--freq", "10", "--quux", "800");
+        assertTrue(far.err().contains("--quux") && !far.err().contains("Did you mean"), "nothing near: " + far.dump());
     }
 
     @Test
