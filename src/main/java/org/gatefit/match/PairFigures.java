@@ -371,7 +371,8 @@ final class PairFigures {
      * call the dv-dt rule and the resistor range's dv-dt floor share.
      */
     static double inducedAt(Question q, double slew, double hold) {
-        return DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, hold, q.s.cIss(), q.s.cRss());
+        return q.offSwitch != null ? DvDt.millerInjected(q.offSwitch, slew, hold)
+                : DvDt.millerInjected(q.s.qGd(), q.op.bus(), slew, hold, q.s.cIss(), q.s.cRss());
     }
 
     /** Whether the charge-consistent Miller injection can be computed: a bus and the switch's Q_gd (a twin or a given dv/dt is checked apart). */

@@ -3,6 +3,7 @@ package org.gatefit.match;
 import java.util.Objects;
 import java.util.Optional;
 import org.gatefit.physics.DriveCurrent;
+import org.gatefit.physics.DvDt;
 import org.gatefit.physics.GateCharge;
 
 /**
@@ -40,6 +41,12 @@ public final class Question {
      * not turn every driver's pass into a warning.
      */
     final boolean switchStatusApart;
+    /**
+     * The off switch's side of the Miller injection ({@link DvDt#offSwitch}), computed once for every
+     * driver; null without a bus or Q_gd, or when the model refuses the switch's values (each pair
+     * then calls the model itself and reports its refusal).
+     */
+    final DvDt.OffSwitch offSwitch;
 
     private Question(SwitchPart s, OperatingPoint op, Margins m, boolean switchStatusApart) {
         this.switchStatusApart = switchStatusApart;
@@ -77,6 +84,15 @@ public final class Question {
         this.plateau = !Double.isNaN(s.qGd()) && !Double.isNaN(s.vPlateau()) && s.qGd() > 0
                 && op.vDrive() > s.vPlateau() && s.vPlateau() > op.vDriveNeg();
         this.iReqPlateau = plateau ? DriveCurrent.required(n * s.qGd(), op.edge()) : Double.NaN;
+        DvDt.OffSwitch off = null;
+        if (op.bus() > 0 && !Double.isNaN(s.qGd())) {
+            try {
+                off = DvDt.offSwitch(s.qGd(), op.bus(), s.cIss(), s.cRss());
+            } catch (IllegalArgumentException e) {
+                off = null;
+            }
+        }
+        this.offSwitch = off;
     }
 
     /** Whether Q_g is specified over the switch's recommended bipolar swing (e.g. −5 V to +18 V). */

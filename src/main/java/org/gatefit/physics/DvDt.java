@@ -97,12 +97,35 @@ public final class DvDt {
      * @return the peak induced gate voltage above the off level, V
      */
     public static double millerInjected(double qgd, double swing, double slew, double rHold, double ciss, double crss) {
+        return millerInjected(offSwitch(qgd, swing, ciss, crss), slew, rHold);
+    }
+
+    /**
+     * The off switch's side of {@link #millerInjected}, the same whatever drives it: C_gd averaged over
+     * the swing, C_iss, the swing and the capacitive divider's bound (NaN without C_iss).
+     */
+    public record OffSwitch(double cgd, double ciss, double swing, double dividerBound) {
+    }
+
+    /** {@link OffSwitch} from the switch's charges (arguments as {@link #millerInjected}). */
+    public static OffSwitch offSwitch(double qgd, double swing, double ciss, double crss) {
         double cgd = averageCgd(qgd, swing);
         if (Double.isNaN(ciss)) {
-            return inducedBound(cgd, slew, rHold);
+            return new OffSwitch(cgd, Double.NaN, swing, Double.NaN);
         }
         double cgs = Math.max(0, Double.isNaN(crss) ? ciss : ciss - crss);
-        return Math.min(induced(cgd, slew, rHold, ciss, swing), divider(cgd, cgs, swing));
+        return new OffSwitch(cgd, ciss, swing, divider(cgd, cgs, swing));
+    }
+
+    /**
+     * {@link #millerInjected} with the off switch's side computed once ({@link #offSwitch}), as a
+     * ranking computes it once per question and this per driver.
+     */
+    public static double millerInjected(OffSwitch off, double slew, double rHold) {
+        if (Double.isNaN(off.ciss())) {
+            return inducedBound(off.cgd(), slew, rHold);
+        }
+        return Math.min(induced(off.cgd(), slew, rHold, off.ciss(), off.swing()), off.dividerBound());
     }
 
     /**

@@ -114,4 +114,45 @@ class DvDtTest {
                 assertThrows(IllegalArgumentException.class,
                         () -> DvDt.inducedBound(1e-11, 1e10, -6)).getMessage());
     }
+
+    /**
+     * The off switch's side computed once ({@link DvDt#offSwitch}, as a ranking does per question)
+     * gives the same injection as the one call, with and without C_iss and C_rss.
+     */
+    @net.jqwik.api.Property(tries = 300)
+    void theOffSwitchComputedOnceGivesTheSameInjection(
+            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 1, max = 200) double qgdNc,
+            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 12, max = 1000) double bus,
+            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 0.1, max = 100) double slewVPerNs,
+            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 0, max = 50) double hold,
+            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 0.1, max = 20) double cissNf,
+            @net.jqwik.api.ForAll int which) {
+        double ciss = Math.floorMod(which, 3) == 0 ? Double.NaN : cissNf * 1e-9;
+        double crss = Math.floorMod(which, 3) == 1 ? Double.NaN : (Double.isNaN(ciss) ? 50e-12 : ciss * 0.02);
+        double once = DvDt.millerInjected(qgdNc * 1e-9, bus, slewVPerNs * 1e9, hold, ciss, crss);
+        DvDt.OffSwitch off = DvDt.offSwitch(qgdNc * 1e-9, bus, ciss, crss);
+        org.junit.jupiter.api.Assertions.assertEquals(once, DvDt.millerInjected(off, slewVPerNs * 1e9, hold), 0.0);
+        if (!Double.isNaN(ciss)) {
+            // the divider bound is the plain circuit's ΔV·C_gd/(C_gd + C_gs), C_gs = C_iss − C_rss (or C_iss)
+            double cgd = qgdNc * 1e-9 / bus;
+            double cgs = Double.isNaN(crss) ? ciss : ciss - crss;
+            org.junit.jupiter.api.Assertions.assertEquals(bus * cgd / (cgd + cgs), off.dividerBound(), 1e-12 * bus);
+        }
+    }
+
+    /**
+     * With a weak hold the RC filter no longer limits the injection and the capacitive divider does
+     * (plain circuit theory: an open gate takes ΔV·C_gd/(C_gd + C_gs) of the drain step). 20 nC of Q_gd
+     * over 400 V is C_gd,avg 50 pF, more than the 10 pF C_rss at the test voltage, so the divider with
+     * C_gs = C_iss − C_rss = 1.99 nF gives 400·50/(50 + 1990) = 9.80 V, below the RC form's limit
+     * ΔV·C_gd/C_iss = 10 V that a 1 MΩ hold approaches (computed by hand).
+     */
+    @Test
+    void aWeakHoldIsBoundedByTheCapacitiveDivider() {
+        double v = DvDt.millerInjected(20e-9, 400, 50e9, 1e6, 2e-9, 10e-12);
+        assertEquals(400 * 50e-12 / (50e-12 + 1990e-12), v, 1e-9);
+        assertTrue(v < DvDt.induced(50e-12, 50e9, 1e6, 2e-9, 400), "the divider is the bound here");
+        DvDt.OffSwitch off = DvDt.offSwitch(20e-9, 400, 2e-9, 10e-12);
+        assertEquals(v, DvDt.millerInjected(off, 50e9, 1e6), 0.0);
+    }
 }
