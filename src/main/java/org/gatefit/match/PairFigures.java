@@ -139,15 +139,18 @@ final class PairFigures {
         for (int c = 0; c < 2; c++) {
             double k = c == 0 ? 1 : kHot;
             double t = c == 0 ? JunctionTemperature.DATASHEET_C : tHot;
+            // At the slow corner the plateau currents are the drive-current rule's, computed above.
+            boolean slow = k == kSlow;
+            double onEdge = slewAt(q, d, k * rSrc, op.rG(), slow ? iPlOn : Double.NaN);
             double slewC = op.twin() != null && Double.isNaN(op.dvdt()) ? (c == 0 ? op.twin().slewCold()
-                    : op.twin().slewHot()) : slewAt(q, d, k * rSrc, op.rG());
+                    : op.twin().slewHot()) : onEdge;
             if (Double.isNaN(slewC)) {
                 continue;
             }
-            double offEdge = edges && Double.isNaN(op.dvdt()) ? op.bus() * DriveCurrent.plateau(s.vPlateau()
-                    - op.vDriveNeg(), loop(q, k * rSnk, op.rGOff()), d.iSink()) / (n * s.qGd()) : slewC;
+            double offEdge = edges && Double.isNaN(op.dvdt()) ? slewFrom(q, slow ? iPlOff : DriveCurrent.plateau(
+                    s.vPlateau() - op.vDriveNeg(), loop(q, k * rSnk, op.rGOff()), d.iSink())) : slewC;
             // Every edge the switch node makes: the twin's turn-on, this switch's own turn-on and turn-off.
-            double ownOn = op.twin() != null && Double.isNaN(op.dvdt()) ? slewAt(q, d, k * rSrc, op.rG()) : slewC;
+            double ownOn = onEdge;
             double fastest = Math.max(slewC, Math.max(offEdge, Double.isNaN(ownOn) ? slewC : ownOn));
             slMax = Double.isNaN(slMax) ? fastest : Math.max(slMax, fastest);
             double holdC = holdPath(q, d, k * rSnk);
@@ -345,6 +348,11 @@ final class PairFigures {
      * NaN without a bus or a plateau.
      */
     static double slewAt(Question q, DriverPart d, double rSrcAt, double rG) {
+        return slewAt(q, d, rSrcAt, rG, Double.NaN);
+    }
+
+    /** {@link #slewAt} with the turn-on plateau current already known ({@code iPlateau}; NaN: compute it). */
+    private static double slewAt(Question q, DriverPart d, double rSrcAt, double rG, double iPlateau) {
         OperatingPoint op = q.op;
         if (!Double.isNaN(op.dvdt())) {
             return op.dvdt();
@@ -352,7 +360,12 @@ final class PairFigures {
         if (!q.plateau || !(op.bus() > 0)) {
             return Double.NaN;
         }
-        return op.bus() * plateauCurrentOn(q, d, rSrcAt, rG) / (q.n * q.s.qGd());
+        return slewFrom(q, Double.isNaN(iPlateau) ? plateauCurrentOn(q, d, rSrcAt, rG) : iPlateau);
+    }
+
+    /** The switch-node dv/dt a plateau current makes: the bus over the plateau time, bus·I / (n·Q_gd), V/s. */
+    private static double slewFrom(Question q, double iPlateau) {
+        return q.op.bus() * iPlateau / (q.n * q.s.qGd());
     }
 
     /**
