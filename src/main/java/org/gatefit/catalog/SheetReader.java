@@ -116,6 +116,14 @@ public final class SheetReader {
             mapping = mapping == null ? Mapping.NONE : mapping;
             notes = notes == null ? n -> { } : notes;
         }
+
+        /**
+         * How a BOM given beside a sheet read with these options is read: the encoding and the notes
+         * apply; its headings, header row, sheet and mapping are its own.
+         */
+        public Options forBom() {
+            return new Options(encoding, 0, null, null, notes);
+        }
     }
 
     /**

@@ -111,8 +111,7 @@ final class CheckCommand extends CatalogCommand implements Callable<Integer> {
                 throw new NoSuchFileException(bomFile.toString());
             }
             // The BOM has headings of its own: only the encoding and the notes apply to it.
-            b = Bom.read(ctx.path(bomFile), bomFile.toString(), new SheetReader.Options(options.encoding(), 0, null,
-                    null, options.notes()));
+            b = Bom.read(ctx.path(bomFile), bomFile.toString(), options.forBom());
         }
         try (Catalog c = openCatalog()) {
             if (c.isEmpty()) {

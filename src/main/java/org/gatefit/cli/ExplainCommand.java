@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.gatefit.catalog.Kind;
-import org.gatefit.catalog.Row;
 import org.gatefit.index.Catalog;
 import org.gatefit.match.DriverPart;
 import org.gatefit.match.GateNetwork;
@@ -74,8 +73,8 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
         if (output.format == Format.SPICE && driverPns.size() > 1) {
             throw new UsageException("--format spice: one --driver (a deck models one gate loop), got " + driverPns.size());
         }
-        Row row = saved.row(ctx);
-        OperatingPoint.Spec spec = point.spec(row);
+        StageRowOptions.Selected row = saved.select(ctx);
+        OperatingPoint.Spec spec = point.spec(row == null ? null : row.row());
         List<PairResult> rs = new ArrayList<>();
         List<GateDrive> drives = new ArrayList<>();
         List<GateNetwork> networks = new ArrayList<>();
@@ -90,7 +89,7 @@ final class ExplainCommand extends CatalogCommand implements Callable<Integer> {
                 }
                 drs.add(dr);
             }
-            spec.twin = partner.twin(ctx, c, saved, row, margins.margins());
+            spec.twin = partner.twin(ctx, c, row, margins.margins());
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);
             for (DriverPart dr : drs) {

@@ -9,7 +9,6 @@ import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.Bom;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Row;
-import org.gatefit.catalog.SheetReader;
 import org.gatefit.index.Catalog;
 import org.gatefit.index.CatalogParts;
 import org.gatefit.match.Margins;
@@ -40,15 +39,15 @@ final class PartnerOptions {
      * The twin for the operating point: the given edge, the stage row's partner, or null (the pair
      * stands in for its twin).
      */
-    OperatingPoint.Twin twin(Context ctx, Catalog c, StageRowOptions saved, Row row, Margins m) throws IOException,
+    OperatingPoint.Twin twin(Context ctx, Catalog c, StageRowOptions.Selected saved, Margins m) throws IOException,
             CatalogDataException, UsageException, BadValueException {
-        if (bom != null && row == null) {
+        if (bom != null && saved == null) {
             throw new UsageException("--bom needs --stages and --stage (the BOM resolves the stage sheet's designators)");
         }
         if (twinEdge != null) {
             return twin(twinEdge);
         }
-        return row == null ? null : partnerEdge(ctx, c, saved, row, m);
+        return saved == null ? null : partnerEdge(ctx, c, saved, m);
     }
 
     /**
@@ -56,25 +55,24 @@ final class PartnerOptions {
      * ({@link StageCheck#partner}); null (the pair stands in for its twin) when there is none, with a
      * warning when a partner may have been missed or its edge cannot be computed.
      */
-    private OperatingPoint.Twin partnerEdge(Context ctx, Catalog c, StageRowOptions saved, Row row, Margins m)
-            throws IOException, CatalogDataException, UsageException, BadValueException {
-        List<Row> rows = saved.rows(ctx);
-        Row self = rows.stream().filter(r -> r.line() == row.line()).findFirst().orElseThrow();
+    private OperatingPoint.Twin partnerEdge(Context ctx, Catalog c, StageRowOptions.Selected saved, Margins m)
+            throws IOException, CatalogDataException, UsageException {
+        Row self = saved.row();
         Bom b = null;
         if (bom != null) {
             if (!Files.isRegularFile(ctx.path(bom))) {
                 throw new NoSuchFileException(bom.toString());
             }
-            b = Bom.read(ctx.path(bom), bom.toString(), saved.bomOptions(ctx));
+            b = Bom.read(ctx.path(bom), bom.toString(), saved.options().forBom());
         }
-        StageCheck.Partner p = StageCheck.partner(rows, self, b, new CatalogParts(c), m);
+        StageCheck.Partner p = StageCheck.partner(saved.rows(), self, b, new CatalogParts(c), m);
         if (p.partner() != null && p.twin() == null) {
             ctx.err.println("warning: --stage " + self.key() + ": the turn-on edge of its bridge partner " + p.partner()
                     + " cannot be estimated, so the dv-dt rule judges this pair's own edge (as check does)");
         } else if (p.partner() == null && !p.unresolved().isEmpty()) {
             List<String> u = p.unresolved();
             ctx.err.println("warning: --stage " + self.key() + ": " + u.size() + (u.size() == 1 ? " stage" : " stages")
-                    + " of " + saved.stages + " could not be resolved as check resolves them (" + String.join(", ",
+                    + " of " + saved.file() + " could not be resolved as check resolves them (" + String.join(", ",
                     u.size() <= 5 ? u : u.subList(0, 5)) + (u.size() > 5 ? ", …" : "") + (bom == null ? "; give --bom for"
                     + " designators" : "") + "), so a bridge partner among them is not known: the dv-dt rule judges"
                     + " this pair's own turn-on edge");

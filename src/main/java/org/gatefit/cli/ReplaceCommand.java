@@ -106,7 +106,7 @@ final class ReplaceCommand extends CatalogCommand implements Callable<Integer> {
                     throw new NoSuchFileException(bom.toString());
                 }
                 b = Bom.read(ctx.path(bom), bom.toString(),
-                        new org.gatefit.catalog.SheetReader.Options(options.encoding(), 0, null, null, options.notes()));
+                        options.forBom());
             }
         }
         Replacement.Result r;

@@ -83,14 +83,14 @@ public final class ShortlistCommand extends CatalogCommand implements Callable<I
         if (top < 1) {
             throw new UsageException("--top: expected at least 1, got " + top);
         }
-        org.gatefit.catalog.Row row = saved.row(ctx);
-        OperatingPoint.Spec spec = point.spec(row);
+        StageRowOptions.Selected row = saved.select(ctx);
+        OperatingPoint.Spec spec = point.spec(row == null ? null : row.row());
         Margins m = margins.margins();
         List<Prefilter.Condition> asked = filters();
         try (Catalog c = openCatalog()) {
             SwitchPart sw = SwitchPart.of(PairSupport.part(c, Kind.SWITCH, switchPn));
             // The other half of a bridge is fixed whichever driver is chosen here: its edge is judged as check judges it.
-            spec.twin = partner.twin(ctx, c, saved, row, m);
+            spec.twin = partner.twin(ctx, c, row, m);
             OperatingPoint op = PairSupport.resolve(spec, sw);
             PairSupport.warnImplausible(ctx, spec, sw);
             Shortlist.Result r = Shortlist.run(new CatalogParts(c), sw, op, m, top, all,

@@ -3,8 +3,10 @@ package org.gatefit.cli;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import org.gatefit.catalog.BadValueException;
 import org.gatefit.catalog.CatalogDataException;
 import org.gatefit.catalog.Row;
+import org.gatefit.catalog.SheetReader;
 import picocli.CommandLine.Option;
 
 /**
@@ -26,8 +28,19 @@ final class StageRowOptions {
             description = "The stage-sheet row whose operating point to use; options given here override its cells.")
     String stage;
 
-    /** The row named, or null when neither option is given. */
-    Row row(Context ctx) throws IOException, CatalogDataException, UsageException, org.gatefit.catalog.BadValueException {
+    /**
+     * The --stages sheet as read (once, with the reading options given) and the row --stage names.
+     *
+     * @param file    the sheet as typed, for messages
+     * @param rows    every row of it
+     * @param row     the row named
+     * @param options how it was read ({@link SheetReader.Options#forBom} for a BOM beside it)
+     */
+    record Selected(String file, List<Row> rows, Row row, SheetReader.Options options) {
+    }
+
+    /** The sheet and the row named, or null when neither option is given. */
+    Selected select(Context ctx) throws IOException, CatalogDataException, UsageException, BadValueException {
         if (stages == null && stage == null) {
             return null;
         }
@@ -38,22 +51,9 @@ final class StageRowOptions {
         if (stages == null) {
             throw new UsageException("--stage " + stage + " needs --stages FILE, the stage sheet it is a row of");
         }
-        return find(rows(ctx), stages.toString(), stage);
-    }
-
-    /** Every row of the --stages sheet, read with the reading options given. */
-    List<Row> rows(Context ctx) throws IOException, CatalogDataException, UsageException,
-            org.gatefit.catalog.BadValueException {
-        return CheckCommand.readStages(ctx.path(stages), stages.toString(), sheet == null
-                ? org.gatefit.catalog.SheetReader.Options.DEFAULT : sheet.options(ctx));
-    }
-
-    /** How a BOM given with the sheet is read: the sheet's encoding and notes (its headings are its own). */
-    org.gatefit.catalog.SheetReader.Options bomOptions(Context ctx) throws IOException, UsageException,
-            org.gatefit.catalog.BadValueException {
-        org.gatefit.catalog.SheetReader.Options o = sheet == null
-                ? new org.gatefit.catalog.SheetReader.Options(null, 0, null, null, ctx.err::println) : sheet.options(ctx);
-        return new org.gatefit.catalog.SheetReader.Options(o.encoding(), 0, null, null, o.notes());
+        SheetReader.Options options = sheet == null ? SheetReader.Options.DEFAULT : sheet.options(ctx);
+        List<Row> rows = CheckCommand.readStages(ctx.path(stages), stages.toString(), options);
+        return new Selected(stages.toString(), rows, find(rows, stages.toString(), stage), options);
     }
 
     /** The row of {@code rows} whose stage id is {@code id} (case ignored), or a usage error listing the ids. */
