@@ -18,7 +18,7 @@ import org.gatefit.match.Check.Comparison;
  * level past the switch's gate window ({@link GateWindow}); when nothing in the window works the
  * sentence says so and offers a clamp or an isolated supply.
  */
-final class BootstrapRule implements PairRule {
+final class BootstrapRule extends PairRule {
     enum Why implements Reason { LOW_SIDE, NO_FLOATING_SUPPLY, ISOLATED_SUPPLY, CANNOT_SIZE, NO_HEADROOM, FULL_DUTY,
         DUTY_TOO_HIGH, NO_DUTY, BELOW_FULL, EXTERNAL_DIODE_NO_BUS, SIZED, GAN_OVERCHARGE, GAN_OVERCHARGE_NEAR;
 

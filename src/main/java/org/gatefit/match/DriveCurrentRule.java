@@ -16,7 +16,7 @@ import org.gatefit.physics.ESeries;
  * rises with load current and the driver's current sags). The weaker of the two decides. Without
  * Q_gd and the plateau voltage the edge cannot be judged: unknown, never pass.
  */
-final class DriveCurrentRule implements PairRule {
+final class DriveCurrentRule extends PairRule {
     enum Why implements Reason { NO_PLATEAU, ENOUGH, THIN, SHORT }
 
     /** Whether the turn-on side is the weaker one (ties: turn-on). */

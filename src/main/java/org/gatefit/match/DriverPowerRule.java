@@ -12,7 +12,7 @@ import org.gatefit.match.Check.Comparison;
  * (supply × {@code i_q_out_ma}) and a high side's level-shifter loss ({@code q_ls_nc} × bus × f),
  * against the package limit derated by the driver-power margin.
  */
-final class DriverPowerRule implements PairRule {
+final class DriverPowerRule extends PairRule {
     enum Why implements Reason { NO_CHARGE, NO_LIMIT, OVER_LIMIT, HOT, COOL }
 
     @Override

@@ -14,7 +14,7 @@ import org.gatefit.match.Check.Comparison;
  * junction temperature: lower threshold, weaker sink) and the corner nearer to turning on decides:
  * fail at V_th,min, warn above the dv-dt margin's fraction of it (common practice, no source).
  */
-final class DvDtRule implements PairRule {
+final class DvDtRule extends PairRule {
     enum Why implements Reason { NO_TWIN, NO_THRESHOLD, NO_CHARGE, NO_BUS, NO_SLEW, FALSE_TURN_ON, THIN, LOW;
 
         @Override

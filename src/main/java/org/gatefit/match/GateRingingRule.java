@@ -17,7 +17,7 @@ import org.gatefit.physics.GateLoop;
  * plateau and its V_DS dependence damp the real loop more), and the gate voltage at the pins, not
  * behind R_g,int, is what a probe sees.
  */
-final class GateRingingRule implements PairRule {
+final class GateRingingRule extends PairRule {
     enum Why implements Reason { NO_CAPACITANCE, NO_LIMIT, OVER, UNDER, NEAR, CLEAR, DAMPED }
 
     /** Room left under V_GS,max by the peak and over V_GS,min by the trough, as a fraction of each limit (NaN: unknown). */

@@ -11,7 +11,7 @@ import org.gatefit.match.Check.Comparison;
  * against V_th,max (the switch must turn on) and against the level R_DS(on) or V_CE(sat) is
  * specified at (full enhancement; datasheet convention).
  */
-final class GateVoltageRule implements PairRule {
+final class GateVoltageRule extends PairRule {
     enum Why implements Reason { NO_LIMIT, SUPPLY_HIGH, SUPPLY_LOW, OVER_LIMIT, BELOW_THRESHOLD, NEAR_LIMIT, ABOVE_WINDOW,
         NO_FULL_LEVEL, UNDER_ENHANCED, FITS }
 

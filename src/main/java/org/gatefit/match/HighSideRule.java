@@ -25,7 +25,7 @@ import org.gatefit.match.Check.Comparison;
  * and load current (L·I/t_fall, {@link org.gatefit.physics.SwitchNode}) and added to the bus; the
  * offset margin then stands for what the estimate leaves out, and alone for the overshoot otherwise.
  */
-final class HighSideRule implements PairRule {
+final class HighSideRule extends PairRule {
     enum Why implements Reason { LOW_SIDE, CANNOT_FLOAT, NO_ISOLATION, NO_BUS_ISOLATED, ISOLATION_BELOW_BUS, ISOLATION_THIN,
         ISOLATED_OK, NO_OFFSET, NO_BUS_OFFSET, OFFSET_BELOW_BUS, OFFSET_THIN, OFFSET_OK, WORKING_BELOW_BUS, WORKING_THIN,
         WORKING_OK, WORKING_UNKNOWN, CMTI_BELOW, CMTI_THIN, NO_CMTI;

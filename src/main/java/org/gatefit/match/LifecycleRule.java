@@ -9,7 +9,7 @@ import java.util.List;
  * fails, not-recommended, last-time-buy, preview and out of stock warn, an unknown status is
  * unknown. Weight 0 in the electrical score: it counts through availability ({@link Score}).
  */
-final class LifecycleRule implements PairRule {
+final class LifecycleRule extends PairRule {
     enum Why implements Reason { CLEAR, NOTED }
 
     /** Whether a part has anything to note: not active, or out of stock. */

@@ -10,7 +10,7 @@ import org.gatefit.match.Check.Comparison;
  * (noise margins V_OH − V_IH and V_IL − V_OL, JEDEC JESD8 definitions) and its input maximum;
  * the smallest margin that passes is the logic-noise margin (common practice).
  */
-final class LogicLevelRule implements PairRule {
+final class LogicLevelRule extends PairRule {
     enum Why implements Reason { NO_THRESHOLDS, OVER_INPUT_MAX, HIGH_MISSED, LOW_MISSED, THIN, CLEAR }
 
     @Override

@@ -10,7 +10,7 @@ import org.gatefit.match.Check.Comparison;
  * driver's negative rail, and the off level the switch recommends (datasheet limits; the headroom
  * for undershoot is common practice, no source).
  */
-final class NegativeBiasRule implements PairRule {
+final class NegativeBiasRule extends PairRule {
     enum Why implements Reason { NO_LIMIT, BELOW_LIMIT, NO_RAIL, BEYOND_RAIL, NEAR_LIMIT, BELOW_WINDOW, CLAMP_HOLDS,
         LESS_NEGATIVE, FITS }
 

@@ -6,15 +6,44 @@ package org.gatefit.match;
  * sub-score of each verdict is computed here from the rule's margin, in one place ({@link Score}).
  */
 final class Outcome {
-    private Verdict verdict;
+    private static final Verdict[] VERDICTS = Verdict.values();
+    /**
+     * Whether the reason is kept: the full evaluation words it; a ranking needs only the verdict,
+     * whether it is open and the sub-score. A ranking thread's outcome is written thirteen times for
+     * every driver, and with the default collector (G1) each store of a reference into it, a
+     * long-lived object, runs a write barrier with a memory fence; primitives run none
+     * (docs/PERFORMANCE.md, 3 December).
+     */
+    private final boolean keepWhy;
+    /** The verdict's ordinal, −1 before the first judgement. */
+    private byte verdict = -1;
+    private boolean open;
     private Reason why;
     private double score;
 
-    Verdict verdict() {
-        return verdict;
+    /** An outcome that keeps the reason, for a judgement that is worded. */
+    Outcome() {
+        this(true);
     }
 
+    private Outcome(boolean keepWhy) {
+        this.keepWhy = keepWhy;
+    }
+
+    /** An outcome for ranking: verdict, open or not, and sub-score; {@link #why} is not kept. */
+    static Outcome forRanking() {
+        return new Outcome(false);
+    }
+
+    Verdict verdict() {
+        return verdict < 0 ? null : VERDICTS[verdict];
+    }
+
+    /** The reason of the last judgement (not kept by an outcome {@link #forRanking}). */
     Reason why() {
+        if (!keepWhy) {
+            throw new IllegalStateException("a ranking's outcome keeps no reason; judge with new Outcome() to word it");
+        }
         return why;
     }
 
@@ -43,12 +72,15 @@ final class Outcome {
 
     /** Whether the verdict is an open question of the asker ({@link Reason#asks}), not of the parts. */
     boolean open() {
-        return verdict == Verdict.UNKNOWN && why.asks() != null;
+        return open;
     }
 
     private void set(Verdict v, Reason r, double s) {
-        verdict = v;
-        why = r;
+        verdict = (byte) v.ordinal();
+        open = v == Verdict.UNKNOWN && r.asks() != null;
+        if (keepWhy) {
+            why = r;
+        }
         score = s;
     }
 }

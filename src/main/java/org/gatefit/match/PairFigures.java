@@ -112,7 +112,7 @@ final class PairFigures {
         // driver's output resistance scales by kHot there (JunctionTemperature); the slow corner has
         // the larger resistance, the fast corner the smaller.
         double tHot = op.tj();
-        double kHot = JunctionTemperature.driverResistanceFactor(tHot);
+        double kHot = q.cornersKnown ? q.kHot : JunctionTemperature.driverResistanceFactor(tHot);
         double kSlow = Math.max(1, kHot);
         double kFast = Math.min(1, kHot);
         double slowC = kHot >= 1 ? tHot : JunctionTemperature.DATASHEET_C;
@@ -156,7 +156,7 @@ final class PairFigures {
             double holdC = holdPath(q, d, k * rSnk);
             double viC = millerKnown(q) && (op.bridge() || !Double.isNaN(op.dvdt())) ? inducedAt(q, slewC, holdC)
                     : Double.NaN;
-            double th = thresholdAt(s, t);
+            double th = q.cornersKnown ? (c == 0 ? q.thCold : q.thHot) : thresholdAt(s, t);
             double badness = Double.isNaN(viC) || Double.isNaN(th) ? Double.NaN
                     : th <= 0 ? Double.POSITIVE_INFINITY : (viC + op.vDriveNeg()) / th;
             if (Double.isNaN(dvdtC) || badness > worst) {
@@ -248,7 +248,9 @@ final class PairFigures {
         }
 
         // Every field, every call: nothing of an earlier pair can remain.
-        this.q = q;
+        if (this.q != q) {
+            this.q = q; // a ranking's scratch sees one question: no reference store (and G1 write barrier) per driver
+        }
         this.d = d;
         this.rSrc = rSrc;
         this.rSnk = rSnk;

@@ -14,8 +14,12 @@ import org.gatefit.match.Check.Comparison;
  * <p>A rule that is certain to fail on a driver's own values declares those values as typed
  * conditions ({@link #certainFailures}); the shortlist's catalog prefilter is built from the
  * declarations.
+ *
+ * <p>An abstract class rather than an interface: the ranking calls {@link #judge} of thirteen rules
+ * for every driver, and a class's virtual call is dispatched through its vtable, an interface's
+ * through a search of the receiver's interface table.
  */
-sealed interface PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBiasRule, UvloRule, LogicLevelRule,
+abstract sealed class PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBiasRule, UvloRule, LogicLevelRule,
         PolarityRule, HighSideRule, BootstrapRule, DriverPowerRule, DvDtRule, GateRingingRule, ProtectionRule, LifecycleRule {
 
     /**
@@ -23,17 +27,17 @@ sealed interface PairRule permits DriveCurrentRule, GateVoltageRule, NegativeBia
      * rule. May throw {@link IllegalArgumentException} when a physics model refuses the pair's
      * values (the evaluation then says unknown, "cannot estimate").
      */
-    void judge(PairFigures f, Outcome out);
+    abstract void judge(PairFigures f, Outcome out);
 
     /** The sentence and the comparisons of a judgement {@code why} of this rule on these figures. */
-    Worded word(ShownFigures shown, Reason why);
+    abstract Worded word(ShownFigures shown, Reason why);
 
     /**
      * Adds the conditions on a driver's own catalog values under which this rule fails whatever the
      * driver's other values: never on a value the driver lacks ({@code ShortlistPrefilterTest}
      * holds the shortlist equal with and without them).
      */
-    default void certainFailures(Question q, Prefilter.Builder b) {
+    void certainFailures(Question q, Prefilter.Builder b) {
     }
 
     /**

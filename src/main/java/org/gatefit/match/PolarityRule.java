@@ -5,7 +5,7 @@ package org.gatefit.match;
  * An inverting input on an active-low PWM works but turns the switch on whenever the controller pin
  * is low or unpowered, so it warns (common practice, no source).
  */
-final class PolarityRule implements PairRule {
+final class PolarityRule extends PairRule {
     enum Why implements Reason { BOTH_SENSES, INVERTING_MATCH, MATCH, INVERTING_ON_ACTIVE_HIGH, NON_INVERTING_ON_ACTIVE_LOW }
 
     @Override

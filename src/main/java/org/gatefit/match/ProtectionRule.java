@@ -14,7 +14,7 @@ import org.gatefit.match.Check.Comparison;
  * Limits: the withstand time is the datasheet's at its own gate voltage and bus (a higher gate drive
  * shortens it: see {@code gate-voltage}), and the detection time excludes the blanking a designer sets.
  */
-final class ProtectionRule implements PairRule {
+final class ProtectionRule extends PairRule {
     enum Why implements Reason { NOT_EXPECTED, LOW_BUS, NO_BUS, NO_DATA, NONE, NO_TIMES, TOO_SLOW, PROTECTED;
 
         @Override

@@ -5,6 +5,7 @@ import java.util.Optional;
 import org.gatefit.physics.DriveCurrent;
 import org.gatefit.physics.DvDt;
 import org.gatefit.physics.GateCharge;
+import org.gatefit.physics.JunctionTemperature;
 
 /**
  * One question put to the rules — a switch at an operating point, with margins — and the
@@ -47,6 +48,16 @@ public final class Question {
      * then calls the model itself and reports its refusal).
      */
     final DvDt.OffSwitch offSwitch;
+    /**
+     * The two temperature corners every driver shares (REFERENCES.md §8: 25 °C, where datasheets
+     * specify, and the junction temperature asked for): the factor on a driver's output resistance
+     * at the hot corner and V_th,min at each corner (NaN when unknown). {@code cornersKnown} false
+     * when a model refuses them; each pair then calls it itself and reports its refusal.
+     */
+    final boolean cornersKnown;
+    final double kHot;
+    final double thCold;
+    final double thHot;
 
     private Question(SwitchPart s, OperatingPoint op, Margins m, boolean switchStatusApart) {
         this.switchStatusApart = switchStatusApart;
@@ -93,6 +104,21 @@ public final class Question {
             }
         }
         this.offSwitch = off;
+        boolean known = true;
+        double k = Double.NaN;
+        double cold = Double.NaN;
+        double hot = Double.NaN;
+        try {
+            k = JunctionTemperature.driverResistanceFactor(op.tj());
+            cold = PairFigures.thresholdAt(s, JunctionTemperature.DATASHEET_C);
+            hot = PairFigures.thresholdAt(s, op.tj());
+        } catch (IllegalArgumentException e) {
+            known = false;
+        }
+        this.cornersKnown = known;
+        this.kHot = k;
+        this.thCold = cold;
+        this.thHot = hot;
     }
 
     /** Whether Q_g is specified over the switch's recommended bipolar swing (e.g. −5 V to +18 V). */

@@ -23,6 +23,18 @@ public final class Rules {
     private record Entry(Rule id, PairRule rule) {
     }
 
+    /** {@link #PAIR_RULES} as the ranking reads them, driver after driver: the rules and their weights in plain arrays. */
+    private static final PairRule[] RANKED = new PairRule[PAIR_RULES.length];
+    private static final int[] WEIGHTS = new int[PAIR_RULES.length];
+    private static final Verdict[] VERDICTS = Verdict.values();
+
+    static {
+        for (int i = 0; i < PAIR_RULES.length; i++) {
+            RANKED[i] = PAIR_RULES[i].rule();
+            WEIGHTS[i] = PAIR_RULES[i].id().weight();
+        }
+    }
+
     private Rules() {
     }
 
@@ -52,7 +64,7 @@ public final class Rules {
         double sum = 0;
         int w = 0;
         for (Entry e : PAIR_RULES) {
-            String refused = judge(e, f, d, q, out);
+            String refused = judge(e.rule(), f, d, q, out);
             PairRule.Worded said = out.why() == Reason.Common.CANNOT_ESTIMATE
                     ? new PairRule.Worded(refused != null ? "cannot estimate: " + refused : without)
                     : f == null ? LifecycleRule.word(d, q.lifecycleSwitch(), (LifecycleRule.Why) out.why())
@@ -102,9 +114,9 @@ public final class Rules {
      * values is unknown too. Returns the model's refusal when the rule's own judgement was refused
      * (for the sentence), else null.
      */
-    private static String judge(Entry e, PairFigures f, DriverPart d, Question q, Outcome out) {
+    private static String judge(PairRule rule, PairFigures f, DriverPart d, Question q, Outcome out) {
         if (f == null) {
-            if (e.rule() instanceof LifecycleRule) {
+            if (rule instanceof LifecycleRule) {
                 LifecycleRule.judge(d, q.lifecycleSwitch(), out); // needs the parts only
             } else {
                 out.unknown(Reason.Common.CANNOT_ESTIMATE);
@@ -112,7 +124,7 @@ public final class Rules {
             return null;
         }
         try {
-            e.rule().judge(f, out);
+            rule.judge(f, out);
             return null;
         } catch (IllegalArgumentException | ArithmeticException x) {
             out.unknown(Reason.Common.CANNOT_ESTIMATE);
@@ -140,10 +152,11 @@ public final class Rules {
     public static final class Ranking {
         private final Question q;
         private final boolean scoreFailing;
-        private final Outcome out = new Outcome();
+        private final Outcome out = Outcome.forRanking();
         private final PairFigures scratch = PairFigures.scratch();
-        private Verdict verdict;
-        private Verdict rankVerdict;
+        // Ordinals, not references: written for every driver into this long-lived object (Outcome#keepWhy).
+        private byte verdict = -1;
+        private byte rankVerdict = -1;
         private double score;
 
         /** A ranking that scores every driver, failing ones included. */
@@ -172,32 +185,34 @@ public final class Rules {
             Verdict rv = Verdict.PASS;
             double sum = 0;
             int w = 0;
-            for (Entry e : PAIR_RULES) {
-                judge(e, f, d, q, out);
-                v = v.and(out.verdict());
-                rv = out.open() ? rv : rv.and(out.verdict());
+            for (int i = 0; i < RANKED.length; i++) {
+                judge(RANKED[i], f, d, q, out);
+                Verdict ov = out.verdict();
+                v = v.and(ov);
+                rv = out.open() ? rv : rv.and(ov);
                 if (v == Verdict.FAIL && !scoreFailing) {
-                    verdict = Verdict.FAIL;
-                    rankVerdict = Verdict.FAIL;
+                    verdict = (byte) Verdict.FAIL.ordinal();
+                    rankVerdict = verdict;
                     score = Double.NaN;
                     return;
                 }
-                sum += e.id().weight() * out.score();
-                w += e.id().weight();
+                sum += WEIGHTS[i] * out.score();
+                w += WEIGHTS[i];
             }
-            verdict = v.forPair();
-            rankVerdict = rv.forPair();
+            Verdict pair = v.forPair();
+            verdict = (byte) pair.ordinal();
+            rankVerdict = (byte) rv.forPair().ordinal();
             score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), q.s.lifecycle().availability(q.s.stock()),
-                    Score.supplyCost(q.op, d), verdict);
+                    Score.supplyCost(q.op, d), pair);
         }
 
         public Verdict verdict() {
-            return verdict;
+            return verdict < 0 ? null : VERDICTS[verdict];
         }
 
         /** The verdict the driver ranks by: {@link #verdict()} with open questions left out ({@link PairResult#rankVerdict}). */
         public Verdict rankVerdict() {
-            return rankVerdict;
+            return rankVerdict < 0 ? null : VERDICTS[rankVerdict];
         }
 
         public double score() {

@@ -17,7 +17,7 @@ import org.gatefit.match.Check.Comparison;
  * level at UVLO falling plus the (negative) off level. When the catalog does not say, both readings
  * are judged; they agree whenever there is no negative rail, and when they disagree the check warns.
  */
-final class UvloRule implements PairRule {
+final class UvloRule extends PairRule {
     enum Why implements Reason { NO_UVLO, NEVER_STARTS, HALF_ON, NEAR_PLATEAU, NEAR_START, NO_SWITCH_LEVELS, SAFE,
         READINGS_DISAGREE }
 

@@ -22,6 +22,13 @@ public enum ESeries {
     private final int[] mantissas;
     /** Every series value from 10^{@value #E_MIN} up, ascending, as {@link #scaled} gives them. */
     private final double[] table;
+    /**
+     * For each binary exponent e from that of {@code table[0]} to that of the last value, the index
+     * of the first table value ≥ 2^e: a value's own exponent ({@link Math#getExponent}) points
+     * a few entries below its round-up (an octave holds two E6 values, four E12, eight E24 at most).
+     */
+    private final int[] octave;
+    private final int octaveMin;
     private static final int E_MIN = -18;
     private static final int E_MAX = 15;
 
@@ -33,6 +40,16 @@ public enum ESeries {
             for (int m : mantissas) {
                 table[i++] = scaled(m, e);
             }
+        }
+        this.octaveMin = Math.getExponent(table[0]);
+        this.octave = new int[Math.getExponent(table[table.length - 1]) - octaveMin + 1];
+        int k = 0;
+        for (int b = 0; b < octave.length; b++) {
+            double low = Math.scalb(1.0, octaveMin + b);
+            while (table[k] < low) {
+                k++;
+            }
+            octave[b] = k;
         }
     }
 
@@ -64,10 +81,23 @@ public enum ESeries {
         Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         double t = value * (1 - EPS);
         if (t > table[0] && t <= table[table.length - 1]) {
-            int i = java.util.Arrays.binarySearch(table, t);
-            return table[i >= 0 ? i : -i - 1];
+            return table[atLeast(t)];
         }
         return roundUpByDecades(value);
+    }
+
+    /**
+     * The index of the first table value ≥ {@code t} ({@code table[0] < t ≤ table[last]}): from the
+     * first value of {@code t}'s octave ({@link #octave}), a few steps up. A ranking rounds a
+     * capacitor for every driver; a binary search over the 400-odd values branches on each of its
+     * nine comparisons and mispredicts about half of them (docs/PERFORMANCE.md, 3 December).
+     */
+    private int atLeast(double t) {
+        int i = octave[Math.getExponent(t) - octaveMin];
+        while (table[i] < t) {
+            i++;
+        }
+        return i;
     }
 
     /** {@link #roundUp} by walking the decades around the value. */
@@ -90,8 +120,8 @@ public enum ESeries {
         Require.inRange("value to round", "", value, MIN_VALUE, MAX_VALUE);
         double t = value * (1 + EPS);
         if (t >= table[0] && t < table[table.length - 1]) {
-            int i = java.util.Arrays.binarySearch(table, t);
-            return table[i >= 0 ? i : -i - 2];
+            int i = atLeast(t);
+            return table[table[i] == t ? i : i - 1];
         }
         return roundDownByDecades(value);
     }
