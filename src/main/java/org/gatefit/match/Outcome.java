@@ -47,6 +47,11 @@ final class Outcome {
         return why;
     }
 
+    /** {@link #verdict()}'s ordinal, for a ranking that compares verdicts as numbers. */
+    int verdictOrdinal() {
+        return verdict;
+    }
+
     double score() {
         return score;
     }

@@ -102,8 +102,8 @@ final class PairFigures {
         double qTotal = q.qTotal;
         double rSrc = DriveCurrent.outputOhms(d.rSource(), swing, d.iSource());
         double rSnk = DriveCurrent.outputOhms(d.rSink(), swing, d.iSink());
-        double rOnTot = loop(q, rSrc, op.rG());
-        double rOffTot = loop(q, rSnk, op.rGOff());
+        double rOnTot = loopOn(q, rSrc);
+        double rOffTot = loopOff(q, rSnk);
         // Q_g is a required column, but a part built elsewhere may lack it: every figure that
         // needs it stays unknown (NaN) and the rules that use them say unknown.
         boolean qKnown = !Double.isNaN(qTotal);
@@ -122,7 +122,7 @@ final class PairFigures {
         // (REFERENCES.md §8), judged at the slow corner.
         boolean edges = q.plateau;
         double iPlOn = edges ? plateauCurrentOn(q, d, kSlow * rSrc, op.rG()) : Double.NaN;
-        double iPlOff = edges ? DriveCurrent.plateau(s.vPlateau() - op.vDriveNeg(), loop(q, kSlow * rSnk, op.rGOff()),
+        double iPlOff = edges ? DriveCurrent.plateau(s.vPlateau() - op.vDriveNeg(), loopOff(q, kSlow * rSnk),
                 d.iSink()) : Double.NaN;
         double plateauOn = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOn) : Double.NaN;
         double plateauOff = edges ? SwitchingTimes.plateauTime(n * s.qGd(), iPlOff) : Double.NaN;
@@ -148,7 +148,7 @@ final class PairFigures {
                 continue;
             }
             double offEdge = edges && Double.isNaN(op.dvdt()) ? slewFrom(q, slow ? iPlOff : DriveCurrent.plateau(
-                    s.vPlateau() - op.vDriveNeg(), loop(q, k * rSnk, op.rGOff()), d.iSink())) : slewC;
+                    s.vPlateau() - op.vDriveNeg(), loopOff(q, k * rSnk), d.iSink())) : slewC;
             // Every edge the switch node makes: the twin's turn-on, this switch's own turn-on and turn-off.
             double ownOn = onEdge;
             double fastest = Math.max(slewC, Math.max(offEdge, Double.isNaN(ownOn) ? slewC : ownOn));
@@ -182,7 +182,7 @@ final class PairFigures {
             if (s.technology() == Technology.IGBT && !Double.isNaN(s.ratings().tF())) {
                 fall = s.ratings().tF();
             } else if (vTh > op.vDriveNeg() && vTh < s.vPlateau()) {
-                fall = SwitchingTimes.currentFall(loop(q, kFast * rSnk, op.rGOff()), n * s.cIss(), vTh,
+                fall = SwitchingTimes.currentFall(loopOff(q, kFast * rSnk), n * s.cIss(), vTh,
                         s.vPlateau(), op.vDriveNeg());
             }
             nodeOs = fall > 0 ? SwitchNode.overshoot(op.powerLoop(), op.iLoad(), fall) : Double.NaN;
@@ -195,12 +195,12 @@ final class PairFigures {
         double trough = Double.NaN;
         if (!Double.isNaN(s.cIss()) && s.cIss() > 0 && op.loop() > 0) {
             double cg = n * s.cIss();
-            double rOnFast = loop(q, kFast * rSrc, op.rG());
-            double rOffFast = loop(q, kFast * rSnk, op.rGOff());
+            double rOnFast = loopOn(q, kFast * rSrc);
+            double rOffFast = loopOff(q, kFast * rSnk);
             zOn = GateLoop.dampingRatio(rOnFast, op.loop(), cg);
             zOff = GateLoop.dampingRatio(rOffFast, op.loop(), cg);
-            peak = GateLoop.extreme(rOnFast, op.loop(), cg, op.vDriveNeg(), op.vDrive());
-            trough = GateLoop.extreme(rOffFast, op.loop(), cg, op.vDrive(), op.vDriveNeg());
+            peak = GateLoop.extreme(zOn, op.vDriveNeg(), op.vDrive());
+            trough = GateLoop.extreme(zOff, op.vDrive(), op.vDriveNeg());
         }
 
         // Only the driver's share is ruled on (driver-power); the split's other shares are shown figures.
@@ -220,7 +220,7 @@ final class PairFigures {
         double bDrain = Double.NaN;
         if (op.highSide() && d.topology().bootstrapped()) {
             double uv = Double.isNaN(d.uvloOff()) ? d.uvloOn() : d.uvloOff();
-            double full = fullEnhancement(s);
+            double full = q.fullOn;
             bFloor = Math.max(Double.isNaN(uv) ? 0 : uv, Double.isNaN(full) ? 0 : full);
             if (!Double.isNaN(uv) && !Double.isNaN(full) && op.vDrive() - op.diodeDrop() <= full) {
                 // The bootstrap never reaches full enhancement, whatever the capacitor: size it to the
@@ -333,7 +333,22 @@ final class PairFigures {
      * The one definition every loop total of the rules uses.
      */
     static double loop(Question q, double rDriverAt, double rGate) {
-        return rDriverAt + (rGate + q.rInt) / q.n;
+        return rDriverAt + gateSide(rGate, q.rInt, q.n);
+    }
+
+    /** The gate side of a loop per switch: the resistor and R_g,int of n switches in parallel, (R_g + R_g,int)/n, Ω. */
+    static double gateSide(double rGate, double rInt, int n) {
+        return (rGate + rInt) / n;
+    }
+
+    /** {@link #loop} of the turn-on edge (R_g), its gate side computed once per question. */
+    static double loopOn(Question q, double rDriverAt) {
+        return rDriverAt + q.gateOn;
+    }
+
+    /** {@link #loop} of the turn-off edge (R_g,off), its gate side computed once per question. */
+    static double loopOff(Question q, double rDriverAt) {
+        return rDriverAt + q.gateOff;
     }
 
     /**

@@ -55,6 +55,11 @@ public final class Question {
      * when a model refuses them; each pair then calls it itself and reports its refusal.
      */
     final boolean cornersKnown;
+    /** The gate side of each loop per switch, (R_g + R_g,int)/n on and (R_g,off + R_g,int)/n off, Ω ({@link PairFigures#loop}). */
+    final double gateOn;
+    final double gateOff;
+    /** The on level for full enhancement ({@link PairFigures#fullEnhancement}), V. */
+    final double fullOn;
     final double kHot;
     final double thCold;
     final double thHot;
@@ -104,6 +109,9 @@ public final class Question {
             }
         }
         this.offSwitch = off;
+        this.gateOn = PairFigures.gateSide(op.rG(), rInt, n);
+        this.gateOff = PairFigures.gateSide(op.rGOff(), rInt, n);
+        this.fullOn = PairFigures.fullEnhancement(s);
         boolean known = true;
         double k = Double.NaN;
         double cold = Double.NaN;

@@ -27,12 +27,17 @@ public final class Rules {
     private static final PairRule[] RANKED = new PairRule[PAIR_RULES.length];
     private static final int[] WEIGHTS = new int[PAIR_RULES.length];
     private static final Verdict[] VERDICTS = Verdict.values();
+    private static final byte PASS = (byte) Verdict.PASS.ordinal();
+    private static final byte FAIL = (byte) Verdict.FAIL.ordinal();
+    /** The weights' total, what a ranking that runs every rule divides by. */
+    private static final int TOTAL_WEIGHT;
 
     static {
         for (int i = 0; i < PAIR_RULES.length; i++) {
             RANKED[i] = PAIR_RULES[i].rule();
             WEIGHTS[i] = PAIR_RULES[i].id().weight();
         }
+        TOTAL_WEIGHT = java.util.Arrays.stream(WEIGHTS).sum();
     }
 
     private Rules() {
@@ -181,29 +186,30 @@ public final class Rules {
          */
         public void rank(DriverPart d) {
             PairFigures f = figuresOrNull(q, d, scratch);
-            Verdict v = Verdict.PASS;
-            Verdict rv = Verdict.PASS;
+            // Ordinals: Verdict is ordered best to worst, so the worse of two is the larger (Verdict#and).
+            int v = PASS;
+            int rv = PASS;
             double sum = 0;
-            int w = 0;
             for (int i = 0; i < RANKED.length; i++) {
                 judge(RANKED[i], f, d, q, out);
-                Verdict ov = out.verdict();
-                v = v.and(ov);
-                rv = out.open() ? rv : rv.and(ov);
-                if (v == Verdict.FAIL && !scoreFailing) {
-                    verdict = (byte) Verdict.FAIL.ordinal();
-                    rankVerdict = verdict;
+                int ov = out.verdictOrdinal();
+                v = Math.max(v, ov);
+                if (!out.open()) {
+                    rv = Math.max(rv, ov);
+                }
+                if (v == FAIL && !scoreFailing) {
+                    verdict = FAIL;
+                    rankVerdict = FAIL;
                     score = Double.NaN;
                     return;
                 }
                 sum += WEIGHTS[i] * out.score();
-                w += WEIGHTS[i];
             }
-            Verdict pair = v.forPair();
+            Verdict pair = VERDICTS[v].forPair();
             verdict = (byte) pair.ordinal();
-            rankVerdict = (byte) rv.forPair().ordinal();
-            score = Score.combine(sum, w, d.lifecycle().availability(d.stock()), q.s.lifecycle().availability(q.s.stock()),
-                    Score.supplyCost(q.op, d), pair);
+            rankVerdict = (byte) VERDICTS[rv].forPair().ordinal();
+            score = Score.combine(sum, TOTAL_WEIGHT, d.lifecycle().availability(d.stock()),
+                    q.s.lifecycle().availability(q.s.stock()), Score.supplyCost(q.op, d), pair);
         }
 
         public Verdict verdict() {

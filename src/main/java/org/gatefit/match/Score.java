@@ -39,13 +39,13 @@ public final class Score {
 
     /** Sub-score of a pass, rising from 0.7 with {@code excess} (margin beyond the limit, relative) to 1.0 at 1. */
     static double pass(double excess) {
-        double x = Double.isNaN(excess) ? 0 : Math.max(0, Math.min(1, excess));
+        double x = excess >= 1 ? 1 : excess > 0 ? excess : 0; // NaN: 0
         return 0.7 + 0.3 * x;
     }
 
     /** Sub-score of a warning, from 0.35 at the fail edge to 0.65 at the pass edge. */
     static double warn(double towardPass) {
-        double x = Double.isNaN(towardPass) ? 0.5 : Math.max(0, Math.min(1, towardPass));
+        double x = towardPass >= 1 ? 1 : towardPass > 0 ? towardPass : towardPass <= 0 ? 0 : 0.5; // NaN: 0.5
         return 0.35 + 0.3 * x;
     }
 

@@ -89,9 +89,14 @@ public final class GateLoop {
      * @return the extreme gate voltage of the first swing, V
      */
     public static double extreme(double resistance, double inductance, double capacitance, double from, double to) {
+        return extreme(dampingRatio(resistance, inductance, capacitance), from, to);
+    }
+
+    /** {@link #extreme} of a loop whose damping ratio ζ is already known ({@link #dampingRatio}). */
+    public static double extreme(double dampingRatio, double from, double to) {
         Require.finite("level before the step", "V", from);
         Require.finite("level after the step", "V", to);
-        return to + (to - from) * overshoot(dampingRatio(resistance, inductance, capacitance));
+        return to + (to - from) * overshoot(dampingRatio);
     }
 
     /**
