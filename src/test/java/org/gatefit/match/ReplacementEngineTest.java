@@ -193,6 +193,35 @@ class ReplacementEngineTest {
     }
 
     @Test
+    void theScoreNeverFallsBelowItsFloor() throws Exception {
+        Map<String, Object> rich = new LinkedHashMap<>();
+        rich.put("q_gs_nc", 30.0);
+        rich.put("q_gd_nc", 30.0);
+        rich.put("v_plateau_v", 5.0);
+        rich.put("c_rss_pf", 100.0);
+        rich.put("r_g_int_ohm", 1.0);
+        rich.put("v_gate_on_v", 10.0);
+        rich.put("v_gate_off_v", 0.0);
+        Row original = sw("TST-O", rich);
+        Map<String, Object> all = new LinkedHashMap<>();
+        // 3 worse ratings (I_cont, R_on, its V_GS) and 11 windows left (Q_g, Q_gs, Q_gd, C_iss, C_rss, R_g,int,
+        // V_th min and max, plateau, on and off levels)
+        all.putAll(Map.of("i_cont_a", 150.0, "r_on_mohm", 3.5, "r_on_vgs_v", 12.0, "q_g_nc", 130.0, "q_gs_nc", 40.0,
+                "q_gd_nc", 40.0, "c_iss_pf", 9000.0, "c_rss_pf", 150.0, "r_g_int_ohm", 2.0, "v_th_min_v", 3.0));
+        all.putAll(Map.of("v_th_max_v", 5.0, "v_plateau_v", 6.0, "v_gate_on_v", 12.0, "v_gate_off_v", -5.0));
+        Map<String, Object> worst = new LinkedHashMap<>(rich);
+        worst.putAll(all);
+        Map<String, Object> near = new LinkedHashMap<>(rich);
+        near.putAll(all);
+        near.put("v_gate_off_v", 0.0); // 10 windows: 1 − 0.3 − 0.5 = 0.2 exactly
+        Replacement.Result r = search(List.of(sw("TST-WORST", worst), sw("TST-NEAR", near)), original, 10, false, false);
+        assertEquals(List.of("3 ratings are worse than the original's", "11 parameters outside the re-verify window"),
+                find(r, "TST-WORST").reasons());
+        assertEquals(0.2, find(r, "TST-WORST").score(), 1e-12, "1 − 0.1·3 − 0.05·11 = 0.15, held at 0.2");
+        assertEquals(0.2, find(r, "TST-NEAR").score(), 1e-12, "1 − 0.1·3 − 0.05·10 = 0.2");
+    }
+
+    @Test
     void obsoletePartsWhenAskedForArePinCompatibleAtBest() throws Exception {
         Row original = sw("TST-O", Map.of());
         Replacement.Result r = search(catalog(), original, 100, true, true);
@@ -318,22 +347,31 @@ class ReplacementEngineTest {
                     d.iSink = 0.02;
                 }),
                 driver("TST-DNRND", d -> d.lifecycle = "nrnd")));
-        List<Row> stages = List.of(stage("ST1", "TST-D1", "TST-S1"), stage("ST2", "TST-D9", "TST-S1"));
+        Row fast = stage("ST3", "TST-D1", "TST-S1");
+        Map<String, Object> fv = new LinkedHashMap<>(fast.values());
+        fv.put("f_sw_khz", 400.0);
+        fv.put("edge_ns", 20.0);
+        fast = new Row(Kind.STAGE, "ST3", "stages.csv", 4, fv, Map.of());
+        List<Row> stages = List.of(stage("ST1", "TST-D1", "TST-S1"), stage("ST2", "TST-D9", "TST-S1"), fast);
         Replacement.Result r = Replacement.search(new ListParts(parts), original, 10, false, true, "stages.csv", stages,
                 null, Margins.DEFAULT);
-        assertEquals(List.of("ST1"), r.stagesUsing(), "the stage with another driver is not re-checked");
-        StageCheck.Report base = StageCheck.run("stages.csv", List.of(stages.get(0)), null,
+        assertEquals(List.of("ST1", "ST3"), r.stagesUsing(), "the stage with another driver is not re-checked");
+        StageCheck.Report base = StageCheck.run("stages.csv", List.of(stages.get(0), stages.get(2)), null,
                 pn -> new ListParts(parts).get(Kind.DRIVER, pn), pn -> new ListParts(parts).get(Kind.SWITCH, pn),
                 Margins.DEFAULT);
         StageCheck.StageResult was = base.results().get(0);
-        assertEquals(was.checks().stream().filter(c -> c.verdict() != Verdict.PASS).count(), r.standing().size());
+        StageCheck.StageResult was3 = base.results().get(1);
+        assertTrue(was.score() != was3.score(), "two stages of different scores");
+        assertEquals(was.checks().stream().filter(c -> c.verdict() != Verdict.PASS).count()
+                + was3.checks().stream().filter(c -> c.verdict() != Verdict.PASS).count(), r.standing().size());
 
         Replacement.Candidate same = find(r, "TST-DSAME");
         assertEquals(Replacement.Grade.DROP_IN, same.grade());
-        assertEquals(List.of(new Replacement.StageOutcome("ST1", was.verdict(), was.verdict(), Replacement.Change.UNCHANGED)),
+        assertEquals(List.of(new Replacement.StageOutcome("ST1", was.verdict(), was.verdict(), Replacement.Change.UNCHANGED),
+                new Replacement.StageOutcome("ST3", was3.verdict(), was3.verdict(), Replacement.Change.UNCHANGED)),
                 same.stages());
         assertEquals(List.of(), same.checks());
-        assertEquals(was.score(), same.score(), 1e-12, "1.0 × 1 × the stage's own score");
+        assertEquals((was.score() + was3.score()) / 2, same.score(), 1e-12, "1.0 × 1 × the mean of the stages' scores");
 
         Replacement.Candidate vih = find(r, "TST-DVIH");
         assertEquals(Replacement.Grade.PIN_COMPATIBLE, vih.grade());
@@ -357,7 +395,8 @@ class ReplacementEngineTest {
         // check that got worse: still drop-in on its ratings
         Replacement.Candidate nrnd = find(r, "TST-DNRND");
         assertEquals(Replacement.Change.WORSE, nrnd.stages().get(0).change());
-        assertEquals(List.of("lifecycle"), nrnd.checks().stream().map(Replacement.StageNote::rule).toList());
+        assertEquals(List.of("ST1 lifecycle", "ST3 lifecycle"),
+                nrnd.checks().stream().map(x -> x.stage() + " " + x.rule()).toList());
         assertEquals(Replacement.Grade.DROP_IN, nrnd.grade());
     }
 
