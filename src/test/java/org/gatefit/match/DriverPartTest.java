@@ -163,6 +163,18 @@ class DriverPartTest {
     }
 
     @Test
+    void aPolarityListIsReadTheSameFirstTimeAndAfter() {
+        // A text no other test reads (the decoded lists are kept once per distinct text), read twice:
+        // the first reading decodes it, the second finds it kept.
+        String fresh = "inverting;" + " ".repeat(1 + (int) (System.nanoTime() % 500)) + "non-inverting";
+        DriverPart first = DriverPart.of(row(Map.of("input_polarity", fresh)));
+        DriverPart again = DriverPart.of(row(Map.of("input_polarity", fresh)));
+        assertEquals(List.of(true, false), first.inverting());
+        assertEquals(List.of(true, false), again.inverting());
+        assertTrue(DriverPart.offers(fresh + ";inverting", false));
+    }
+
+    @Test
     void aCursorWithoutAPartNumberGivesNoDriver() {
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("part_number", null);

@@ -99,6 +99,8 @@ class MarginsTest {
         IllegalArgumentException notNumber = assertThrows(IllegalArgumentException.class,
                 () -> Margins.DEFAULT.with("cmti=two"));
         assertEquals("expected a number after 'cmti=', got 'two'", notNumber.getMessage());
+        IllegalArgumentException noName = assertThrows(IllegalArgumentException.class, () -> Margins.DEFAULT.with("=2"));
+        assertTrue(noName.getMessage().startsWith("unknown margin ''"), noName.getMessage());
         IllegalArgumentException unknown = assertThrows(IllegalArgumentException.class,
                 () -> Margins.DEFAULT.with("speed=2"));
         assertTrue(unknown.getMessage().startsWith("unknown margin 'speed' (expected one of drive-current, gate-headroom"),

@@ -425,6 +425,68 @@ class ReplacementEngineTest {
         assertEquals("other pinout (PKG2) and stage ST1 fails with it in place", reason(r, "TST-DPIN"));
     }
 
+    @Test
+    void aSwitchIsReCheckedInItsStagesToo() throws Exception {
+        Row original = ListParts.switchRow(Parts.sw());
+        Parts.Sw same = Parts.sw();
+        same.pn = "TST-SSAME";
+        Parts.Sw heavy = Parts.sw();
+        heavy.pn = "TST-SHEAVY";
+        // Q_gd 300 nC moved in the 50 ns edge needs 300 nC / 50 ns = 6 A on the plateau (REFERENCES.md §1,
+        // I = Q / t), more than the 4 A driver gives: the drive-current check fails
+        heavy.qGd = 300e-9;
+        heavy.qG = 50e-9 * 1.1;
+        List<Row> parts = List.of(original, ListParts.switchRow(same), ListParts.switchRow(heavy),
+                ListParts.driverRow(Parts.dr()));
+        Replacement.Result r = Replacement.search(new ListParts(parts), original, 10, false, false, "stages.csv",
+                List.of(stage("ST1", "TST-D1", "TST-S1")), null, Margins.DEFAULT);
+        assertEquals(List.of("ST1"), r.stagesUsing());
+        Replacement.Candidate s = find(r, "TST-SSAME");
+        assertEquals(Replacement.Grade.DROP_IN, s.grade());
+        assertEquals(Replacement.Change.UNCHANGED, s.stages().get(0).change());
+        Replacement.Candidate h = find(r, "TST-SHEAVY");
+        assertEquals(Verdict.FAIL, h.stages().get(0).verdict());
+        assertEquals(Replacement.Change.WORSE, h.stages().get(0).change());
+        assertTrue(h.reasons().contains("a stage fails with it in place"), h.reasons()::toString);
+        assertTrue(h.checks().stream().anyMatch(c -> c.rule().equals("drive-current") && c.verdict() == Verdict.FAIL),
+                h.checks()::toString);
+    }
+
+    @Test
+    void equalCandidatesAreRankedByPriceUnknownLastThenPartNumber() throws Exception {
+        Row original = sw("TST-O", Map.of());
+        Map<String, Object> unknown = new LinkedHashMap<>();
+        unknown.put("unit_price", null);
+        Replacement.Result r = search(List.of(sw("TST-P1", Map.of("unit_price", 1.5)), sw("TST-P2", unknown),
+                sw("TST-P4", Map.of("unit_price", 1.0)), sw("TST-P3", Map.of("unit_price", 1.0))), original, 10, false,
+                false);
+        assertEquals(List.of("TST-P3", "TST-P4", "TST-P1", "TST-P2"),
+                r.candidates().stream().map(Replacement.Candidate::partNumber).toList());
+    }
+
+    @Test
+    void partsNotOfferedAreListedInPartNumberOrderWhateverOrderTheyCome() {
+        Row original = sw("TST-O", Map.of());
+        Replacement.Search s = new Replacement.Search(original, 5, false, "", List.of(), null, pn -> Optional.empty(),
+                pn -> Optional.empty(), Margins.DEFAULT, true);
+        for (String pn : List.of("TST-Z", "TST-M", "TST-A")) {
+            s.accept(sw(pn, Map.of("technology", "gan-hemt")));
+        }
+        s.accept(sw("TST-B", Map.of("lifecycle", "obsolete")));
+        Replacement.Result r = s.result(5);
+        assertEquals(List.of("TST-A", "TST-B", "TST-M", "TST-Z"),
+                r.notOfferedParts().stream().map(Replacement.NotOffered::partNumber).toList());
+        assertEquals(4, r.notOffered());
+    }
+
+    @Test
+    void changesAndGradesAreSaidInTheReadmesWords() {
+        assertEquals(List.of("unchanged", "better", "worse"),
+                java.util.Arrays.stream(Replacement.Change.values()).map(Replacement.Change::id).toList());
+        assertEquals(List.of("drop-in", "pin-compatible", "functional"),
+                java.util.Arrays.stream(Replacement.Grade.values()).map(Replacement.Grade::id).toList());
+    }
+
     // ---------------------------------------------------------------- the parameter table
 
     @Test
