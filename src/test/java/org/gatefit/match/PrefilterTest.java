@@ -191,7 +191,7 @@ class PrefilterTest {
 
     @Test
     void theQuestionsLimitsAreTheOnesTheRulesDeclare() {
-        // High side, 400 V bus, +15/−5 V from 5 V CMOS, active low, on the SiC-like switch of Parts with V_GS −20 V.
+        // High side, 400 V bus, +15/−5 V from 5 V CMOS, active low, on the Si MOSFET of Parts (V_GS ±20 V).
         OperatingPoint.Spec s = Parts.op();
         s.highSide = true;
         s.bus = 400.0;
