@@ -54,8 +54,8 @@ final class PolarityRule extends PairRule {
     @Override
     public void certainFailures(Question q, Prefilter.Builder b) {
         boolean wantInverting = !q.op.activeHigh();
-        String sense = wantInverting ? "inverting" : "non-inverting";
+        String sense = wantInverting ? "an inverting" : "a non-inverting";
         b.skipText(Rule.POLARITY, new Prefilter.TextTest("input_polarity",
-                "input_polarity without a " + sense + " channel", t -> !DriverPart.offers(t, wantInverting)));
+                "input_polarity without " + sense + " channel", t -> !DriverPart.offers(t, wantInverting)));
     }
 }

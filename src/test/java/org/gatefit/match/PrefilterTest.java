@@ -211,7 +211,7 @@ class PrefilterTest {
                 "skip v_in_max_v < 5.5 and v_ih_v known and v_il_v known (logic-level fails)",
                 "skip v_neg_min_v > -5 (negative-bias fails)",
                 "skip uvlo_on_v > 20 (uvlo fails)",
-                "skip input_polarity without a inverting channel (polarity fails)",
+                "skip input_polarity without an inverting channel (polarity fails)",
                 "skip lifecycle = obsolete (lifecycle fails)")) {
             assertTrue(d.contains(want), () -> want + " not in " + d);
         }
