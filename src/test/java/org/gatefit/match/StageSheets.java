@@ -115,7 +115,7 @@ final class StageSheets {
 
     /**
      * A stage row at {@link Parts#op()}'s baseline (low side, 48 V, 100 kHz, 50 ns, +10 / 0 V,
-     * LVCMOS 3.3 V, R_g 2 Ω, 10 nH, hot corner 125 °C), with {@code changes} as column, value pairs
+     * LVCMOS 3.3 V, R_g 2 Ω, 10 nH, hot corner 125 °C, no twin), with {@code changes} as column, value pairs
      * in the sheet's units (a null value removes the column).
      */
     static Row stage(String id, long line, String driver, String sw, Object... changes) {
@@ -133,7 +133,7 @@ final class StageSheets {
         v.put("r_g_ohm", 2.0);
         v.put("loop_nh", 10.0);
         v.put("t_j_c", 125.0);
-        v.put("bridge", "yes");
+        v.put("bridge", "no");
         for (int i = 0; i < changes.length; i += 2) {
             v.put((String) changes[i], changes[i + 1]);
         }
