@@ -158,6 +158,42 @@ final class StageSheets {
         return StageCheck.run("stages.csv", stages, bom, lookup(drivers), lookup(switches), Margins.DEFAULT);
     }
 
+    /** The parts as a catalog ({@link PartSource}) that looks parts up by part number, nothing more. */
+    static PartSource parts(List<Row> drivers, List<Row> switches) {
+        return new PartSource() {
+            @Override
+            public Optional<Row> get(Kind kind, String partNumber) {
+                return lookup(kind == Kind.DRIVER ? drivers : switches).apply(partNumber);
+            }
+
+            @Override
+            public int count(Kind kind) {
+                return (kind == Kind.DRIVER ? drivers : switches).size();
+            }
+
+            @Override
+            public boolean isEmpty() {
+                return drivers.isEmpty() && switches.isEmpty();
+            }
+
+            @Override
+            public String describe() {
+                return "test parts";
+            }
+
+            @Override
+            public long scan(Kind kind, Prefilter skip, java.util.function.Consumer<Row> sink) {
+                throw new UnsupportedOperationException("not needed by check");
+            }
+
+            @Override
+            public <S extends java.util.function.Consumer<org.gatefit.catalog.RowCursor>> List<S> scanColumns(Kind kind,
+                    Prefilter skip, int threads, java.util.function.Supplier<S> sinks) {
+                throw new UnsupportedOperationException("not needed by check");
+            }
+        };
+    }
+
     /** The check of {@code rule} of a stage. */
     static Check check(StageCheck.StageResult r, Rule rule) {
         return r.checks().stream().filter(c -> c.rule() == rule).findFirst()
