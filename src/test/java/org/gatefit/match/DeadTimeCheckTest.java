@@ -426,7 +426,7 @@ class DeadTimeCheckTest {
         d2.pn = "TST-D2";
         Report rep = StageSheets.run(List.of(a, b), null, List.of(StageSheets.driverRow(Parts.dr()),
                 StageSheets.driverRow(d2)), List.of(StageSheets.switchRow(Parts.sw())));
-        assertEquals("half-bridge with LS: ", check(stageOf(rep, "HS"), Rule.DEAD_TIME).message().substring(0, 21));
+        assertTrue(check(stageOf(rep, "HS"), Rule.DEAD_TIME).message().startsWith("half-bridge with LS: "));
         assertTrue(check(stageOf(rep, "LS"), Rule.DEAD_TIME).message().startsWith("half-bridge with HS: "));
     }
 
