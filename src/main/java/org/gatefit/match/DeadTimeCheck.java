@@ -193,7 +193,14 @@ final class DeadTimeCheck {
         if (Double.isNaN(plateau)) {
             throw new IllegalArgumentException("the plateau voltage or Q_gd of " + s.partNumber() + " is unknown");
         }
-        double fall = vTh > op.vDriveNeg() && vTh < s.vPlateau()
+        if (vTh <= op.vDriveNeg()) {
+            // The off level does not take the gate below V_th,min at the hot corner: the switch is not
+            // held off, so no dead time is enough — never a finite minimum that could pass.
+            throw new IllegalArgumentException("V_th,min of " + s.partNumber() + " at " + Eng.num(tHot) + " °C ("
+                    + Eng.of(vTh, "V") + ") is at or below the off level (" + Eng.of(op.vDriveNeg(), "V")
+                    + "), so the switch is not held off and no dead time is enough");
+        }
+        double fall = vTh < s.vPlateau()
                 ? DeadTime.rcSegment(rOff, n * s.cIss(), op.vDriveNeg(), s.vPlateau(), vTh) : 0;
         if (!Double.isNaN(tf)) {
             fall = Math.max(fall, tf);

@@ -2,7 +2,6 @@ package org.gatefit.match;
 
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -282,12 +281,5 @@ public final class StageCheck {
 
     private static String describe(String ref, String pn) {
         return ref.equalsIgnoreCase(pn) ? pn : ref + " (" + pn + ")";
-    }
-
-    private static StageResult withNote(StageResult r, String note) {
-        List<String> n = new ArrayList<>(r.notes());
-        n.add(note);
-        return new StageResult(r.stage(), r.line(), r.driverRef(), r.driver(), r.switchRef(), r.switchPart(), r.verdict(),
-                r.score(), r.checks(), r.figures(), r.point(), n);
     }
 }

@@ -391,6 +391,21 @@ class DeadTimeCheckTest {
     }
 
     @Test
+    void aThresholdAtOrBelowTheOffLevelWhenHotIsNeverAPass() {
+        // V_th,min 0.5 V at 25 °C falls 6 mV/K (REFERENCES.md §8, from memory) to 0.5 − 0.006·100 = −0.1 V
+        // at the 125 °C hot corner, below the 0 V off level: the driver does not hold the switch off, so
+        // no dead time is enough, not even 1 µs. Before, the fall to V_th,min was taken as 0 and the
+        // dead time passed.
+        Report rep = bridge(s -> s.vThMin = 0.5, d -> { }, dead(1000), dead(1000));
+        StageResult ls = stageOf(rep, "LS");
+        Check c = check(ls, Rule.DEAD_TIME);
+        assertEquals(Verdict.UNKNOWN, c.verdict(), c.message());
+        contains(c, "the turn-off of HS cannot be estimated: V_th,min of TST-S1 at 125 °C (-100 mV) is at or below"
+                + " the off level (0 V), so the switch is not held off and no dead time is enough");
+        assertTrue(ls.figure("dead-time-min").isEmpty(), "no minimum figure when the switch is not held off");
+    }
+
+    @Test
     void withoutAPlateauTheTurnOffCannotBeEstimated() {
         // Q_gd 0: no Miller plateau to time.
         Report rep = bridge(s -> s.qGd = 0, d -> { }, dead(1000), dead(1000));
