@@ -138,4 +138,223 @@ class ShownFiguresTest {
         close(4.5111, two.rgMax, 1e-4, "top, two switches");
         assertEquals(2.4, two.rgRecommended, 1e-12);
     }
+
+    @Test
+    void ringingFloorWhenTheHeadroomAllowsLessOvershootThanTheDampingTarget() {
+        Parts.Sw s = Parts.sw();
+        s.vGsMax = 11.3;
+        OperatingPoint.Spec o = Parts.op();
+        o.loop = 40e-9;
+        o.parallel = 2;
+        ShownFigures f = shown(s, Parts.dr(), o);
+        // Allowed overshoot (11.3·(1 − 0.10) − 10)/10 = 0.017 of the step; the series R-L-C step overshoots by
+        // exp(−πζ/√(1 − ζ²)) (REFERENCES §8), so ζ = −ln 0.017/√(π² + ln² 0.017) = 0.79194. Two switches, C = 6 nF:
+        // R = 2ζ·√(L/C) = 2·0.79194·2.5820 = 4.0895 Ω in the loop, per switch 2·(4.0895 − 2 − 0.5) = 3.1791 Ω,
+        // above the damping floor 2.2296 Ω (dampingFloorOfALongLoopAndParallelSwitches).
+        close(3.1791, f.rgMin, 1e-4, "floor");
+        assertEquals("the gate-ringing rule", f.rgFloor);
+        // aim max(3.1791, 4.5111/2) → E24 nearest 3.3 Ω (IEC 60063), inside 3.18–4.51 Ω
+        assertEquals(3.3, f.rgRecommended, 1e-12);
+    }
+
+    @Test
+    void noRingingFloorAtZeroOrFullAllowedOvershoot() {
+        // Gate headroom 50 %: V_GS,max 20 V leaves 20·0.5 − 10 = 0 V of overshoot, 40 V leaves 10 V, the whole
+        // step (a fraction of 1). Neither is an overshoot a damping ratio gives (0 < os < 1, REFERENCES §8): the
+        // damping floor stands, 0.7·7.3030 − 3 = 2.1121 Ω with a 40 nH loop (REFERENCES §3).
+        for (double vGsMax : new double[] {20, 40}) {
+            Parts.Sw s = Parts.sw();
+            s.vGsMax = vGsMax;
+            OperatingPoint.Spec o = Parts.op();
+            o.loop = 40e-9;
+            ShownFigures f = shown(s, Parts.dr(), o, margins(1.5, 0.5));
+            close(2.1121, f.rgMin, 1e-4, "floor at V_GS,max " + vGsMax);
+            assertEquals("damping ζ ≥ 0.7", f.rgFloor);
+        }
+        // Without V_GS,max there is no ringing floor either.
+        Parts.Sw s = Parts.sw();
+        s.vGsMax = Double.NaN;
+        OperatingPoint.Spec o = Parts.op();
+        o.loop = 40e-9;
+        assertEquals("damping ζ ≥ 0.7", shown(s, Parts.dr(), o).rgFloor);
+    }
+
+    @Test
+    void topIsZeroWhenTheRatedPeakIsShortOfThePlateauNeedOrTheDriverTooWeak() {
+        // The plateau needs 1.5·0.3 A = 0.45 A (REFERENCES §8, README margin): a 0.4 A driver cannot give it at
+        // any resistor, so the top is 0 Ω and nothing is recommended.
+        Parts.Dr weak = Parts.dr();
+        weak.iSource = 0.4;
+        ShownFigures f = shown(Parts.sw(), weak, Parts.op());
+        assertEquals(0, f.rgMax, 0.0);
+        assertTrue(Double.isNaN(f.rgRecommended), "recommended " + f.rgRecommended);
+        // An 8 Ω source: 5/0.45 − 1.4·8 − 1 = −1.09 Ω, never a negative bound: 0 Ω.
+        Parts.Dr slow = Parts.dr();
+        slow.rSource = 8;
+        ShownFigures g = shown(Parts.sw(), slow, Parts.op());
+        assertEquals(0, g.rgMax, 0.0);
+        assertTrue(Double.isNaN(g.rgRecommended), "recommended " + g.rgRecommended);
+    }
+
+    @Test
+    void aDriverRatedExactlyAtThePlateauNeedHasATop() {
+        Parts.Sw s = Parts.sw();
+        SwitchPart sp = s.build();
+        Question q = Question.of(sp, Parts.op().resolve(sp), Margins.DEFAULT);
+        // rated peak = margin × n·Q_gd/t exactly (0.45 A): the need is met, the top is the resistance formula's,
+        // 5/0.45 − 1.4·2 − 1 = 7.3111 Ω (REFERENCES §8)
+        Parts.Dr d = Parts.dr();
+        d.iSource = q.m.driveCurrent() * q.iReqPlateau;
+        ShownFigures f = new ShownFigures(PairFigures.of(q, d.build()));
+        close(7.3111, f.rgMax, 1e-4, "top");
+    }
+
+    @Test
+    void withoutAPlateauThereIsNoTop() {
+        // A plateau at the on level: the drain edge is never crossed (Question.plateau), no top, no recommendation.
+        Parts.Sw s = Parts.sw();
+        s.vPlateau = 10;
+        ShownFigures f = shown(s, Parts.dr(), Parts.op());
+        assertTrue(Double.isNaN(f.rgMax), "top " + f.rgMax);
+        assertTrue(Double.isNaN(f.rgRecommended), "recommended " + f.rgRecommended);
+        assertTrue(Double.isNaN(f.delayOn), "delay " + f.delayOn);
+    }
+
+    @Test
+    void withoutInputCapacitanceThereIsNoGateLoop() {
+        Parts.Sw s = Parts.sw();
+        s.cIss = 0;
+        ShownFigures f = shown(s, Parts.dr(), Parts.op());
+        assertTrue(Double.isNaN(f.rgMax), "top " + f.rgMax);
+        assertTrue(Double.isNaN(f.rCrit), "critical " + f.rCrit);
+        assertEquals("", f.rgFloor);
+    }
+
+    /**
+     * The dv-dt figures below are REFERENCES §8's charge-consistent Miller injection — C_gd = Q_gd/V_bus, the
+     * off gate held through n·R_sink + R_g,off + R_g,int and loaded by C_iss, V = C_gd·dv/dt·R·(1 − e^(−t/(R·C_iss)))
+     * with t = V_bus/(dv/dt), at most V_bus·C_gd/(C_gd + C_gs) — with the twin's edge dv/dt = V_bus·I_pl/(n·Q_gd)
+     * and I_pl = (V_on − V_pl)/R_on (REFERENCES §8), solved by bisection in a separate Python script over these
+     * formulas (computed, like ReferenceFiguresTest's dv-dt floor). Baseline pair in a bridge at 48 V: the twin's
+     * edge is 48·(5/5.8 Ω)/15 nC = 2.7586 V/ns at 125 °C (R_source 1.4·2 Ω), held through 1.4 + 2 + 1 = 4.4 Ω:
+     * 2.778 V induced against V_th,min 2 − 0.006·100 = 1.4 V (the 125 °C corner decides).
+     */
+    private static OperatingPoint.Spec bridge() {
+        OperatingPoint.Spec o = Parts.op();
+        o.bridge = true;
+        return o;
+    }
+
+    @Test
+    void inABridgeNoResistorWithinTheEdgeAvoidsAMillerTurnOn() {
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), bridge());
+        // Even the top 7.3111 Ω leaves the induced voltage above V_th,min (computed: the floor would be
+        // 11.42 Ω, past the edge): no floor within the range, nothing recommended.
+        assertEquals(Double.POSITIVE_INFINITY, f.rgMin);
+        assertEquals("the dv-dt rule (the twin's turn-on edge)", f.rgFloor);
+        close(7.3111, f.rgMax, 1e-4, "top");
+        assertTrue(Double.isNaN(f.rgRecommended), "recommended " + f.rgRecommended);
+        // The dv/dt at which the 4.4 Ω path reaches 1.4 V: 1.0513 V/ns (computed).
+        close(1.0513e9, f.dvdtAllowed, 1e-4, "allowed dv/dt");
+        // The holding path that would do is 1.144 Ω, below the fixed 1.4·1 + 1 Ω: no R_g,off helps.
+        assertEquals("a negative off level or a driver with a Miller clamp", f.dvdtFix());
+    }
+
+    @Test
+    void aDvDtFloorInsideTheRangeAndEveryWayOut() {
+        Parts.Dr d = Parts.dr();
+        d.rSink = 0.5;
+        d.vNegMin = -10;
+        OperatingPoint.Spec o = bridge();
+        o.vDriveNeg = -1.5;
+        o.rGOff = 5.0;
+        ShownFigures f = shown(Parts.sw(), d, o);
+        // The twin's turn-on resistor below which dv-dt fails at one corner: 4.3073 Ω (computed, bisection to 1e-4).
+        close(4.3073, f.rgMin, 2e-4, "floor");
+        assertEquals("the dv-dt rule (the twin's turn-on edge)", f.rgFloor);
+        // aim max(4.3073, 7.3111/2) → E24 nearest 4.3, below the floor → up: 4.7 Ω (IEC 60063)
+        assertEquals(4.7, f.rgRecommended, 1e-12);
+        // R_g,off: the holding path may be 3.5908 Ω (computed: 0.7·1.4 + 1.5 = 2.48 V at 2.7586 V/ns), less the fixed
+        // 1.4·0.5 + 1 = 1.7 Ω: 1.8908 Ω → E24 down 1.8 Ω; R_g up to the floor's E24 4.7 Ω.
+        assertEquals("lower R_g,off to ≤ 1.8 Ω, raise R_g (turn-on) to ≥ 4.7 Ω to slow the edge, a deeper negative off"
+                + " level or a driver with a Miller clamp", f.dvdtFix());
+    }
+
+    @Test
+    void atACornerBelowTwentyFiveDegreesTheDatasheetCornerDecidesAndItsSinkResistanceCounts() {
+        Parts.Dr d = Parts.dr();
+        d.rSink = 0.5;
+        d.vNegMin = -10;
+        OperatingPoint.Spec o = bridge();
+        o.vDriveNeg = -1.5;
+        o.rGOff = 5.0;
+        o.tj = -55.0;
+        ShownFigures f = shown(Parts.sw(), d, o);
+        assertEquals(25, f.f.dvdtCornerC(), 0.0);
+        // At 25 °C (V_th,min 2 V, twin's edge 3.2 V/ns): the holding path may be 4.1322 Ω (computed), less
+        // 1·0.5 + 1 Ω at 25 °C = 2.6322 Ω → E24 down 2.4 Ω. The dv-dt floor 1.949 Ω is below R_g 2 Ω: not raised.
+        assertEquals("lower R_g,off to ≤ 2.4 Ω, a deeper negative off level or a driver with a Miller clamp",
+                f.dvdtFix());
+        // The slow corner is 25 °C here (factor 1 − 0.004·80 = 0.68 at −55 °C): top 5/0.45 − 2 − 1 = 8.1111 Ω.
+        close(8.1111, f.rgMax, 1e-4, "top");
+        close(1.9494, f.rgMin, 2e-4, "floor");
+    }
+
+    @Test
+    void aDvDtFloorOfZeroLeavesTheDampingFloor() {
+        Parts.Dr d = Parts.dr();
+        d.vNegMin = -10;
+        OperatingPoint.Spec o = bridge();
+        o.vDriveNeg = -2.0;
+        ShownFigures f = shown(Parts.sw(), d, o);
+        // −2 V off: even 0 Ω keeps the induced voltage (2.778 V) below V_th,min + 2 V at both corners (computed);
+        // the damping floor (0 Ω, REFERENCES §3) stands.
+        assertEquals(0, f.rgMin, 0.0);
+        assertEquals("damping ζ ≥ 0.7", f.rgFloor);
+        // R_g,off: the holding path may be 5.0758 Ω (computed), less 2.4 Ω = 2.68 Ω, more than the 2 Ω it has.
+        assertEquals("a deeper negative off level or a driver with a Miller clamp", f.dvdtFix());
+    }
+
+    @Test
+    void aMillerClampDriverAboveTheFloorHasOneWayLeft() {
+        Parts.Dr d = Parts.dr();
+        d.millerClamp = true;
+        OperatingPoint.Spec o = bridge();
+        o.rG = 5.0;
+        ShownFigures f = shown(Parts.sw(), d, o);
+        // Held by the clamp, 1.4·1 + 1 Ω: the floor is 4.5021 Ω (computed), below R_g 5 Ω.
+        close(4.5021, f.rgMin, 2e-4, "floor");
+        assertEquals("a negative off level", f.dvdtFix());
+    }
+
+    @Test
+    void aKnownTwinIsNamedAndSetsNoFloor() {
+        OperatingPoint.Spec o = bridge();
+        o.twin = new OperatingPoint.Twin("HS1", 5e9, 4e9);
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), o);
+        assertEquals("damping ζ ≥ 0.7", f.rgFloor);
+        assertEquals("slow HS1's turn-on (a larger R_g there), a negative off level or a driver with a Miller clamp",
+                f.dvdtFix());
+        Figure dv = figure(f, "dv-dt");
+        assertTrue(dv.label().startsWith("bus / HS1's turn-on plateau, 125 °C"), dv.label());
+        assertTrue(dv.estimated());
+    }
+
+    @Test
+    void aCapacitiveDividerBelowThresholdAllowsAnyDvDt() {
+        Parts.Dr d = Parts.dr();
+        d.vNegMin = -10;
+        OperatingPoint.Spec o = bridge();
+        o.vDriveNeg = -5.0;
+        ShownFigures f = shown(Parts.sw(), d, o);
+        // An open gate takes V_bus·C_gd/(C_gd + C_gs) = 48·0.3125/(0.3125 + 2.95) = 4.598 V of the edge (REFERENCES §8),
+        // short of 1.4 + 5 V: no dv/dt reaches V_th,min, the figure is left out (JSON has no infinity).
+        assertEquals(Double.POSITIVE_INFINITY, f.dvdtAllowed);
+        assertTrue(f.figures().stream().noneMatch(x -> x.name().equals("dv-dt-allowed")), f.figures().toString());
+    }
+
+    private static Figure figure(ShownFigures f, String name) {
+        return f.figures().stream().filter(x -> x.name().equals(name)).findFirst()
+                .orElseThrow(() -> new AssertionError("no " + name + " in " + f.figures()));
+    }
 }
