@@ -357,4 +357,92 @@ class ShownFiguresTest {
         return f.figures().stream().filter(x -> x.name().equals(name)).findFirst()
                 .orElseThrow(() -> new AssertionError("no " + name + " in " + f.figures()));
     }
+
+    @Test
+    void theFigureListCarriesThePlateauFiguresAndSaysWhereTheResistancesComeFrom() {
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), Parts.op());
+        // REFERENCES §8: the plateau needs n·Q_gd/t = 15 nC/50 ns = 0.3 A; the turn-off plateau current at the slow
+        // corner is (V_pl − V_off)/R_off = 5/(1.4·1 + 2 + 1) = 1.1364 A, under the 6 A rating.
+        close(0.3, figure(f, "gate-current-plateau-required").value(), 1e-12, "plateau need");
+        Figure off = figure(f, "gate-current-plateau-off");
+        close(1.1364, off.value(), 1e-4, "plateau current off");
+        assertTrue(off.label().endsWith(", 125 °C"), off.label());
+        assertEquals("from the catalog", figure(f, "driver-resistance-source").label());
+        assertEquals("from the catalog", figure(f, "driver-resistance-sink").label());
+        assertFalse(figure(f, "driver-resistance-sink").estimated());
+
+        // REFERENCES §1: without catalog resistances the driver is V/I_peak, 10/4 = 2.5 Ω and 10/6 = 1.667 Ω, said so.
+        Parts.Dr d = Parts.dr();
+        d.rSource = Double.NaN;
+        d.rSink = Double.NaN;
+        ShownFigures e = shown(Parts.sw(), d, Parts.op());
+        Figure src = figure(e, "driver-resistance-source");
+        Figure snk = figure(e, "driver-resistance-sink");
+        close(2.5, src.value(), 1e-12, "estimated source");
+        close(10.0 / 6, snk.value(), 1e-12, "estimated sink");
+        assertEquals("estimated as V / I_source,peak", src.label());
+        assertEquals("estimated as V / I_sink,peak", snk.label());
+        assertTrue(figure(e, "gate-current-plateau-off").estimated());
+    }
+
+    @Test
+    void theFigureListCarriesTheDvDtFiguresOfABridge() {
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), bridge());
+        // V_th,min at the deciding 125 °C corner: 2 − 0.006·100 = 1.4 V (JunctionTemperature's Si coefficient, from memory)
+        Figure th = figure(f, "threshold-min-at-corner");
+        close(1.4, th.value(), 1e-12, "threshold");
+        assertEquals("V_th,min at 125 °C", th.label());
+        Figure dv = figure(f, "dv-dt");
+        close(2.7586, dv.value(), 1e-4, "dv/dt in V/ns"); // 48 V·(5 V/5.8 Ω)/15 nC
+        assertTrue(dv.label().startsWith("bus / the twin's turn-on plateau, 125 °C"), dv.label());
+        close(1.0513, figure(f, "dv-dt-allowed").value(), 1e-4, "allowed dv/dt in V/ns");
+
+        OperatingPoint.Spec given = bridge();
+        given.dvdt = 50e9;
+        Figure g = figure(shown(Parts.sw(), Parts.dr(), given), "dv-dt");
+        assertEquals(50, g.value(), 1e-9);
+        assertTrue(g.label().startsWith("as given"), g.label());
+        assertFalse(g.estimated());
+    }
+
+    @Test
+    void bootstrapInrushAndDutyLimitOfAHighSide() {
+        OperatingPoint.Spec o = Parts.op();
+        o.highSide = true;
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), o);
+        // REFERENCES §4: first charge (V_drive − V_F)/R_boot = (10 − 0.7)/2.2 Ω = 4.2273 A
+        close(4.2273, f.bootInrush, 1e-4, "inrush");
+        close(4.2273, figure(f, "bootstrap-inrush").value(), 1e-4, "inrush figure");
+        // the duty limit PairFigures solves (BootstrapBalanceTest checks it) is listed as it is
+        assertEquals(f.f.bootDutyMax(), figure(f, "bootstrap-duty-max").value(), 0.0);
+    }
+
+    @Test
+    void noInrushWhenTheBootstrapHasNoDroopToSpare() {
+        // UVLO,off 9 V and a 1 V diode: the capacitor charges to 10 − 1 = 9 V, exactly the floor (R_on specified at
+        // 4.5 V, below it): ΔV = 0 (REFERENCES §4), the bootstrap is not sized and its inrush not shown.
+        Parts.Sw s = Parts.sw();
+        s.rOnVgs = 4.5;
+        Parts.Dr d = Parts.dr();
+        d.uvloOn = 9.5;
+        d.uvloOff = 9.0;
+        OperatingPoint.Spec o = Parts.op();
+        o.highSide = true;
+        o.diodeDrop = 1.0;
+        ShownFigures f = shown(s, d, o);
+        assertEquals(0, f.f.bootDroop(), 0.0);
+        assertTrue(Double.isNaN(f.bootInrush), "inrush " + f.bootInrush);
+    }
+
+    @Test
+    void noAllowedDvDtAgainstAZeroThreshold() {
+        // V_th,min 0 V at the 25 °C corner: any injection reaches it; the allowed dv/dt is left out.
+        Parts.Sw s = Parts.sw();
+        s.vThMin = 0;
+        OperatingPoint.Spec o = bridge();
+        o.tj = 25.0;
+        ShownFigures f = shown(s, Parts.dr(), o);
+        assertEquals(0, f.f.vThSeen(), 0.0);
+        assertTrue(Double.isNaN(f.dvdtAllowed), "allowed " + f.dvdtAllowed);
+    }
 }
