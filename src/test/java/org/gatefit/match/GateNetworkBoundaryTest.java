@@ -286,4 +286,28 @@ class GateNetworkBoundaryTest {
     void aPartOfZeroIsRefused() {
         assertThrows(IllegalArgumentException.class, () -> new GateNetwork.Part("x", 0, "Ω", "r", "w"));
     }
+
+    @Test
+    void bootstrapResistorPackageByItsAveragePowerAndByItsPulse() {
+        // Package table (NetworkSizing, common practice / from memory): 0402 0.063 W, 0603 0.1 W; average ≤ 50 % of
+        // the rating, pulse ≤ 50× it.
+        Parts.Dr d = Parts.dr();
+        d.bootstrapDiode = false;
+        // Average-limited: four switches at 1 MHz. Q = 4·50 nC + 100 µA·1 µs = 200.1 nC (REFERENCES §4), ΔV 2.8 V →
+        // C_min 71.46 nF, 3× at 50 % left → 428.8 nF → E12 470 nF. Per refresh Q²/(2C) = 42.60 nJ, × 1 MHz =
+        // 42.6 mW: above 0402's 31.5 mW, within 0603's 50 mW; peak Q/(C·R) = 0.1935 A, pulse 82 mW.
+        OperatingPoint.Spec a = Parts.op();
+        a.highSide = true;
+        a.parallel = 4;
+        a.fSw = 1e6;
+        GateNetwork.Part ra = part(network(Parts.sw(), d, a), "bootstrap resistor");
+        assertTrue(ra.rating().startsWith("42.6 mW average, 194 mA peak per refresh → 0603 ("), ra.rating());
+        // Pulse-limited: one switch, R_boot 0.05 Ω. Q = 51 nC into 120 nF: peak Q/(C·R) = 8.5 A, pulse 8.5²·0.05 =
+        // 3.61 W: above 0402's 3.15 W, within 0603's 5 W.
+        OperatingPoint.Spec b = Parts.op();
+        b.highSide = true;
+        b.rBoot = 0.05;
+        GateNetwork.Part rb = part(network(Parts.sw(), d, b), "bootstrap resistor");
+        assertTrue(rb.rating().contains(", 8.5 A peak per refresh → 0603 ("), rb.rating());
+    }
 }

@@ -258,4 +258,60 @@ class PairFiguresBoundaryTest {
         // 0.9 + 0.2 is past 100 %: the same distance
         close(0.04649, f.bootDutyHeadroom(0.9, 0.2), 2e-4, "headroom past 100 %");
     }
+
+    @Test
+    void aKnownTwinsEdgeIsTakenAtEachCornerUnlessADvDtIsGiven() {
+        OperatingPoint.Spec o = Parts.op();
+        o.bridge = true;
+        o.twin = new OperatingPoint.Twin("HS1", 5e9, 1e9);
+        PairFigures f = figures(Parts.sw(), Parts.dr(), o);
+        // REFERENCES §8 injection, C_gd = 15 nC/48 V = 0.3125 nF, V = C_gd·dv/dt·R·(1 − e^(−t/(R·C_iss))):
+        // 25 °C, 5 V/ns through 4 Ω: 6.25·(1 − e^(−9.6/12)) = 3.442 V against 2 V (1.72×);
+        // 125 °C, 1 V/ns through 4.4 Ω: 1.375·(1 − e^(−48/13.2)) = 1.339 V against 1.4 V (0.96×): 25 °C decides.
+        assertEquals(25, f.dvdtCornerC(), 0.0);
+        assertEquals(5e9, f.slew(), 0.0);
+        close(3.442, f.vInduced(), 1e-3, "induced");
+        // A dv/dt given is judged as given, whatever the twin.
+        o.dvdt = 50e9;
+        assertEquals(50e9, figures(Parts.sw(), Parts.dr(), o).slew(), 0.0);
+    }
+
+    @Test
+    void theCornerNearerToTurningOnCountsTheOffLevel() {
+        Parts.Dr d = Parts.dr();
+        d.vNegMin = -10;
+        OperatingPoint.Spec o = Parts.op();
+        o.bridge = true;
+        o.vDriveNeg = -3.0;
+        o.tj = -55.0;
+        PairFigures f = figures(Parts.sw(), d, o);
+        // REFERENCES §8 injection (computed as in ShownFiguresTest): 25 °C 2.854 V against V_th,min 2 V,
+        // −55 °C (driver 0.68×, faster) 2.930 V against 2 + 0.006·80 = 2.48 V. Above the −3 V off level:
+        // (2.854 − 3)/2 = −0.073 and (2.930 − 3)/2.48 = −0.028: the cold corner is nearer to V_th,min.
+        assertEquals(-55, f.dvdtCornerC(), 0.0);
+        close(2.48, f.vThSeen(), 1e-12, "threshold");
+        close(2.9296, f.vInduced(), 1e-4, "induced");
+    }
+
+    @Test
+    void turnOffPlateauCurrentAtTheSlowCorner() {
+        Parts.Dr d = Parts.dr();
+        d.rSink = 0.5;
+        // REFERENCES §8: (V_pl − V_off)/(1.4·R_sink + R_g,off + R_g,int) = 5/(0.7 + 2 + 1) = 1.3514 A
+        close(1.3514, figures(Parts.sw(), d, Parts.op()).iPlOff(), 1e-4, "plateau current off");
+    }
+
+    @Test
+    void aGivenDvDtWithoutABusIsNoInjectionToCompute() {
+        for (Double bus : new Double[] {0.0, null}) {
+            OperatingPoint.Spec o = Parts.op();
+            o.bus = bus;
+            o.bridge = true;
+            o.dvdt = 50e9;
+            // The charge-consistent injection needs Q_gd over the bus swing (REFERENCES §8): no bus, no figure.
+            PairFigures f = figures(Parts.sw(), Parts.dr(), o);
+            assertTrue(Double.isNaN(f.vInduced()), "bus " + bus + ": " + f.vInduced());
+            assertEquals(50e9, f.slew(), 0.0);
+        }
+    }
 }

@@ -278,6 +278,24 @@ class ShownFiguresTest {
         // 1.4·0.5 + 1 = 1.7 Ω: 1.8908 Ω → E24 down 1.8 Ω; R_g up to the floor's E24 4.7 Ω.
         assertEquals("lower R_g,off to ≤ 1.8 Ω, raise R_g (turn-on) to ≥ 4.7 Ω to slow the edge, a deeper negative off"
                 + " level or a driver with a Miller clamp", f.dvdtFix());
+        // The dv/dt at which the 1.4·0.5 + 5 + 1 = 6.7 Ω path reaches 1.4 + 1.5 V: 1.9736 V/ns (computed).
+        close(1.9736e9, f.dvdtAllowed, 1e-4, "allowed dv/dt");
+    }
+
+    @Test
+    void aDriverShortOfThePlateauNeedStillHasADvDtFloorButNoWayToReachIt() {
+        Parts.Dr d = Parts.dr();
+        d.iSource = 0.4;
+        ShownFigures f = shown(Parts.sw(), d, bridge());
+        // 0.4 A < 0.45 A: top 0 Ω. The twin's edge at the 0.4 A rating, 48·0.4/15 nC = 1.28 V/ns, still lifts the
+        // off gate past 1.4 V; only a resistor that brings the plateau current below the rating slows it: 11.420 Ω
+        // (computed), searched up to 1000× the floor since the top gives no bound.
+        close(11.420, f.rgMin, 2e-4, "floor");
+        assertEquals(0, f.rgMax, 0.0);
+        assertEquals("the dv-dt rule (the twin's turn-on edge)", f.rgFloor);
+        // R_g,off: the holding path may be 2.4655 Ω at 1.28 V/ns (computed), less 1.4 + 1 Ω: 0.0655 Ω, said as the
+        // smallest E24 value offered, 0.1 Ω; no turn-on resistor within the (empty) range is offered.
+        assertEquals("lower R_g,off to ≤ 100 mΩ, a negative off level or a driver with a Miller clamp", f.dvdtFix());
     }
 
     @Test
@@ -444,5 +462,51 @@ class ShownFiguresTest {
         ShownFigures f = shown(s, Parts.dr(), o);
         assertEquals(0, f.f.vThSeen(), 0.0);
         assertTrue(Double.isNaN(f.dvdtAllowed), "allowed " + f.dvdtAllowed);
+    }
+
+    @Test
+    void withoutLoopInductanceThereIsNoCriticalResistanceOrDamping() {
+        OperatingPoint.Spec o = Parts.op();
+        o.loop = 0.0;
+        ShownFigures f = shown(Parts.sw(), Parts.dr(), o);
+        // R_crit = 2·√(L/C) and ζ = (R/2)·√(C/L) (REFERENCES §3) have no meaning at L = 0: left out, not 0.
+        assertTrue(Double.isNaN(f.rCrit), "critical " + f.rCrit);
+        assertTrue(Double.isNaN(f.zeta), "damping " + f.zeta);
+        assertTrue(Double.isNaN(f.rgMin), "floor " + f.rgMin);
+    }
+
+    /**
+     * A pair whose range is exact in binary: 25 °C (driver factor 1), R_source 0, R_g,int 0, drive-current
+     * margin 1, a 30 ns edge: the plateau needs 15 nC/30 ns = 0.5 A, the top is (10 − 5)/0.5 = 10 Ω exactly
+     * (REFERENCES §8); with C_iss 3 nF the damping floor is 0.7·2·√(L/3 nF) (REFERENCES §3).
+     */
+    private static ShownFigures exactRange(double loop) {
+        Parts.Sw s = Parts.sw();
+        s.rGInt = 0;
+        Parts.Dr d = Parts.dr();
+        d.rSource = 0;
+        OperatingPoint.Spec o = Parts.op();
+        o.tj = 25.0;
+        o.edge = 30e-9;
+        o.loop = loop;
+        return shown(s, d, o, margins(1, 0.10));
+    }
+
+    @Test
+    void aFloorThatIsItselfAnE24ValueIsRecommended() {
+        // L = 126.75 nH: R_crit = 2·√42.25 = 13 Ω, floor 0.7·13 = 9.1 Ω, an E24 value; aim max(9.1, 5) → 9.1 Ω
+        ShownFigures f = exactRange(126.75e-9);
+        assertEquals(9.1, f.rgMin, 1e-12);
+        assertEquals(10, f.rgMax, 0.0);
+        assertEquals(9.1, f.rgRecommended, 1e-12);
+    }
+
+    @Test
+    void aTopThatIsItselfAnE24ValueIsRecommended() {
+        // L = 147 nH: R_crit = 2·√49 = 14 Ω, floor 9.8 Ω; aim 9.8 → E24 nearest 10 Ω, exactly the top
+        ShownFigures f = exactRange(147e-9);
+        close(9.8, f.rgMin, 1e-12, "floor");
+        assertEquals(10, f.rgMax, 0.0);
+        assertEquals(10, f.rgRecommended, 1e-12);
     }
 }
