@@ -184,6 +184,25 @@ class PairFiguresBoundaryTest {
     }
 
     @Test
+    void aTurnOffLoopWithoutResistanceHasNoDelaysAndNoGatePowerSplitEither() {
+        // R_sink 0, R_g,off 0 and R_g,int unknown (0): the turn-off loop is 0 Ω (REFERENCES §1, §2 divide by it);
+        // the rated 6 A sink is the current.
+        Parts.Sw s = Parts.sw();
+        s.rGInt = Double.NaN;
+        Parts.Dr d = Parts.dr();
+        d.rSink = 0;
+        OperatingPoint.Spec o = Parts.op();
+        o.rGOff = 0.0;
+        PairFigures f = figures(s, d, o);
+        assertEquals(0, f.rOffTot(), 0.0);
+        assertEquals(6, f.iPkSnk(), 0.0);
+        assertTrue(Double.isNaN(f.pDriver()), "driver power " + f.pDriver());
+        ShownFigures shown = new ShownFigures(f);
+        assertTrue(Double.isNaN(shown.delayOff), "delay " + shown.delayOff);
+        assertTrue(Double.isNaN(shown.pGate), "gate power " + shown.pGate);
+    }
+
+    @Test
     void withoutABusThereIsNoSwitchNodeEdge() {
         for (Double bus : new Double[] {0.0, null}) {
             OperatingPoint.Spec o = Parts.op();
