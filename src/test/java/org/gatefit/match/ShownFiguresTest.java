@@ -509,4 +509,19 @@ class ShownFiguresTest {
         assertEquals(10, f.rgMax, 0.0);
         assertEquals(10, f.rgRecommended, 1e-12);
     }
+
+    @Test
+    void noTurnOffResistorIsOfferedAgainstAZeroThreshold() {
+        // V_th,min 0 V at 25 °C and a 0 V off level: the dv-dt limit 0.7·0 − 0 = 0 V leaves no holding resistance
+        // to offer, even with a 0 Ω sink and no R_g,int (the path would be 0 Ω, nothing to lower).
+        Parts.Sw s = Parts.sw();
+        s.vThMin = 0;
+        s.rGInt = Double.NaN;
+        Parts.Dr d = Parts.dr();
+        d.rSink = 0;
+        OperatingPoint.Spec o = bridge();
+        o.tj = 25.0;
+        ShownFigures f = shown(s, d, o);
+        assertEquals("a negative off level or a driver with a Miller clamp", f.dvdtFix());
+    }
 }
