@@ -231,6 +231,11 @@ final class ListParts implements PartSource {
         v.put("c_iss_pf", num(s.cIss * 1e12));
         v.put("c_rss_pf", num(s.cRss * 1e12));
         v.put("r_g_int_ohm", num(s.rGInt));
+        v.put("v_gate_on_max_v", num(s.vGateOnMax));
+        v.put("v_gate_off_min_v", num(s.vGateOffMin));
+        v.put("t_sc_us", num(s.tSc * 1e6));
+        v.put("t_d_off_ns", num(s.tDOff * 1e9));
+        v.put("t_f_ns", num(s.tF * 1e9));
         v.values().removeIf(java.util.Objects::isNull);
         return new Row(Kind.SWITCH, s.pn, "test", 2, v, Map.of());
     }

@@ -23,94 +23,14 @@ final class StageSheets {
     private StageSheets() {
     }
 
-    /** A catalog switch row holding the figures of {@code s} (NaN left out, as the importer leaves it out). */
+    /** A catalog switch row holding the figures of {@code s} ({@link ListParts#switchRow}). */
     static Row switchRow(Parts.Sw s) {
-        Map<String, Object> v = new LinkedHashMap<>();
-        v.put("part_number", s.pn);
-        v.put("maker", "Testmaker");
-        v.put("package", "PKG");
-        v.put("pinout", "PKG");
-        v.put("lifecycle", s.lifecycle);
-        v.put("stock", s.stock);
-        v.put("unit_price", s.price);
-        v.put("technology", s.tech.id());
-        v.put("channel", s.nChannel ? "n" : "p");
-        num(v, "v_block_v", s.vBlock, 1);
-        num(v, "i_cont_a", s.iCont, 1);
-        num(v, "r_on_mohm", s.rOn, 1e3);
-        num(v, "r_on_vgs_v", s.rOnVgs, 1);
-        num(v, "v_ce_sat_v", s.vCeSat, 1);
-        num(v, "v_th_min_v", s.vThMin, 1);
-        num(v, "v_th_max_v", s.vThMax, 1);
-        num(v, "v_gs_max_v", s.vGsMax, 1);
-        num(v, "v_gs_min_v", s.vGsMin, 1);
-        num(v, "v_gate_on_v", s.vGateOn, 1);
-        num(v, "v_gate_off_v", s.vGateOff, 1);
-        num(v, "q_g_nc", s.qG, 1e9);
-        num(v, "q_g_vgs_v", s.qGVgs, 1);
-        num(v, "q_gs_nc", s.qGs, 1e9);
-        num(v, "q_gd_nc", s.qGd, 1e9);
-        num(v, "v_plateau_v", s.vPlateau, 1);
-        num(v, "c_iss_pf", s.cIss, 1e12);
-        num(v, "c_rss_pf", s.cRss, 1e12);
-        num(v, "r_g_int_ohm", s.rGInt, 1);
-        num(v, "v_gate_on_max_v", s.vGateOnMax, 1);
-        num(v, "v_gate_off_min_v", s.vGateOffMin, 1);
-        num(v, "t_sc_us", s.tSc, 1e6);
-        num(v, "t_d_off_ns", s.tDOff, 1e9);
-        num(v, "t_f_ns", s.tF, 1e9);
-        return new Row(Kind.SWITCH, s.pn, "switches.csv", 2, v, Map.of());
+        return ListParts.switchRow(s);
     }
 
-    /** A catalog driver row holding the figures of {@code d}. */
+    /** A catalog driver row holding the figures of {@code d} ({@link ListParts#driverRow}). */
     static Row driverRow(Parts.Dr d) {
-        Map<String, Object> v = new LinkedHashMap<>();
-        v.put("part_number", d.pn);
-        v.put("maker", "Testmaker");
-        v.put("package", "PKG");
-        v.put("pinout", "PKG");
-        v.put("lifecycle", d.lifecycle);
-        v.put("stock", d.stock);
-        v.put("unit_price", d.price);
-        v.put("topology", d.topology.id());
-        if (d.channels > 0) {
-            v.put("channels", (long) d.channels);
-        }
-        v.put("input_polarity", String.join(";", d.inverting.stream().map(i -> i ? "inverting" : "non-inverting").toList()));
-        num(v, "i_source_a", d.iSource, 1);
-        num(v, "i_sink_a", d.iSink, 1);
-        num(v, "r_source_ohm", d.rSource, 1);
-        num(v, "r_sink_ohm", d.rSink, 1);
-        num(v, "v_supply_min_v", d.vSupplyMin, 1);
-        num(v, "v_supply_max_v", d.vSupplyMax, 1);
-        num(v, "uvlo_on_v", d.uvloOn, 1);
-        num(v, "uvlo_off_v", d.uvloOff, 1);
-        num(v, "v_ih_v", d.vIh, 1);
-        num(v, "v_il_v", d.vIl, 1);
-        num(v, "v_in_max_v", d.vInMax, 1);
-        num(v, "v_offset_max_v", d.vOffsetMax, 1);
-        yesNo(v, "bootstrap_diode", d.bootstrapDiode);
-        num(v, "i_qbs_ua", d.iQbs, 1e6);
-        num(v, "v_neg_min_v", d.vNegMin, 1);
-        num(v, "t_prop_ns", d.tProp, 1e9);
-        num(v, "t_match_ns", d.tMatch, 1e9);
-        yesNo(v, "miller_clamp", d.millerClamp);
-        num(v, "isolation_vrms", d.isolationVrms, 1);
-        num(v, "p_max_w", d.pMax, 1);
-        num(v, "t_prop_max_ns", d.tPropMax, 1e9);
-        return new Row(Kind.DRIVER, d.pn, "drivers.csv", 2, v, Map.of());
-    }
-
-    private static void num(Map<String, Object> v, String column, double si, double toUnit) {
-        if (!Double.isNaN(si)) {
-            v.put(column, si * toUnit);
-        }
-    }
-
-    private static void yesNo(Map<String, Object> v, String column, Boolean b) {
-        if (b != null) {
-            v.put(column, b ? "yes" : "no");
-        }
+        return ListParts.driverRow(d);
     }
 
     /**
@@ -158,40 +78,11 @@ final class StageSheets {
         return StageCheck.run("stages.csv", stages, bom, lookup(drivers), lookup(switches), Margins.DEFAULT);
     }
 
-    /** The parts as a catalog ({@link PartSource}) that looks parts up by part number, nothing more. */
+    /** The parts as a catalog ({@link PartSource}, {@link ListParts}). */
     static PartSource parts(List<Row> drivers, List<Row> switches) {
-        return new PartSource() {
-            @Override
-            public Optional<Row> get(Kind kind, String partNumber) {
-                return lookup(kind == Kind.DRIVER ? drivers : switches).apply(partNumber);
-            }
-
-            @Override
-            public int count(Kind kind) {
-                return (kind == Kind.DRIVER ? drivers : switches).size();
-            }
-
-            @Override
-            public boolean isEmpty() {
-                return drivers.isEmpty() && switches.isEmpty();
-            }
-
-            @Override
-            public String describe() {
-                return "test parts";
-            }
-
-            @Override
-            public long scan(Kind kind, Prefilter skip, java.util.function.Consumer<Row> sink) {
-                throw new UnsupportedOperationException("not needed by check");
-            }
-
-            @Override
-            public <S extends java.util.function.Consumer<org.gatefit.catalog.RowCursor>> List<S> scanColumns(Kind kind,
-                    Prefilter skip, int threads, java.util.function.Supplier<S> sinks) {
-                throw new UnsupportedOperationException("not needed by check");
-            }
-        };
+        List<Row> all = new java.util.ArrayList<>(drivers);
+        all.addAll(switches);
+        return new ListParts(all);
     }
 
     /** The check of {@code rule} of a stage. */
