@@ -25,31 +25,9 @@ import org.junit.jupiter.api.Test;
  */
 class ReplacementEngineTest {
 
+    /** The original switch of {@link ReplacementTest} with {@code changes}. */
     private static Row sw(String pn, Map<String, Object> changes) {
-        Map<String, Object> v = new LinkedHashMap<>();
-        v.put("part_number", pn);
-        v.put("maker", "Testmaker");
-        v.put("package", "TSTPAK-8");
-        v.put("pinout", "TP8");
-        v.put("lifecycle", "active");
-        v.put("stock", 1000L);
-        v.put("unit_price", 2.0);
-        v.put("technology", "si-mosfet");
-        v.put("channel", "n");
-        v.put("v_block_v", 100.0);
-        v.put("i_cont_a", 200.0);
-        v.put("r_on_mohm", 3.0);
-        v.put("r_on_vgs_v", 10.0);
-        v.put("v_th_min_v", 2.0);
-        v.put("v_th_max_v", 4.0);
-        v.put("v_gs_max_v", 20.0);
-        v.put("v_gs_min_v", -20.0);
-        v.put("q_g_nc", 100.0);
-        v.put("q_g_vgs_v", 10.0);
-        v.put("c_iss_pf", 6000.0);
-        v.putAll(changes);
-        v.values().removeIf(java.util.Objects::isNull);
-        return new Row(Kind.SWITCH, pn, "test", 2, v, Map.of());
+        return ReplacementTest.sw(pn, changes);
     }
 
     private static Replacement.Result search(List<Row> catalog, Row original, int top, boolean obsolete,

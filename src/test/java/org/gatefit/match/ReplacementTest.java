@@ -104,7 +104,8 @@ class ReplacementTest {
 
     // ---------------------------------------------------------------- run()
 
-    private static Row sw(String pn, Map<String, Object> changes) {
+    /** A catalog switch row (an n-channel Si MOSFET, invented) with {@code changes}, a null value removing the column. */
+    static Row sw(String pn, Map<String, Object> changes) {
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("part_number", pn);
         v.put("maker", "Testmaker");
