@@ -234,6 +234,9 @@ class HighSideRuleTest {
         verdict(c, Verdict.UNKNOWN, Score.UNKNOWN);
         assertNull(c.notGiven());
         says(c, "check its working voltage against the 100 V bus");
+        Check noBus = check(Rule.HIGH_SIDE, S0, d -> d.topology = Topology.ISOLATED, HIGH.andThen(o -> o.bus = null));
+        verdict(noBus, Verdict.UNKNOWN, Score.UNKNOWN);
+        says(noBus, "check its working voltage against the bus");
     }
 
     // ------------------------------------------------------------------ isolated: withstand only
