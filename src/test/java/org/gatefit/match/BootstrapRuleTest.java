@@ -87,6 +87,18 @@ class BootstrapRuleTest {
     }
 
     @Test
+    void aDutyTooHighNamesTheCapacitanceLeftAtDcBias() {
+        // 99.9 % duty leaves 10 ns a cycle to recharge; the capacitor is derated to 50 % at its DC bias (boot-cap-bias)
+        Check c = boot(S0, RuleCase.D0, o -> o.dutyMax = 0.999);
+        verdict(c, Verdict.FAIL, 0);
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("recharge ([0-9.]+) nF \\(([0-9.]+) nF at DC bias\\)")
+                .matcher(c.message());
+        org.junit.jupiter.api.Assertions.assertTrue(m.find(), c.message());
+        org.junit.jupiter.api.Assertions.assertEquals(Double.parseDouble(m.group(1)) / 2, Double.parseDouble(m.group(2)),
+                Double.parseDouble(m.group(1)) * 0.01, c.message());
+    }
+
+    @Test
     void aDroopOfExactlyZeroLeavesNoHeadroom() {
         // +7.5 V, V_F 1 V: 6.5 V ≤ full enhancement 10 V, so the floor is UVLO,off 6.5 V: droop 0
         Check c = boot(S0, RuleCase.D0, o -> {

@@ -102,8 +102,8 @@ class DriveCurrentRuleTest {
 
     @Test
     void aThinTurnOffAsksForASmallerTurnOffResistor() {
-        // +10/−2 V at 25 °C, R_g 1 Ω on, 2 Ω off, sink 6 Ω: I_off = (5 + 2)/(6 + 2 + 1) = 778 mA; I_on = 5/(2 + 1 + 1)
-        // = 1.25 A capped at the 0.8 A source rating. Edge 25 ns: 15 nC/25 ns = 0.6 A, 0.9 A with 1.5×: ratio 1.296 →
+        // +10/−2 V at 25 °C, R_g 0.5 Ω on, 2 Ω off, sink 6 Ω: I_off = (5 + 2)/(6 + 2 + 1) = 778 mA; I_on = 5/(2 + 0.5
+        // + 1) = 1.43 A capped at the 0.8 A source rating. Edge 25 ns: 15 nC/25 ns = 0.6 A, 0.9 A with 1.5×: ratio 1.296 →
         // (1.296 − 1)/0.5. R_g,off ≤ 7/0.9 − 6 − 1 = 0.778 Ω → E24 (IEC 60062) 750 mΩ; the 6 A sink allows it.
         Check c = check(Rule.DRIVE_CURRENT, S0, d -> {
             d.iSource = 0.8;
@@ -113,7 +113,7 @@ class DriveCurrentRuleTest {
             o.tj = 25.0;
             o.edge = 25e-9;
             o.vDriveNeg = -2.0;
-            o.rG = 1.0;
+            o.rG = 0.5;
             o.rGOff = 2.0;
         });
         verdict(c, Verdict.WARN, warn((7.0 / 9 / 0.6 - 1) / 0.5));

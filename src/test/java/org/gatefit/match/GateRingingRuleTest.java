@@ -117,7 +117,8 @@ class GateRingingRuleTest {
         // Fix: the overshoot allowed is (12.5·0.9 − 10)/10 = 0.125; ζ = −ln 0.125/√(π² + ln² 0.125) = 0.5519
         // (inverse of the overshoot formula); R = 2ζ√(L/C) = 2.208 Ω, less the 2 Ω driver: R_g ≥ 0.208 Ω → E24
         // (IEC 60062) 220 mΩ; or L ≤ (R/(2ζ))²·C = (2/1.1039)²·4 nF = 13.1 nH.
-        Check c = ring(-20, 12.5);
+        // (R_g,off 1 Ω changes only the turn-off side: ζ_off 0.75; the inductance bound uses the turn-on loop's 2 Ω)
+        Check c = check(Rule.GATE_RINGING, LOOP_S.andThen(s -> s.vGsMax = 12.5), LOOP_D, LOOP_O.andThen(o -> o.rGOff = 1.0));
         verdict(c, Verdict.WARN, warn((12.5 - PEAK) / 12.5 / 0.1));
         says(c, "against V_GS -20 V / 12.5 V, inside the 10 % headroom — raise R_g to ≥ 220 mΩ per switch or cut the"
                 + " gate-loop inductance to ≤ 13.1 nH (ζ ≥ 0.552)");
@@ -144,6 +145,14 @@ class GateRingingRuleTest {
         Check c = ring(-20, 11);
         verdict(c, Verdict.FAIL, 0);
         says(c, "past V_GS,max 11 V — the on level itself leaves no headroom under V_GS,max (see gate-voltage)");
+    }
+
+    @Test
+    void anOnLevelExactlyAtTheHeadroomLimitLeavesNoOvershoot() {
+        // +9 V, V_GS,max 10 V: 10·0.9 = 9 V, no overshoot allowed; the peak 9 + 9·0.163 = 10.47 V is past 10 V
+        Check c = check(Rule.GATE_RINGING, LOOP_S.andThen(s -> s.vGsMax = 10), LOOP_D, LOOP_O.andThen(o -> o.vDrive = 9.0));
+        verdict(c, Verdict.FAIL, 0);
+        says(c, "peaks at 10.5 V", "past V_GS,max 10 V — the on level itself leaves no headroom under V_GS,max");
     }
 
     @Test

@@ -285,6 +285,28 @@ class HighSideRuleTest {
     }
 
     @Test
+    void aThreefoldIsolationMarginScalesTheWarning() {
+        // isolation margin 3×: want 144 V; 96 V withstand on 48 V → (96 − 48)/(48·(3 − 1)) = 0.5
+        Margins m = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 3.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100, 0.25);
+        Check c = check(Rule.HIGH_SIDE, m, S0, d -> {
+            d.topology = Topology.ISOLATED;
+            d.isolationVrms = 96;
+            d.cmti = 150e9;
+        }, high(48, 4e9));
+        verdict(c, Verdict.WARN, warn(0.5));
+        says(c, "isolation 96 V rms is less than 3× the 48 V bus");
+    }
+
+    @Test
+    void aThreefoldCmtiMarginScalesTheWarning() {
+        // CMTI margin 3×: 8 V/ns against 4 V/ns → (8 − 4)/(4·(3 − 1)) = 0.5; pick ≥ 12 V/ns
+        Margins m = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7, 3.0, 0.15, 0.5, 100, 0.25);
+        Check c = check(Rule.HIGH_SIDE, m, S0, d -> d.cmti = 8e9, high(48, 4e9));
+        verdict(c, Verdict.WARN, warn(0.5));
+        says(c, "CMTI 8 V/ns is less than 3× the 4 V/ns switch-node slew", "CMTI ≥ 12 V/ns");
+    }
+
+    @Test
     void aWithstandAboveTwiceTheBusScoresItsExcess() {
         // 120/96 − 1 = 0.25
         verdict(withstand(120, 48), Verdict.PASS, pass(0.25));

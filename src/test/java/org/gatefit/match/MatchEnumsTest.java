@@ -71,6 +71,7 @@ class MatchEnumsTest {
     @Test
     void lifecyclesReadTheCatalogsWords() {
         assertSame(Lifecycle.NRND, Lifecycle.of("nrnd"));
+        assertEquals("ltb", Lifecycle.LTB.toString());
         assertSame(Lifecycle.UNKNOWN, Lifecycle.of(null));
         assertThrows(IllegalArgumentException.class, () -> Lifecycle.of("eol"));
     }

@@ -77,6 +77,18 @@ class UvloRuleTest {
     }
 
     @Test
+    void aTwoVoltHeadroomScalesTheWarning() {
+        // uvlo-headroom 2 V: 10 V against UVLO rising 9 V → (10 − 9)/2 = 0.5
+        Margins m = new Margins(1.5, 0.10, 2.0, 0.1, 0.20, 2.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100, 0.25);
+        Check c = check(Rule.UVLO, m, S0, d -> {
+            d.uvloOn = 9;
+            d.uvloOff = 8.5;
+        }, RuleCase.O0);
+        verdict(c, Verdict.WARN, warn(0.5));
+        says(c, "the 10 V supply is within 2 V of UVLO rising 9 V");
+    }
+
+    @Test
     void aUvloOneHeadroomBelowTheSupplyPassesBare() {
         // (10 − 9 − 1)/10 = 0
         Check c = uvlo(9, 8.5);
