@@ -65,6 +65,18 @@ class DriverPowerRuleTest {
     }
 
     @Test
+    void aDissipationExactlyAtTheMarginPassesBare() {
+        // driver-power margin 0.5: P_max = 2·P puts the allowed 0.5·P_max exactly at P → excess 0
+        Margins half = new Margins(1.5, 0.10, 1.0, 0.1, 0.20, 2.0, 0.5, 0.7, 2.0, 0.15, 0.5, 100, 0.25);
+        double p = power(1).compared().get(0).value();
+        Check c = check(Rule.DRIVER_POWER, half, SW, d -> {
+            d.pMax = 2 * p;
+            d.channels = 1;
+        }, o -> o.rG = 3.0);
+        verdict(c, Verdict.PASS, pass(0));
+    }
+
+    @Test
     void aLimitHalfWayWarnsHalfWay() {
         // P_max = P/0.85: (P/0.85 − P)/(P/0.85 − 0.7·P/0.85) = 0.15/0.3 = 0.5
         verdict(power(P / 0.85), Verdict.WARN, warn(0.5));

@@ -86,6 +86,40 @@ class GateRingingRuleTest {
     }
 
     @Test
+    void aCriticallyDampedTurnOffHasNoUndershootEvenNearTheLimit() {
+        // ζ_off = 1 (4 Ω sink): the gate settles at the −5.5 V off level, which is negative-bias's question (within
+        // 10 % of −6 V); ζ_on = 0.5: peak 10 + 15.5·0.163 = 12.53 V, room (20 − 12.53)/20 = 0.37 ≥ 0.1
+        Check c = check(Rule.GATE_RINGING, LOOP_S.andThen(s -> s.vGsMin = -6), LOOP_D.andThen(d -> d.rSink = 4),
+                LOOP_O.andThen(o -> o.vDriveNeg = -5.5));
+        verdict(c, Verdict.PASS, 1.0);
+        says(c, "ζ 0.5 on and 1 off", "does not undershoot on turn-off");
+    }
+
+    @Test
+    void withoutHeadroomAPeakAtTheLimitStillPasses() {
+        // gate headroom 0: the peak exactly at V_GS,max leaves room 0 = the headroom: a pass, scored 1 (nothing to scale)
+        Margins m = new Margins(1.5, 0, 1.0, 0.1, 0.20, 2.0, 0.7, 0.7, 2.0, 0.15, 0.5, 100, 0.25);
+        Check c = check(Rule.GATE_RINGING, m, LOOP_S.andThen(s -> s.vGsMax = PEAK), LOOP_D, LOOP_O);
+        verdict(c, Verdict.PASS, 1.0);
+    }
+
+    @Test
+    void aTieBetweenPeakAndTroughNamesTheTurnOnResistor() {
+        // ±5 V against ±7 V: the peak 5 + 10·0.163 and the trough −5 − 10·0.163 leave the same room
+        // (7 − 6.63)/7 = 0.053; the turn-on side is named first
+        Check c = check(Rule.GATE_RINGING, LOOP_S.andThen(s -> {
+            s.vGsMax = 7;
+            s.vGsMin = -7;
+        }), LOOP_D, LOOP_O.andThen(o -> {
+            o.vDrive = 5.0;
+            o.vDriveNeg = -5.0;
+        }));
+        verdict(c, Verdict.WARN, warn((7 - (5 + 10 * OS)) / 7 / 0.1));
+        says(c, "— raise R_g to ≥ ");
+        saysNot(c, "R_g,off");
+    }
+
+    @Test
     void anOnLevelAtTheLimitIsLeftToGateVoltage() {
         // V_GS,max 10 V = the on level: the peak's room is gate-voltage's question; the trough's 0.918 decides
         verdict(ring(-20, 10), Verdict.PASS, 1.0);

@@ -75,6 +75,11 @@ class QuestionFiguresTest {
         assertEquals(22.5, Question.specVoltage(sic.build()), 0);
         sic.qGVgs = 22.6;
         assertEquals(18, Question.specVoltage(sic.build()), 0);
+        // a 0 V recommended off level is no bipolar swing: Q_g over 10 V stays over 10 V, not the 10.4 V on level
+        Parts.Sw si = Parts.sw();
+        si.vGateOn = 10.4;
+        si.vGateOff = 0;
+        assertEquals(10, Question.specVoltage(si.build()), 0);
     }
 
     @Test
