@@ -117,6 +117,16 @@ class DvDtRuleTest {
     }
 
     @Test
+    void aZeroBusIsTheAskersOpenQuestion() {
+        Check c = check(Rule.DV_DT, s -> { }, d -> { }, o -> {
+            o.bridge = true;
+            o.bus = 0.0;
+        });
+        verdict(c, Verdict.UNKNOWN, Score.OPEN);
+        assertEquals("bus", c.notGiven());
+    }
+
+    @Test
     void aClampHoldsTheGateThroughItsOwnPath() {
         // with a Miller clamp the path skips R_g,off: 1 + 1 = 2 Ω → 1 V
         Check c = check(Rule.DV_DT, HALF, s -> {
