@@ -61,11 +61,11 @@ final class ProtectionRule extends PairRule {
         if (!Double.isNaN(r.tDesat()) && !Double.isNaN(s.ratings().tSc())) {
             cmp.add(new Comparison("detection time", r.tDesat(), "<", s.ratings().tSc(), "s"));
         }
-        String stage = "a " + s.technology() + " on " + Eng.of(bus, "V");
+        String stage = article(s.technology()) + " on " + Eng.of(bus, "V");
         String soft = Boolean.TRUE.equals(r.softOff()) ? ", with soft turn-off" : Boolean.FALSE.equals(r.softOff())
                 ? ", without soft turn-off (a hard turn-off of a short-circuit current overshoots the collector)" : "";
         return switch ((Why) why) {
-            case NOT_EXPECTED -> new Worded("a " + s.technology() + " is not expected to rely on desaturation detection here"
+            case NOT_EXPECTED -> new Worded(article(s.technology()) + " is not expected to rely on desaturation detection here"
                     + " (protect it by current sensing if the design needs it)");
             case LOW_BUS -> new Worded(stage + ", at or below the " + Eng.of(f.m().protectionBus(), "V")
                     + " above which short-circuit detection is expected", cmp);
@@ -84,5 +84,11 @@ final class ProtectionRule extends PairRule {
             case PROTECTED -> new Worded("this driver detects desaturation within " + Eng.of(r.tDesat(), "s") + soft
                     + ", inside the switch's " + Eng.of(s.ratings().tSc(), "s") + " withstand time", cmp);
         };
+    }
+
+    /** The technology with its indefinite article: "an igbt", "a sic-mosfet". */
+    private static String article(Technology t) {
+        String id = t.toString();
+        return ("aeiou".indexOf(id.charAt(0)) >= 0 ? "an " : "a ") + id;
     }
 }

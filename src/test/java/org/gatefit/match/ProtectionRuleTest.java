@@ -41,7 +41,7 @@ class ProtectionRuleTest {
     void aBusAtTheProtectionLimitNeedsNoDetection() {
         Check c = igbt(100, d -> { });
         verdict(c, Verdict.PASS, 1.0);
-        says(c, "a igbt on 100 V, at or below the 100 V above which short-circuit detection is expected");
+        says(c, "an igbt on 100 V, at or below the 100 V above which short-circuit detection is expected");
     }
 
     @Test
@@ -88,6 +88,6 @@ class ProtectionRuleTest {
     void aDriverWithoutDetectionWarns() {
         Check c = igbt(400, d -> d.desat = false);
         verdict(c, Verdict.WARN, warn(0.3));
-        says(c, "a igbt on 400 V should be protected against short circuits, but this driver has no desaturation");
+        says(c, "an igbt on 400 V should be protected against short circuits, but this driver has no desaturation");
     }
 }

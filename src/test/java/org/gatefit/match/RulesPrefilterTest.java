@@ -57,7 +57,7 @@ class RulesPrefilterTest {
         assertTrue(lines.contains("skip topology = half-bridge and v_offset_max_v < 48 (high-side fails)"), lines::toString);
         assertTrue(lines.contains("skip topology = isolated and v_iorm_v < 48 (high-side fails)"), lines::toString);
         assertTrue(lines.contains("skip v_neg_min_v > -5 (negative-bias fails)"), lines::toString);
-        assertTrue(lines.contains("skip input_polarity without a inverting channel (polarity fails)"), lines::toString);
+        assertTrue(lines.contains("skip input_polarity without an inverting channel (polarity fails)"), lines::toString);
     }
 
     @Test
