@@ -218,4 +218,14 @@ class DriverPartTest {
         assertEquals(want.topology(), got.topology());
         assertEquals(want.inverting(), got.inverting());
     }
+
+    @Test
+    void aSwitchRowsStockIsReadAndAMissingOneIsUnknown() {
+        // The catalog's stock column (catalog-schema: an integer count; absent = unknown, -1 in SwitchPart).
+        Parts.Sw sw = Parts.sw();
+        sw.stock = 7;
+        assertEquals(7, SwitchPart.of(ListParts.switchRow(sw)).stock());
+        sw.stock = -1;
+        assertEquals(-1, SwitchPart.of(ListParts.switchRow(sw)).stock());
+    }
 }

@@ -67,4 +67,12 @@ class BootstrapTest {
                 () -> Bootstrap.recommended(1e-7, 0.5, ESeries.E12)).getMessage()
                 .startsWith("expected safety factor in [1.0, "));
     }
+
+    @Test
+    void withoutOffTimeTheCapacitorIsNeverRefreshed() {
+        // Charge balance (REFERENCES.md §9): with no off time the capacitor gets no charge back, so no
+        // level is held — through a bootstrap resistor or none, with or without a charge per cycle.
+        assertEquals(Double.NEGATIVE_INFINITY, Bootstrap.steadyLowest(12, 0, 1e-6, 50e-9, 0, 0));
+        assertEquals(Double.NEGATIVE_INFINITY, Bootstrap.steadyLowest(12, 1, 1e-6, 0, 0, 0));
+    }
 }

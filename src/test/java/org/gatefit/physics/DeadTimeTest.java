@@ -28,4 +28,13 @@ class DeadTimeTest {
                 assertThrows(IllegalArgumentException.class,
                         () -> DeadTime.minimum(1e-9, 1e-9, 1e-9, -1e-9)).getMessage());
     }
+
+    @Test
+    void aSegmentThatDoesNotMoveTakesNoTimeAndAPlateauAtQgsVoltageIsRefused() {
+        // First-order RC, t = R·C·ln((V_target − V_from)/(V_target − V_to)) (REFERENCES.md §1): from a
+        // level to itself ln 1 = 0.
+        assertEquals(0.0, DeadTime.rcSegment(5, 3e-9, 10, 2, 2));
+        // The charge above the plateau is spread over V_spec − V_plateau, which must be positive.
+        assertThrows(IllegalArgumentException.class, () -> DeadTime.capacitanceAbovePlateau(50e-9, 15e-9, 15e-9, 5, 5));
+    }
 }

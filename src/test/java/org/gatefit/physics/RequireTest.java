@@ -45,4 +45,15 @@ class RequireTest {
         assertTrue(Require.given(0));
         assertFalse(Require.given(Double.NaN));
     }
+
+    @Test
+    void theLargestFiniteNumbersAreFinite() {
+        // Double.MAX_VALUE is finite (IEEE 754-2008 §3.4: the largest finite binary64 number), so the
+        // sign checks accept it; only the infinities are refused.
+        assertEquals(Double.MAX_VALUE, Require.nonNegative("x", "", Double.MAX_VALUE));
+        assertEquals(-Double.MAX_VALUE, Require.nonPositive("x", "", -Double.MAX_VALUE));
+        assertEquals(Double.MAX_VALUE, Require.positive("x", "", Double.MAX_VALUE));
+        assertThrows(IllegalArgumentException.class, () -> Require.nonNegative("x", "", Double.POSITIVE_INFINITY));
+        assertThrows(IllegalArgumentException.class, () -> Require.nonPositive("x", "", Double.NEGATIVE_INFINITY));
+    }
 }
